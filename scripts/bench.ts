@@ -1,0 +1,1 @@
+console.log("nothing to benchmark yet: the scale issue adds it");

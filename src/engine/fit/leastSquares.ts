@@ -1,0 +1,99 @@
+import { type ColumnMajorMatrix, columnView, stableNorm } from '../linalg/columnMajor';
+import { applyQ, applyQTranspose, householderQr, type QrFactorization } from '../linalg/householderQr';
+import { invertUpper, solveUpper } from '../linalg/triangular';
+import type { WeightedDesign } from './design';
+
+/**
+ * A column whose part orthogonal to the earlier columns is below this fraction of its own norm
+ * is treated as a combination of them. It sits far below what ill-conditioned but genuine
+ * designs reach (NIST Filip's x¹⁰ column keeps 5e-8 of its norm after unit scaling) and above
+ * the rounding noise of an exact combination, which grows like √n·ε with the number of rows.
+ */
+export function aliasTolerance(rows: number): number {
+  return 1e-13 * Math.max(1, Math.sqrt(rows / 100));
+}
+
+/**
+ * Residuals no larger than this fraction of ‖y‖ are indistinguishable from the rounding of the
+ * data themselves; the fit is then exact and σ̂ is reported as 0 rather than as noise.
+ */
+export const PERFECT_FIT_TOLERANCE = 1e-14;
+
+/**
+ * Least squares of the weighted design by Householder QR of its unit-norm-scaled columns.
+ * Everything is kept in scaled units (columns divided by `columnScales`, y by `yScale`) so that
+ * data near 1e±300 neither overflow nor underflow; callers convert back at the last step.
+ */
+export interface LeastSquaresSolution {
+  design: WeightedDesign;
+  qr: QrFactorization;
+  columnScales: Float64Array;
+  yScale: number;
+  /** Coefficients in the data's units; NaN for aliased columns. */
+  coefficients: Float64Array;
+  /** R⁻¹ of the scaled, accepted columns (row-major rank × rank). */
+  rInverse: Float64Array;
+  /** RSS / yScale². */
+  scaledRss: number;
+  perfectFit: boolean;
+  /** Unweighted y − ŷ and ŷ, in the data's units. */
+  residuals: Float64Array;
+  fitted: Float64Array;
+}
+
+export function solveLeastSquares(design: WeightedDesign): LeastSquaresSolution {
+  const { matrix, y } = design;
+  const n = matrix.rows;
+  const columnScales = new Float64Array(matrix.cols);
+  const scaled: ColumnMajorMatrix = { rows: n, cols: matrix.cols, data: new Float64Array(matrix.data.length) };
+  for (let j = 0; j < matrix.cols; j++) {
+    const col = columnView(matrix, j);
+    const s = stableNorm(col);
+    columnScales[j] = s > 0 ? s : 1;
+    const target = columnView(scaled, j);
+    for (let i = 0; i < n; i++) target[i] = col[i] / columnScales[j];
+  }
+  const yNorm = stableNorm(y);
+  const yScale = yNorm > 0 ? yNorm : 1;
+
+  const qr = householderQr(scaled, aliasTolerance(n));
+  const rank = qr.accepted.length;
+  const qty = Float64Array.from(y, (v) => v / yScale);
+  applyQTranspose(qr, qty);
+
+  const solution = qty.slice(0, rank);
+  solveUpper(qr.r, rank, solution);
+  const coefficients = new Float64Array(matrix.cols).fill(Number.NaN);
+  qr.accepted.forEach((col, a) => {
+    coefficients[col] = (solution[a] * yScale) / columnScales[col];
+  });
+
+  let scaledRss = 0;
+  for (let i = rank; i < n; i++) scaledRss += qty[i] * qty[i];
+  const perfectFit = Math.sqrt(scaledRss) <= PERFECT_FIT_TOLERANCE;
+  if (perfectFit) scaledRss = 0;
+
+  const residualPart = new Float64Array(n);
+  if (!perfectFit) for (let i = rank; i < n; i++) residualPart[i] = qty[i];
+  applyQ(qr, residualPart);
+  const residuals = new Float64Array(n);
+  const fitted = new Float64Array(n);
+  for (let i = 0; i < n; i++) {
+    const w = design.rootWeights === undefined ? 1 : design.rootWeights[i];
+    residuals[i] = (residualPart[i] * yScale) / w;
+    fitted[i] = design.response[i] - residuals[i];
+  }
+
+  return {
+    design,
+    qr,
+    columnScales,
+    yScale,
+    coefficients,
+    rInverse: invertUpper(qr.r, rank),
+    scaledRss,
+    perfectFit,
+    residuals,
+    fitted,
+  };
+}

@@ -1,0 +1,92 @@
+import { ModelCache } from './cache/modelCache';
+import { EngineError } from './errors';
+import { buildDesign } from './fit/design';
+import { type LeastSquaresSolution, solveLeastSquares } from './fit/leastSquares';
+import { covarianceMatrix, standardErrors } from './infer/covariance';
+import { fitSummary } from './infer/fitSummary';
+import { type CoefficientReference, coefficientReference } from './infer/referenceDistribution';
+import { termTable } from './infer/termTable';
+import { resolveSettings } from './settings';
+import type { FitSettings, ModelData, ModelFit, ResolvedSettings } from './types';
+
+/** A fit together with the factorization behind it, for operations that build on it. */
+export interface SolvedModel {
+  fit: ModelFit;
+  solution: LeastSquaresSolution;
+  /** σ used for inference: the known σ, or σ̂. */
+  inferenceSigma: number;
+  reference: CoefficientReference;
+}
+
+export function fitModel(data: ModelData, settings?: FitSettings): ModelFit {
+  return solveModel(data, settings).fit;
+}
+
+/** Bounds chosen so a workbook's worth of ordinary models stays cached within a modest budget. */
+export const modelCache = new ModelCache<SolvedModel>(64, 256 * 1024 * 1024);
+
+/** The fit of `data`, computed once per distinct content and settings (see ModelCache). */
+export function solveModel(data: ModelData, settings?: FitSettings): SolvedModel {
+  const resolved = resolveSettings(settings);
+  const solved = modelCache.getOrCompute(data, resolved, () => solveUncached(data, resolved), approximateBytes);
+  return withNames(solved, data.names);
+}
+
+/**
+ * The cache is keyed on numbers alone, so formulas that label the same columns differently
+ * (or not at all) still share one fit; names are applied on the way out.
+ */
+function withNames(solved: SolvedModel, names: readonly string[] | undefined): SolvedModel {
+  const offset = solved.solution.design.hasIntercept ? 1 : 0;
+  const same = solved.fit.terms.every((t, j) => j < offset || t.name === (names?.[j - offset] ?? `x${j - offset + 1}`));
+  if (same) return solved;
+  const terms = solved.fit.terms.map((t, j) => (j < offset ? t : { ...t, name: names?.[j - offset] ?? `x${j - offset + 1}` }));
+  return { ...solved, fit: { ...solved.fit, terms } };
+}
+
+function approximateBytes(model: SolvedModel): number {
+  const n = model.fit.n;
+  const q = model.fit.parameters;
+  // Reflectors (rank × n), fitted and residuals twice over (typed and plain arrays), covariance.
+  return 8 * (model.fit.rank * n + 4 * n + 2 * q * q) + 1024;
+}
+
+function solveUncached(data: ModelData, resolved: ResolvedSettings): SolvedModel {
+  const design = buildDesign(data.y, data.x, resolved.intercept, data.names, data.weights);
+  const n = design.matrix.rows;
+  const q = design.matrix.cols;
+  if (q === 0) throw new EngineError('shape', 'The model has no terms: give at least one predictor or keep the intercept.');
+  const solution = solveLeastSquares(design);
+  const rank = solution.qr.accepted.length;
+  const residualDf = n - rank;
+  if (residualDf <= 0) {
+    throw new EngineError(
+      'no-residual-df',
+      `${n} rows cannot estimate ${rank} parameters with any left over to measure the noise: ` +
+        'the model needs more rows than parameters.',
+    );
+  }
+
+  const sigmaHat = solution.yScale * Math.sqrt(solution.scaledRss / residualDf);
+  const inferenceSigma = resolved.knownSigma ?? sigmaHat;
+  const reference = coefficientReference(residualDf, resolved.knownSigma !== undefined);
+  const errors = standardErrors(solution, inferenceSigma);
+  const summary = fitSummary(solution, resolved.knownSigma);
+
+  const fit: ModelFit = {
+    terms: termTable(design.names, solution.coefficients, errors, reference, resolved.level),
+    n,
+    parameters: q,
+    rank,
+    residualDf,
+    sigma: sigmaHat,
+    ...summary,
+    covariance: covarianceMatrix(solution, inferenceSigma),
+    fitted: Array.from(solution.fitted),
+    residuals: Array.from(solution.residuals),
+    statisticKind: reference.kind,
+    settings: resolved,
+    perfectFit: solution.perfectFit,
+  };
+  return { fit, solution, inferenceSigma, reference };
+}

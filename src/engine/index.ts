@@ -1,0 +1,23 @@
+/**
+ * Plumbline's engine: pure TypeScript, no Office, cells or UI. This is its only public entry.
+ */
+export { fitModel } from './fitModel';
+export { compareNested } from './compareNested';
+export { predict } from './predict';
+export { EngineError, type EngineErrorCode } from './errors';
+export type {
+  FitSettings,
+  ModelData,
+  ModelFit,
+  NestedComparison,
+  NestedData,
+  Prediction,
+  ResolvedSettings,
+  TermEstimate,
+} from './types';
+export { modelCache } from './fitModel';
+export type { CacheStats } from './cache/modelCache';
+export { buildModelFrame, type FrameInput, type ModelFrame, type SkippedRow } from './design/modelFrame';
+export { codeRow, type SourceColumn } from './design/categorical';
+export { classifyCell, describeCell, type Cell, type CellGrid, type CellValue, type CellErrorValue } from './design/cells';
+export { INTERCEPT_NAME } from './fit/design';

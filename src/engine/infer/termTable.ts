@@ -1,0 +1,46 @@
+import type { TermEstimate } from '../types';
+import type { CoefficientReference } from './referenceDistribution';
+
+/**
+ * One row per term. With SE = 0 (a perfect fit) the statistic is ±∞ and p is 0, as NIST
+ * certifies for Wampler1; an estimate of exactly 0 then has no sign and its statistic is NaN.
+ */
+export function termTable(
+  names: readonly string[],
+  estimates: ArrayLike<number>,
+  standardErrors: readonly number[],
+  reference: CoefficientReference,
+  level: number,
+): TermEstimate[] {
+  const multiplier = reference.multiplier(level);
+  return names.map((name, j) => {
+    const estimate = estimates[j];
+    const standardError = standardErrors[j];
+    if (Number.isNaN(estimate)) {
+      return {
+        name,
+        estimate: Number.NaN,
+        standardError: Number.NaN,
+        statistic: Number.NaN,
+        pValue: Number.NaN,
+        ciLow: Number.NaN,
+        ciHigh: Number.NaN,
+        cvPercent: Number.NaN,
+        aliased: true,
+      };
+    }
+    const statistic = estimate / standardError;
+    const halfWidth = multiplier * standardError;
+    return {
+      name,
+      estimate,
+      standardError,
+      statistic,
+      pValue: Number.isNaN(statistic) ? Number.NaN : reference.twoSidedP(statistic),
+      ciLow: estimate - halfWidth,
+      ciHigh: estimate + halfWidth,
+      cvPercent: (100 * standardError) / Math.abs(estimate),
+      aliased: false,
+    };
+  });
+}
