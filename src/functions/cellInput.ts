@@ -1,0 +1,64 @@
+/**
+ * The Excel boundary: raw argument values as custom functions receive them, turned into the
+ * engine's neutral cell values and settings. This is the only module that accepts `unknown`
+ * cells from the host.
+ */
+import { type CellGrid, type CellValue, EngineError, type FitSettings } from '../engine';
+
+/** A range argument as Excel passes it: row-major, blanks as "", null or 0, errors as objects. */
+export type RangeArgument = unknown[][];
+
+export function toCellGrid(range: RangeArgument | null | undefined, argument: string): CellGrid {
+  if (range === null || range === undefined) return [];
+  if (!Array.isArray(range) || !range.every(Array.isArray)) {
+    throw new EngineError('shape', `${argument} must be a range of cells.`);
+  }
+  return range.map((row) => row.map(toCellValue));
+}
+
+function toCellValue(value: unknown): CellValue {
+  if (value === null || value === undefined) return null;
+  if (typeof value === 'number' || typeof value === 'string' || typeof value === 'boolean') return value;
+  if (typeof value === 'object' && 'code' in value && typeof value.code === 'string') return { errorCode: value.code };
+  return { errorCode: '#VALUE!' };
+}
+
+/** A single-cell argument may still arrive as a 1×1 range. */
+function scalar(value: unknown): unknown {
+  if (Array.isArray(value)) return Array.isArray(value[0]) ? value[0][0] : value[0];
+  return value;
+}
+
+function isUnset(value: unknown): boolean {
+  return value === null || value === undefined || value === '';
+}
+
+/**
+ * The shared settings, in the same order at the end of every PLUMB function:
+ * level, intercept, known_sigma, weights. An unset level or known σ (omitted, blank, or 0 as a
+ * blank reference arrives in desktop Excel) means the default.
+ */
+export function parseSettings(levelArg: unknown, interceptArg: unknown, sigmaArg: unknown): FitSettings {
+  const level = scalar(levelArg);
+  const intercept = scalar(interceptArg);
+  const sigma = scalar(sigmaArg);
+  const settings: FitSettings = {};
+  if (!isUnset(level) && level !== 0) {
+    if (typeof level !== 'number' || !(level > 0 && level < 1)) {
+      throw new EngineError('bad-setting', `level must be a number between 0 and 1, such as 0.95 for 95%; got ${String(level)}.`);
+    }
+    settings.level = level;
+  }
+  if (!isUnset(intercept)) {
+    if (intercept === true || intercept === 1) settings.intercept = true;
+    else if (intercept === false || intercept === 0) settings.intercept = false;
+    else throw new EngineError('bad-setting', `intercept must be TRUE or FALSE; got ${String(intercept)}.`);
+  }
+  if (!isUnset(sigma) && sigma !== 0) {
+    if (typeof sigma !== 'number' || !(sigma > 0) || !Number.isFinite(sigma)) {
+      throw new EngineError('bad-setting', `known_sigma must be a positive number, or left empty to estimate σ; got ${String(sigma)}.`);
+    }
+    settings.knownSigma = sigma;
+  }
+  return settings;
+}

@@ -1,0 +1,207 @@
+/**
+ * The PLUMB cell functions. Every function reads its ranges through one input module
+ * (modelRequest), fits through the engine's shared cache, and lays its result out through a grid
+ * module; failures become #VALUE! with a message (cellError). The metadata plugin turns the JSDoc
+ * below into functions.json and writes the CustomFunctions.associate calls.
+ *
+ * Shared settings, always the last four arguments and in this order: level, intercept,
+ * known_sigma, weights.
+ */
+import { compareNested, fitModel, predict as predictRows } from '../engine';
+import { guarded } from './cellError';
+import type { RangeArgument } from './cellInput';
+import { toCellGrid } from './cellInput';
+import { readModel, type ModelRequest } from './modelRequest';
+import { readNewRows } from './newRows';
+import { covarianceGrid, estimatesGrid, intervalsGrid, standardErrorsGrid } from './grids/coefficientGrids';
+import { fitStatsGrid } from './grids/fitStatsGrid';
+import { nestedGrid } from './grids/nestedGrid';
+import { predictGrid } from './grids/predictGrid';
+import { termsGrid } from './grids/termsGrid';
+
+/* eslint-disable @typescript-eslint/no-explicit-any -- ranges arrive from Excel as any[][] */
+
+function request(known_y: any[][], known_x: any[][], level: any, intercept: any, known_sigma: any, weights: any): ModelRequest {
+  return readModel(known_y as RangeArgument, [{ range: known_x as RangeArgument, argument: 'known_x' }], {
+    level,
+    intercept,
+    knownSigma: known_sigma,
+    weights: weights as RangeArgument | null,
+  });
+}
+
+function fitOf(r: ModelRequest) {
+  return fitModel(r.frame.data, r.settings);
+}
+
+/**
+ * Which terms matter: estimate, standard error, t, p-value, confidence interval, CV % and a reading for every term.
+ * @customfunction TERMS
+ * @param known_y Responses: one column, with an optional text header.
+ * @param known_x Predictors: one or more columns with the same rows. Text columns are categorical.
+ * @param [level] Confidence level for the intervals. Default 0.95.
+ * @param [intercept] TRUE (default) fits an intercept; FALSE forces the model through zero.
+ * @param [known_sigma] The noise standard deviation if known from outside the data. Default: estimated.
+ * @param [weights] Optional column of positive case weights, same rows as known_y.
+ * @returns A table with a header row and one row per term.
+ */
+export function terms(known_y: any[][], known_x: any[][], level?: any, intercept?: any, known_sigma?: any, weights?: any[][]): any[][] {
+  return guarded(() => termsGrid(fitOf(request(known_y, known_x, level, intercept, known_sigma, weights))));
+}
+
+/**
+ * The estimated coefficients, one per term: the intercept first, then the predictors in range order.
+ * @customfunction ESTIMATES
+ * @param known_y Responses: one column, with an optional text header.
+ * @param known_x Predictors: one or more columns with the same rows. Text columns are categorical.
+ * @param [level] Confidence level. Default 0.95.
+ * @param [intercept] TRUE (default) fits an intercept; FALSE forces the model through zero.
+ * @param [known_sigma] The noise standard deviation if known. Default: estimated.
+ * @param [weights] Optional column of positive case weights, same rows as known_y.
+ * @returns One column of numbers.
+ */
+export function estimates(known_y: any[][], known_x: any[][], level?: any, intercept?: any, known_sigma?: any, weights?: any[][]): any[][] {
+  return guarded(() => estimatesGrid(fitOf(request(known_y, known_x, level, intercept, known_sigma, weights))));
+}
+
+/**
+ * The standard error of each coefficient, in the order of PLUMB.ESTIMATES.
+ * @customfunction STDERRORS
+ * @param known_y Responses: one column, with an optional text header.
+ * @param known_x Predictors: one or more columns with the same rows. Text columns are categorical.
+ * @param [level] Confidence level. Default 0.95.
+ * @param [intercept] TRUE (default) fits an intercept; FALSE forces the model through zero.
+ * @param [known_sigma] The noise standard deviation if known. Default: estimated.
+ * @param [weights] Optional column of positive case weights, same rows as known_y.
+ * @returns One column of standard errors.
+ */
+export function stdErrors(known_y: any[][], known_x: any[][], level?: any, intercept?: any, known_sigma?: any, weights?: any[][]): any[][] {
+  return guarded(() => standardErrorsGrid(fitOf(request(known_y, known_x, level, intercept, known_sigma, weights))));
+}
+
+/**
+ * Confidence intervals for the coefficients, in the order of PLUMB.ESTIMATES.
+ * @customfunction INTERVALS
+ * @param known_y Responses: one column, with an optional text header.
+ * @param known_x Predictors: one or more columns with the same rows. Text columns are categorical.
+ * @param [level] Confidence level of the intervals. Default 0.95.
+ * @param [intercept] TRUE (default) fits an intercept; FALSE forces the model through zero.
+ * @param [known_sigma] The noise standard deviation if known. Default: estimated.
+ * @param [weights] Optional column of positive case weights, same rows as known_y.
+ * @returns Two columns: low and high.
+ */
+export function intervals(known_y: any[][], known_x: any[][], level?: any, intercept?: any, known_sigma?: any, weights?: any[][]): any[][] {
+  return guarded(() => intervalsGrid(fitOf(request(known_y, known_x, level, intercept, known_sigma, weights))));
+}
+
+/**
+ * The covariance matrix of the coefficient estimates, terms in the order of PLUMB.ESTIMATES.
+ * @customfunction COVARIANCE
+ * @param known_y Responses: one column, with an optional text header.
+ * @param known_x Predictors: one or more columns with the same rows. Text columns are categorical.
+ * @param [level] Confidence level. Default 0.95.
+ * @param [intercept] TRUE (default) fits an intercept; FALSE forces the model through zero.
+ * @param [known_sigma] The noise standard deviation if known. Default: estimated.
+ * @param [weights] Optional column of positive case weights, same rows as known_y.
+ * @returns A square matrix, one row and column per term.
+ */
+export function covariance(known_y: any[][], known_x: any[][], level?: any, intercept?: any, known_sigma?: any, weights?: any[][]): any[][] {
+  return guarded(() => covarianceGrid(fitOf(request(known_y, known_x, level, intercept, known_sigma, weights))));
+}
+
+/**
+ * How well the model fits: rows used and skipped, sigma-hat, R², adjusted R², the overall F test, log-likelihood, AIC and BIC.
+ * @customfunction FITSTATS
+ * @param known_y Responses: one column, with an optional text header.
+ * @param known_x Predictors: one or more columns with the same rows. Text columns are categorical.
+ * @param [level] Confidence level. Default 0.95.
+ * @param [intercept] TRUE (default) fits an intercept; FALSE forces the model through zero (R² is then uncentered).
+ * @param [known_sigma] The noise standard deviation if known. Default: estimated.
+ * @param [weights] Optional column of positive case weights, same rows as known_y.
+ * @returns Two columns: label and value.
+ */
+export function fitStats(known_y: any[][], known_x: any[][], level?: any, intercept?: any, known_sigma?: any, weights?: any[][]): any[][] {
+  return guarded(() => {
+    const r = request(known_y, known_x, level, intercept, known_sigma, weights);
+    return fitStatsGrid(fitOf(r), r.frame);
+  });
+}
+
+/**
+ * Do the added predictors earn their place? The nested-model F test of base_x plus added_x against base_x alone.
+ * @customfunction NESTEDF
+ * @param known_y Responses: one column, with an optional text header.
+ * @param base_x Predictors of the smaller model, same rows as known_y.
+ * @param added_x The extra predictors to test, same rows as known_y.
+ * @param [level] Confidence level of the test (critical F at this level). Default 0.95.
+ * @param [intercept] TRUE (default) fits an intercept in both models; FALSE leaves it out of both.
+ * @param [known_sigma] The noise standard deviation if known. Default: estimated from the larger model.
+ * @param [weights] Optional column of positive case weights, same rows as known_y.
+ * @returns Two columns: label and value, ending with a reading.
+ */
+export function nestedF(
+  known_y: any[][],
+  base_x: any[][],
+  added_x: any[][],
+  level?: any,
+  intercept?: any,
+  known_sigma?: any,
+  weights?: any[][],
+): any[][] {
+  return guarded(() => {
+    const r = readModel(
+      known_y as RangeArgument,
+      [
+        { range: base_x as RangeArgument, argument: 'base_x' },
+        { range: added_x as RangeArgument, argument: 'added_x' },
+      ],
+      { level, intercept, knownSigma: known_sigma, weights: weights as RangeArgument | null },
+    );
+    const { x, y, weights: w } = r.frame.data;
+    const inBase = r.frame.termBlocks.map((b) => b === 0);
+    const result = compareNested(
+      {
+        y,
+        base: x.map((row) => row.filter((_, j) => inBase[j])),
+        added: x.map((row) => row.filter((_, j) => !inBase[j])),
+        weights: w,
+      },
+      r.settings,
+    );
+    return nestedGrid(result);
+  });
+}
+
+/**
+ * Predictions for new rows, with an interval for the mean response and one for a single new observation.
+ * @customfunction PREDICT
+ * @param known_y Responses: one column, with an optional text header.
+ * @param known_x Predictors: one or more columns with the same rows. Text columns are categorical.
+ * @param new_x The rows to predict, laid out like known_x (an optional header row is skipped).
+ * @param [level] Confidence level of both intervals. Default 0.95.
+ * @param [intercept] TRUE (default) fits an intercept; FALSE forces the model through zero.
+ * @param [known_sigma] The noise standard deviation if known. Default: estimated.
+ * @param [weights] Optional column of positive case weights, same rows as known_y. New rows have weight 1.
+ * @returns One row per new row: prediction, mean low and high, new low and high.
+ */
+export function predict(
+  known_y: any[][],
+  known_x: any[][],
+  new_x: any[][],
+  level?: any,
+  intercept?: any,
+  known_sigma?: any,
+  weights?: any[][],
+): any[][] {
+  return guarded(() => {
+    const r = request(known_y, known_x, level, intercept, known_sigma, weights);
+    const { rows } = readNewRows(toCellGrid(new_x as RangeArgument, 'new_x'), r.frame);
+    const complete = rows.filter((row): row is number[] => row !== undefined);
+    const predicted = complete.length > 0 ? predictRows(r.frame.data, complete, r.settings) : [];
+    let next = 0;
+    return predictGrid(
+      rows.map((row) => (row === undefined ? undefined : predicted[next++])),
+      r.frame.hasHeader,
+    );
+  });
+}

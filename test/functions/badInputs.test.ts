@@ -1,0 +1,51 @@
+/**
+ * Every way a user can hand the cell functions bad input, with the exact error kind and message
+ * they see. Messages are the product here: each must say where the problem is and what to do.
+ */
+import { describe, expect, it } from 'vitest';
+import { fitStats, nestedF, predict, terms } from '../../src/functions/functions';
+import { thrownBy } from '../support/cells';
+
+const y = [['Yield'], [10.1], [11.3], [12.2], [12.9], [14.4], [15.1]];
+const x = [['Steep', 'Temp'], [12, 90], [14, 91], [16, 90], [18, 93], [20, 92], [22, 95]];
+const yPlain = y.slice(1);
+const xPlain = x.slice(1);
+
+const cases: [string, () => unknown, string][] = [
+  ['y with two columns', () => terms(x, x), 'known_y has 2 columns; select a single column of responses.'],
+  ['x with fewer rows than y', () => terms(y, x.slice(0, 5)), 'known_y has 7 rows but known_x has 5; select the same rows for both.'],
+  ['empty y', () => terms([], x), 'known_y is empty: select the column of responses.'],
+  ['text in y', () => terms([['Yield'], [1], ['abc'], [3], [4], [5], [6]], x), 'known_y row 3 ("Yield") holds the text "abc". Use a number, or leave the cell blank to skip the row.'],
+  ['boolean in x', () => terms(y, [['Steep', 'Temp'], [12, 90], [14, true], [16, 90], [18, 93], [20, 92], [22, 95]]), 'known_x row 3, column 2 ("Temp") holds TRUE. Use a number, or leave the cell blank to skip the row.'],
+  ['#DIV/0! in x', () => terms(y, [['Steep', 'Temp'], [12, 90], [14, 91], [{ code: '#DIV/0!' }, 90], [18, 93], [20, 92], [22, 95]]), 'known_x row 4, column 1 ("Steep") holds the error #DIV/0!. Use a number, or leave the cell blank to skip the row.'],
+  ['"1,234" typed as text', () => terms(y, [['Steep', 'Temp'], [12, 90], [14, 91], [16, 90], ['1,234', 93], [20, 92], [22, 95]]), 'known_x row 5, column 1 ("Steep") holds the text "1,234". It looks like a number stored as text: re-enter it as a number without separators.'],
+  ['NaN in y without header', () => terms([[1], [Number.NaN], [3], [4]], [[1], [2], [3], [5]]), 'known_y row 2 ("y") holds NaN. Use a number, or leave the cell blank to skip the row.'],
+  ['number over x when y has a header', () => terms(y, [[1, 2], ...xPlain]), 'known_y starts with a header but known_x row 1, column 1 holds 1: give every predictor column a text header, or select the ranges without headers.'],
+  ['every row incomplete', () => terms([['y'], [null], [''], [1]], [['a'], [1], [2], [null]]), 'No complete rows: every row has a blank or #N/A in the response, a predictor or a weight.'],
+  ['as many rows as parameters', () => terms(yPlain.slice(0, 3), xPlain.slice(0, 3)), '3 rows cannot estimate 3 parameters with any left over to measure the noise: the model needs more rows than parameters.'],
+  ['a negative weight', () => terms(y, x, null, null, null, [['w'], [1], [1], [-2], [1], [1], [1]]), 'weights row 4 is -2; every weight must be a positive number.'],
+  ['a zero weight', () => terms(yPlain, xPlain, null, null, null, [[1], [0], [1], [1], [1], [1]]), 'weights row 2 is 0; every weight must be a positive number.'],
+  ['text weight', () => terms(yPlain, xPlain, null, null, null, [[1], ['heavy'], [1], [1], [1], [1]]), 'weights row 2 ("weight") holds the text "heavy". Use a number, or leave the cell blank to skip the row.'],
+  ['weights of another length', () => terms(yPlain, xPlain, null, null, null, [[1], [1]]), 'known_y has 6 rows but weights has 2; select the same rows for both.'],
+  ['two-column weights', () => terms(yPlain, xPlain, null, null, null, xPlain), 'weights has 2 columns; select a single column.'],
+  ['level of 95', () => terms(y, x, 95), 'level must be a number between 0 and 1, such as 0.95 for 95%; got 95.'],
+  ['level as text', () => terms(y, x, '95%'), 'level must be a number between 0 and 1, such as 0.95 for 95%; got 95%.'],
+  ['intercept as text', () => terms(y, x, null, 'yes'), 'intercept must be TRUE or FALSE; got yes.'],
+  ['negative known sigma', () => terms(y, x, null, null, -1), 'known_sigma must be a positive number, or left empty to estimate σ; got -1.'],
+  ['new_x of the wrong width', () => predict(y, x, [[1, 2, 3]]), 'new_x row 1 has 3 columns; known_x has 2. Lay new rows out like known_x.'],
+  ['text in new_x', () => predict(y, x, [[12, 'hot']]), 'new_x row 1, column 2 ("Temp") holds the text "hot"; it needs a number.'],
+  ['unknown category in new_x', () => predict([['y'], [1], [2], [3], [5]], [['Origin'], ['Kenya'], ['Peru'], ['Kenya'], ['Peru']], [['Chile']]), '"Chile" is not a level of "Origin" in the data (levels: Kenya, Peru).'],
+  ['added columns that repeat base', () => nestedF(y, x, [['Steep again'], [12], [14], [16], [18], [20], [22]]), 'The added columns are combinations of the base columns, so they cannot change the fit: there is nothing to test.'],
+  ['base_x of another length', () => nestedF(y, x.slice(0, 4), x), 'known_y has 7 rows but base_x has 4; select the same rows for both.'],
+  ['ragged range', () => fitStats([[1], [2], [3]], [[1], [2, 3], [4]]), 'known_x row 2 has 2 cells; row 1 has 1.'],
+];
+
+describe('bad input: #VALUE! with a message that says what to fix', () => {
+  it('covers at least 20 cases', () => expect(cases.length).toBeGreaterThanOrEqual(20));
+
+  it.each(cases)('%s', (_name, call, message) => {
+    const error = thrownBy(call);
+    expect(error.code).toBe('#VALUE!');
+    expect(error.message).toBe(message);
+  });
+});

@@ -1,0 +1,63 @@
+/**
+ * The help text users see in formula autocomplete is generated from functions.ts's JSDoc by
+ * custom-functions-metadata (the generator the build plugin uses). Every function and parameter
+ * must be described, ranges must be matrices, and the shared settings must sit in the same order.
+ */
+import { resolve } from 'node:path';
+import { generateCustomFunctionsMetadata } from 'custom-functions-metadata';
+import { beforeAll, describe, expect, it } from 'vitest';
+
+interface Parameter {
+  name: string;
+  description?: string;
+  dimensionality?: string;
+  optional?: boolean;
+}
+interface FunctionMetadata {
+  id: string;
+  description?: string;
+  parameters: Parameter[];
+  result: { dimensionality?: string };
+}
+
+const DATA_ARGUMENTS: Record<string, string[]> = {
+  TERMS: ['known_y', 'known_x'],
+  ESTIMATES: ['known_y', 'known_x'],
+  STDERRORS: ['known_y', 'known_x'],
+  INTERVALS: ['known_y', 'known_x'],
+  COVARIANCE: ['known_y', 'known_x'],
+  FITSTATS: ['known_y', 'known_x'],
+  NESTEDF: ['known_y', 'base_x', 'added_x'],
+  PREDICT: ['known_y', 'known_x', 'new_x'],
+};
+const SETTINGS = ['level', 'intercept', 'known_sigma', 'weights'];
+
+let functions: FunctionMetadata[];
+
+beforeAll(async () => {
+  const result = await generateCustomFunctionsMetadata(resolve(__dirname, '../../src/functions/functions.ts'));
+  expect(result.errors).toEqual([]);
+  functions = (JSON.parse(result.metadataJson) as { functions: FunctionMetadata[] }).functions;
+});
+
+describe('generated function metadata', () => {
+  it('lists exactly the eight PLUMB functions', () => {
+    expect(functions.map((f) => f.id).sort()).toEqual(Object.keys(DATA_ARGUMENTS).sort());
+  });
+
+  it.each(Object.entries(DATA_ARGUMENTS))('%s: data ranges, then level, intercept, known_sigma, weights', (id, data) => {
+    const fn = functions.find((f) => f.id === id)!;
+    expect(fn.description?.length ?? 0).toBeGreaterThan(30);
+    expect(fn.parameters.map((p) => p.name)).toEqual([...data, ...SETTINGS]);
+    for (const p of fn.parameters) expect(p.description?.length ?? 0).toBeGreaterThan(10);
+    for (const p of fn.parameters.slice(0, data.length)) {
+      expect(p.dimensionality).toBe('matrix');
+      expect(p.optional ?? false).toBe(false);
+    }
+    const [level, intercept, sigma, weights] = fn.parameters.slice(data.length);
+    for (const p of [level, intercept, sigma, weights]) expect(p.optional).toBe(true);
+    expect(level.dimensionality ?? 'scalar').toBe('scalar');
+    expect(weights.dimensionality).toBe('matrix');
+    expect(fn.result.dimensionality).toBe('matrix');
+  });
+});

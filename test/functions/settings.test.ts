@@ -1,0 +1,65 @@
+/**
+ * The shared settings scheme: the same four trailing arguments, in the same order, in every
+ * function. Expected values come from the engine tested elsewhere, plus identities that are
+ * common practice (no source): a wider level widens intervals, equal weights change nothing.
+ */
+import { describe, expect, it } from 'vitest';
+import { fitModel } from '../../src/engine';
+import { estimates, fitStats, intervals, nestedF, predict, terms } from '../../src/functions/functions';
+import { randomProblem } from '../support/random';
+
+// Excel passes an omitted optional argument as null, which the declared TypeScript types
+// (kept as any[][] so the metadata marks weights as a range) do not admit.
+const OMITTED = null as unknown as undefined;
+const { y, x } = randomProblem(71, 30, 3);
+const yCells = y.map((v) => [v]);
+
+describe('settings', () => {
+  it('omitted, null, "" and 0 all mean the default level and known σ', () => {
+    const base = intervals(yCells, x);
+    expect(intervals(yCells, x, null, null, null, OMITTED)).toEqual(base);
+    expect(intervals(yCells, x, '', '', '', OMITTED)).toEqual(base);
+    expect(intervals(yCells, x, 0, true, 0)).toEqual(base);
+    expect(intervals(yCells, x, [[0.95]])).toEqual(base);
+  });
+
+  it('level widens the intervals of TERMS, INTERVALS and PREDICT alike', () => {
+    const narrow = intervals(yCells, x, 0.8);
+    const wide = intervals(yCells, x, 0.99);
+    narrow.forEach((row, i) => {
+      expect(wide[i][0] as number).toBeLessThan(row[0] as number);
+      expect(wide[i][1] as number).toBeGreaterThan(row[1] as number);
+    });
+    expect(terms(yCells, x, 0.99)[1][5]).toBe(wide[0][0]);
+    const [p80] = predict(yCells, x, [[0, 0, 0]], 0.8);
+    const [p99] = predict(yCells, x, [[0, 0, 0]], 0.99);
+    expect(p99[3] as number).toBeLessThan(p80[3] as number);
+  });
+
+  it('intercept FALSE drops the intercept row, in every function', () => {
+    expect(estimates(yCells, x, null, false)).toHaveLength(3);
+    expect(terms(yCells, x, null, false).map((r) => r[0])).toEqual(['Term', 'x1', 'x2', 'x3']);
+    const engine = fitModel({ y, x }, { intercept: false });
+    expect(estimates(yCells, x, null, false).map((r) => r[0])).toEqual(engine.terms.map((t) => t.estimate));
+  });
+
+  it('known_sigma switches TERMS to z and fixes the standard errors at σ·√diag((XᵀX)⁻¹)', () => {
+    const table = terms(yCells, x, null, null, 2);
+    expect(table[0][3]).toBe('z');
+    const engine = fitModel({ y, x }, { knownSigma: 2 });
+    expect(table.slice(1).map((r) => r[2])).toEqual(engine.terms.map((t) => t.standardError));
+  });
+
+  it('weights sit in the same (last) place in NESTEDF and PREDICT as in TERMS', () => {
+    const w = y.map((_, i) => [1 + (i % 2)]);
+    const weighted = fitModel({ y, x, weights: w.map((r) => r[0]) });
+    expect(estimates(yCells, x, null, null, null, w).map((r) => r[0])).toEqual(weighted.terms.map((t) => t.estimate));
+    const stats = Object.fromEntries(fitStats(yCells, x, null, null, null, w));
+    expect(stats.RSS).toBe(weighted.rss);
+    const nested = Object.fromEntries(nestedF(yCells, x.map((r) => r.slice(0, 2)), x.map((r) => [r[2]]), null, null, null, w));
+    const t = weighted.terms[3].statistic;
+    expect(Math.abs((nested.F as number) - t * t)).toBeLessThan(1e-9 * t * t);
+    const [row] = predict(yCells, x, [[1, 1, 1]], null, null, null, w);
+    expect(row[0]).toBeCloseTo(weighted.terms.reduce((s, term) => s + term.estimate, 0), 10);
+  });
+});
