@@ -1,9 +1,10 @@
-import { defineConfig } from "vitest/config";
+import { defineConfig } from 'vitest/config';
+import ClosingLineReporter from './test/support/closingLineReporter';
 
 export default defineConfig({
   test: {
-    include: ["test/**/*.test.ts"],
+    include: ['test/**/*.test.ts'],
     testTimeout: 60000,
-    reporters: ["default"],
+    reporters: ['default', new ClosingLineReporter()],
   },
 });
