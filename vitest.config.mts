@@ -5,6 +5,8 @@ export default defineConfig({
   test: {
     include: ['test/**/*.test.ts'],
     testTimeout: 60000,
+    hookTimeout: 180000,
+    globalSetup: ['./test/support/buildAndServe.ts'],
     reporters: ['default', new ClosingLineReporter()],
   },
 });

@@ -35,6 +35,7 @@ module.exports = (env = {}, argv = {}) => {
     entry: {
       taskpane: "./src/taskpane/index.tsx",
       functions: "./src/functions/functions.ts",
+      preview: "./src/preview/index.tsx",
     },
     output: {
       path: outputPath,
@@ -69,8 +70,17 @@ module.exports = (env = {}, argv = {}) => {
         chunks: ["functions", "taskpane"],
         chunksSortMode: "manual",
       }),
+      // The preview host: its shim bundle first, so Office, Excel and CustomFunctions exist
+      // before the unmodified functions and pane bundles load.
+      new HtmlWebpackPlugin({
+        filename: "preview.html",
+        template: "./src/preview/preview.html",
+        chunks: ["preview", "functions", "taskpane"],
+        chunksSortMode: "manual",
+      }),
       new CopyWebpackPlugin({
         patterns: [
+          { from: "src/preview/preview.css", to: "preview.css" },
           { from: "assets/*.png", to: "assets/[name][ext]" },
           { from: "manifest.xml", to: "manifest.xml" },
         ],

@@ -102,6 +102,11 @@ describe("production build", () => {
     expect(paneIndex).toBeGreaterThan(fnIndex);
   });
 
+  it("makes preview.html load the shim first, then the unmodified functions and pane bundles, and nothing external", () => {
+    const sources = scriptSources(readFileSync(join(outDir, "preview.html"), "utf8")).map((s) => s.replace(/^\.?\//, ""));
+    expect(sources).toEqual(["preview.js", "functions.js", "taskpane.js"]);
+  });
+
   it("loads no external script other than Office.js", () => {
     const sources = scriptSources(readFileSync(join(outDir, "taskpane.html"), "utf8"));
     const external = sources.filter((s) => /^(https?:)?\/\//i.test(s));

@@ -1,0 +1,50 @@
+/** The CustomFunctions global: registration into the model, and the error a function throws. */
+import type { CustomFunction, WorkbookModel } from '../workbook/types';
+
+export const CustomFunctionsErrorCode = {
+  invalidValue: '#VALUE!',
+  notAvailable: '#N/A',
+  divisionByZero: '#DIV/0!',
+  invalidNumber: '#NUM!',
+  nullReference: '#NULL!',
+  invalidName: '#NAME?',
+  invalidReference: '#REF!',
+} as const;
+
+/** What a cell function throws to show an error in its cell; the model reads `code` and `message`. */
+export class CustomFunctionsError extends Error {
+  readonly code: string;
+
+  constructor(code: string = CustomFunctionsErrorCode.invalidValue, message?: string) {
+    super(message);
+    this.name = 'CustomFunctions.Error';
+    this.code = code;
+  }
+}
+
+export interface FunctionRegistrationHost {
+  onFunctionRegistered?(id: string): void;
+}
+
+function isCustomFunction(value: unknown): value is CustomFunction {
+  return typeof value === 'function';
+}
+
+/** Ids are matched without regard to case, as Excel does; the model keys them in upper case. */
+export function createAssociate(model: WorkbookModel, host: FunctionRegistrationHost | undefined) {
+  const register = (id: string, fn: unknown): void => {
+    if (typeof id !== 'string' || id === '' || !isCustomFunction(fn)) {
+      throw new TypeError(`CustomFunctions.associate needs an id and a function; got ${typeof id} and ${typeof fn}.`);
+    }
+    const upper = id.toUpperCase();
+    model.registerFunction(upper, fn);
+    host?.onFunctionRegistered?.(upper);
+  };
+  return function associate(idOrMappings: string | Record<string, unknown>, fn?: unknown): void {
+    if (typeof idOrMappings === 'string') {
+      register(idOrMappings, fn);
+      return;
+    }
+    for (const [id, mapped] of Object.entries(idOrMappings)) register(id, mapped);
+  };
+}

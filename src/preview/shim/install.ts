@@ -1,0 +1,93 @@
+/**
+ * Installs Office, Excel, OfficeExtension and CustomFunctions on globalThis, backed by the
+ * preview workbook model, so the built functions and task pane bundles run unmodified.
+ *
+ * Covered:
+ * - Office.onReady(callback?) → { host: 'Excel', platform: 'OfficeOnline' }; Office.HostType,
+ *   Office.PlatformType; Office.context.host/platform; Office.context.requirements.isSetSupported
+ *   (ExcelApi ≤ 1.12, CustomFunctionsRuntime ≤ 1.3, SharedRuntime 1.1; anything else false).
+ * - Excel.run(batch) and Excel.run(contextOrObject, batch), with the final implicit sync;
+ *   new Excel.RequestContext(); context.sync(); Excel.ErrorCodes, Excel.RangeValueType,
+ *   Excel.ClearApplyTo.
+ * - The load/sync model: load('a, b'), load(['a', 'b/c']), load({ a: true }), load({ select });
+ *   reading a property before load and sync throws PropertyNotLoaded; writes are queued and
+ *   applied in order at the next sync; a failing operation rejects the sync and leaves the
+ *   earlier ones applied. Errors are OfficeExtension.Error with code, message and debugInfo
+ *   (ItemNotFound, InvalidArgument, ItemAlreadyExists, InvalidOperation, PropertyNotLoaded,
+ *   ValueNotLoaded, GeneralException for a failure inside the model).
+ * - Workbook: worksheets, getSelectedRange(), getActiveCell() (the selection's top-left cell).
+ * - WorksheetCollection: getItem, getItemOrNullObject (isNullObject), add(name?) with
+ *   Sheet2, Sheet3… names, getActiveWorksheet, items (load 'items' or 'items/name'), getCount.
+ * - Worksheet: name (read, and set to rename), position, visibility,
+ *   getRange(A1 or A1:B2, $ allowed, sheet-qualified), getCell, getUsedRange,
+ *   getUsedRangeOrNullObject, activate, delete.
+ * - Range: address and addressLocal (sheet names quoted as Excel writes them), values,
+ *   formulas, numberFormat (read and write, 2-D arrays of the range's shape; null leaves a cell
+ *   as it is), text, valueTypes, rowCount, columnCount, rowIndex, columnIndex, cellCount,
+ *   worksheet; getCell, getResizedRange, getOffsetRange, getRow, getColumn, getLastRow,
+ *   getLastColumn, getLastCell, select, clear('All' | 'Contents' | 'Formats'); track/untrack
+ *   (no-ops). Blank cells read "", errors read as their text; written strings are read as
+ *   Excel reads typed entries ("=…", "+…", "-…" become formulas; numbers, percents and
+ *   TRUE/FALSE become values; cells formatted "@" keep text).
+ * - CustomFunctions.associate(id, fn) and associate(mappings) into model.registerFunction
+ *   (ids upper-cased), CustomFunctions.Error(code, message?), CustomFunctions.ErrorCode.
+ *
+ * Not covered (calling one fails, or it is simply absent):
+ * - Range.format (font, fill, borders, columnWidth, autofitColumns): the model keeps no
+ *   formatting beyond number formats. Reading range.format throws ApiNotFound;
+ *   Range.clear('Formats') resets number formats only.
+ * - Range.set(), insert, delete, getEntireRow/Column, getIntersection, getBoundingRect,
+ *   getUsedRange on a range, Workbook.getRange/names/tables, Worksheet.getRanges.
+ * - Whole-sheet ranges (getRange() with no address), whole rows or columns ("A:A", "1:1"),
+ *   named items, tables, charts, events (onChanged, onSelectionChanged), protection, calculation
+ *   control, context.trackedObjects, Office.context.document, Office.addin, Office.actions,
+ *   Office.initialize, worksheet ids, and writing a single scalar to a multi-cell range.
+ * - Range.text follows General and plain numeric formats only, and ignores column width.
+ * - Used ranges always start at A1 (the model reports the extent from A1).
+ * - Spilled cells other than the anchor read "" in `formulas`.
+ * - Written strings are not parsed as dates, currencies or numbers with thousands separators,
+ *   and "#N/A"-style text stays text.
+ * - Loading a property the shim lacks rejects the sync with ApiNotFound naming it.
+ */
+import type { WorkbookModel } from '../workbook/types';
+import { ShimClientObject, ShimClientResult } from './clientObject';
+import { createAssociate, CustomFunctionsError, CustomFunctionsErrorCode, type FunctionRegistrationHost } from './customFunctions';
+import { createExcel } from './excel';
+import { createOffice } from './office';
+import { OfficeExtensionError, OfficeExtensionErrorCodes } from './officeErrors';
+import { ShimRequestContext } from './requestContext';
+
+interface ShimGlobals {
+  Office: typeof Office;
+  Excel: typeof Excel;
+  OfficeExtension: typeof OfficeExtension;
+  CustomFunctions: typeof CustomFunctions;
+}
+
+export function installOfficeShim(model: WorkbookModel, host?: FunctionRegistrationHost): void {
+  const office = createOffice();
+  const excel = createExcel(model);
+  const officeExtension = {
+    Error: OfficeExtensionError,
+    ErrorCodes: OfficeExtensionErrorCodes,
+    ClientObject: ShimClientObject,
+    ClientResult: ShimClientResult,
+    ClientRequestContext: ShimRequestContext,
+    Promise,
+    config: { extendedErrorLogging: false },
+  };
+  const customFunctions = {
+    associate: createAssociate(model, host),
+    Error: CustomFunctionsError,
+    ErrorCode: CustomFunctionsErrorCode,
+  };
+
+  // The shim implements a subset of the @types/office-js and custom-functions-runtime surface,
+  // so it cannot satisfy those declarations structurally. This is the single point where it is
+  // presented as the real API; code elsewhere is typed against the real declarations.
+  const globals = globalThis as unknown as ShimGlobals;
+  globals.Office = office as unknown as typeof Office;
+  globals.Excel = excel as unknown as typeof Excel;
+  globals.OfficeExtension = officeExtension as unknown as typeof OfficeExtension;
+  globals.CustomFunctions = customFunctions as unknown as typeof CustomFunctions;
+}

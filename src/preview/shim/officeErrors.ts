@@ -1,0 +1,110 @@
+/**
+ * The errors the real API reports, with its codes and (English) messages, so add-in code that
+ * branches on `error.code` or shows `error.message` behaves as it would in Excel.
+ */
+
+export interface ShimDebugInfo {
+  code: string;
+  message: string;
+  errorLocation?: string;
+}
+
+/** Stands in for OfficeExtension.Error: what a failed `context.sync()` rejects with. */
+export class OfficeExtensionError extends Error {
+  readonly code: string;
+  readonly debugInfo: ShimDebugInfo;
+  readonly traceMessages: string[] = [];
+  readonly innerError: OfficeExtensionError | null = null;
+  readonly httpStatusCode: number;
+
+  constructor(code: string, message: string, errorLocation?: string, httpStatusCode = 400) {
+    super(message);
+    // The @types/office-js documentation gives this as the error's name.
+    this.name = 'OfficeExtension.Error';
+    this.code = code;
+    this.httpStatusCode = httpStatusCode;
+    this.debugInfo = errorLocation === undefined ? { code, message } : { code, message, errorLocation };
+  }
+}
+
+/** The string values of Excel.ErrorCodes that the shim can raise, plus the rest for lookups. */
+export const ExcelErrorCodes = {
+  accessDenied: 'AccessDenied',
+  apiNotFound: 'ApiNotFound',
+  conflict: 'Conflict',
+  generalException: 'GeneralException',
+  insertDeleteConflict: 'InsertDeleteConflict',
+  invalidArgument: 'InvalidArgument',
+  invalidBinding: 'InvalidBinding',
+  invalidOperation: 'InvalidOperation',
+  invalidReference: 'InvalidReference',
+  invalidSelection: 'InvalidSelection',
+  itemAlreadyExists: 'ItemAlreadyExists',
+  itemNotFound: 'ItemNotFound',
+  notImplemented: 'NotImplemented',
+  unsupportedOperation: 'UnsupportedOperation',
+} as const;
+
+/** OfficeExtension.ErrorCodes: the client-side codes. */
+export const OfficeExtensionErrorCodes = {
+  accessDenied: 'AccessDenied',
+  generalException: 'GeneralException',
+  activityLimitReached: 'ActivityLimitReached',
+  invalidObjectPath: 'InvalidObjectPath',
+  propertyNotLoaded: 'PropertyNotLoaded',
+  valueNotLoaded: 'ValueNotLoaded',
+  invalidRequestContext: 'InvalidRequestContext',
+  invalidArgument: 'InvalidArgument',
+  runMustReturnPromise: 'RunMustReturnPromise',
+  cannotRegisterEvent: 'CannotRegisterEvent',
+  apiNotFound: 'ApiNotFound',
+  connectionFailure: 'ConnectionFailure',
+} as const;
+
+export function itemNotFound(location: string): OfficeExtensionError {
+  return new OfficeExtensionError('ItemNotFound', "The requested resource doesn't exist.", location, 404);
+}
+
+export function invalidArgument(location: string): OfficeExtensionError {
+  return new OfficeExtensionError('InvalidArgument', 'The argument is invalid or missing or has an incorrect format.', location);
+}
+
+export function itemAlreadyExists(location: string): OfficeExtensionError {
+  return new OfficeExtensionError('ItemAlreadyExists', 'The resource already exists.', location, 409);
+}
+
+// Message from memory, not checked against a live host; callers should branch on the code.
+export function invalidOperation(location: string): OfficeExtensionError {
+  return new OfficeExtensionError('InvalidOperation', 'The operation is invalid for the object in its current state.', location);
+}
+
+export function generalException(location: string, cause: unknown): OfficeExtensionError {
+  const detail = cause instanceof Error ? cause.message : String(cause);
+  const error = new OfficeExtensionError('GeneralException', 'There was an internal error while processing the request.', location, 500);
+  // The real host keeps internals out of the message; the preview keeps them in debugInfo so a
+  // failure inside the workbook model can still be diagnosed.
+  error.debugInfo.message = `${error.message} (preview workbook: ${detail})`;
+  return error;
+}
+
+/** For members of the real API that the preview does not implement: say so plainly. */
+export function notInPreview(member: string): OfficeExtensionError {
+  return new OfficeExtensionError('ApiNotFound', `${member} is not available in the preview workbook.`, member, 404);
+}
+
+export function propertyNotLoaded(property: string, typeName: string): OfficeExtensionError {
+  return new OfficeExtensionError(
+    'PropertyNotLoaded',
+    `The property '${property}' is not available. Before reading the property's value, call the load method on the containing object and call "context.sync()" on the associated request context.`,
+    `${typeName}.${property}`,
+  );
+}
+
+// Message from memory, not checked against a live host.
+export function valueNotLoaded(): OfficeExtensionError {
+  return new OfficeExtensionError(
+    'ValueNotLoaded',
+    'The value of the result object has not been loaded yet. Before reading the value property, call "context.sync()" on the associated request context.',
+    'ClientResult.value',
+  );
+}

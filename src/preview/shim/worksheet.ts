@@ -1,0 +1,127 @@
+/** Excel.Worksheet over the model: its name and position, ranges on it, activation, deletion. */
+import { parseRange, splitSheet } from '../workbook/a1';
+import { ShimClientObject } from './clientObject';
+import { invalidArgument, invalidOperation, itemAlreadyExists } from './officeErrors';
+import { insideGrid, rangeTarget, ShimRange, type RangeTarget } from './range';
+import type { SheetHandle, ShimRequestContext } from './requestContext';
+import { isValidSheetName } from './sheetNames';
+
+const WORKSHEET_SCALARS = ['name', 'position', 'visibility'] as const;
+
+export class ShimWorksheet extends ShimClientObject<SheetHandle> {
+  protected readonly typeName = 'Worksheet';
+  protected readonly scalarNames: readonly string[] = WORKSHEET_SCALARS;
+
+  /** `location` undefined: the handle is already known (collection items), nothing to queue. */
+  constructor(
+    context: ShimRequestContext,
+    private readonly locator: () => SheetHandle | null,
+    location: string | undefined,
+  ) {
+    super(context);
+    if (location === undefined) this.resolveOrNull();
+    else this.queueResolve(location);
+  }
+
+  protected locate(): SheetHandle | null {
+    return this.locator();
+  }
+
+  protected readScalar(name: string, handle: SheetHandle): unknown {
+    const location = `Worksheet.${name}`;
+    const sheet = this.context.liveSheet(handle, location);
+    switch (name) {
+      case 'name':
+        return sheet;
+      case 'position':
+        return this.context.model.sheetNames().indexOf(sheet);
+      case 'visibility':
+        return 'Visible';
+      default:
+        throw invalidArgument(location);
+    }
+  }
+
+  get name(): string {
+    return this.loadedValue('name');
+  }
+  set name(newName: string) {
+    this.queueWrite('name', newName, (handle, location) => {
+      const current = this.context.liveSheet(handle, location);
+      if (typeof newName !== 'string' || !isValidSheetName(newName)) throw invalidArgument(location);
+      const holder = this.context.findSheet(newName);
+      // By analogy with worksheets.add; a rename that only changes case is allowed.
+      if (holder && holder !== handle) throw itemAlreadyExists(location);
+      const model = this.context.model;
+      model.renameSheet(current, newName);
+      handle.name = newName;
+    });
+  }
+
+  get position(): number {
+    return this.loadedValue('position');
+  }
+
+  get visibility(): string {
+    return this.loadedValue('visibility');
+  }
+
+  private rangeOn(location: string, shape: (sheet: SheetHandle) => RangeTarget | null): ShimRange {
+    return new ShimRange(this.context, () => shape(this.target(location)), location);
+  }
+
+  /** A1 text, optionally sheet-qualified; a named sheet must exist. */
+  getRange(address?: string): ShimRange {
+    const location = 'Worksheet.getRange';
+    return this.rangeOn(location, (sheet) => {
+      if (typeof address !== 'string') throw invalidArgument(location);
+      const named = splitSheet(address.trim()).sheet;
+      const parsed = parseRange(address, this.context.liveSheet(sheet, location));
+      if (!parsed) throw invalidArgument(location);
+      const onSheet = named === undefined ? sheet : this.context.findSheet(named);
+      if (!onSheet) throw invalidArgument(location);
+      return rangeTarget(onSheet, parsed.top, parsed.left, parsed.bottom, parsed.right, location);
+    });
+  }
+
+  getCell(row: number, column: number): ShimRange {
+    const location = 'Worksheet.getCell';
+    return this.rangeOn(location, (sheet) => rangeTarget(sheet, row, column, row, column, location));
+  }
+
+  /**
+   * The model reports the used extent from A1, so the range always starts at A1 (Excel starts
+   * it at the first used cell). `valuesOnly` changes nothing: number formats alone never count.
+   */
+  getUsedRange(_valuesOnly?: boolean): ShimRange {
+    const location = 'Worksheet.getUsedRange';
+    return this.rangeOn(location, (sheet) => this.usedTarget(sheet, location) ?? rangeTarget(sheet, 0, 0, 0, 0, location));
+  }
+
+  getUsedRangeOrNullObject(_valuesOnly?: boolean): ShimRange {
+    const location = 'Worksheet.getUsedRangeOrNullObject';
+    return this.rangeOn(location, (sheet) => this.usedTarget(sheet, location));
+  }
+
+  private usedTarget(sheet: SheetHandle, location: string): RangeTarget | null {
+    const { rows, columns } = this.context.model.usedExtent(this.context.liveSheet(sheet, location));
+    if (rows === 0 || columns === 0 || !insideGrid(0, 0, rows - 1, columns - 1)) return null;
+    return rangeTarget(sheet, 0, 0, rows - 1, columns - 1, location);
+  }
+
+  activate(): void {
+    const location = 'Worksheet.activate';
+    this.context.enqueue(location, () => this.context.model.activateSheet(this.context.liveSheet(this.target(location), location)));
+  }
+
+  delete(): void {
+    const location = 'Worksheet.delete';
+    this.context.enqueue(location, () => {
+      const handle = this.target(location);
+      const sheet = this.context.liveSheet(handle, location);
+      if (this.context.model.sheetNames().length <= 1) throw invalidOperation(location);
+      this.context.model.deleteSheet(sheet);
+      handle.deleted = true;
+    });
+  }
+}

@@ -1,0 +1,155 @@
+import { useEffect, useRef, useState } from 'preact/hooks';
+import { cellAddress, columnLetters } from '../workbook/a1';
+import type { RangeRef } from '../workbook/types';
+import type { PreviewWorkbook } from '../workbook/workbook';
+import { formatValue } from './formatValue';
+
+const ROW_HEIGHT = 24;
+const COLUMN_WIDTH = 104;
+const HEADER_WIDTH = 52;
+/** Rows drawn beyond the visible window, so scrolling does not show blank gaps. */
+const OVERSCAN = 10;
+/** Preact passes style numbers through unchanged, so lengths carry their unit. */
+const px = (n: number): string => `${n}px`;
+const MIN_ROWS = 60;
+const MIN_COLUMNS = 12;
+
+interface GridProps {
+  workbook: PreviewWorkbook;
+  sheet: string;
+  selection: RangeRef;
+  onSelect(range: RangeRef): void;
+  onStartEdit(initial?: string): void;
+}
+
+function inRange(range: RangeRef, row: number, column: number): boolean {
+  return row >= range.top && row <= range.bottom && column >= range.left && column <= range.right;
+}
+
+/**
+ * The sheet's cells, drawn as a window over the rows in view so that sheets of hundreds of
+ * thousands of rows stay responsive.
+ */
+export function Grid({ workbook, sheet, selection, onSelect, onStartEdit }: GridProps) {
+  const scroller = useRef<HTMLDivElement>(null);
+  const [scrollTop, setScrollTop] = useState(0);
+  const [height, setHeight] = useState(600);
+  const extent = workbook.usedExtent(sheet);
+  const rows = Math.max(MIN_ROWS, extent.rows + 20);
+  const columns = Math.max(MIN_COLUMNS, extent.columns + 3);
+
+  useEffect(() => {
+    const el = scroller.current;
+    if (!el) return;
+    const observer = new ResizeObserver(() => setHeight(el.clientHeight));
+    observer.observe(el);
+    return () => observer.disconnect();
+  }, []);
+
+  const first = Math.max(0, Math.floor(scrollTop / ROW_HEIGHT) - OVERSCAN);
+  const last = Math.min(rows - 1, Math.ceil((scrollTop + height) / ROW_HEIGHT) + OVERSCAN);
+  const anchor = { row: selection.top, column: selection.left };
+
+  const move = (dRow: number, dColumn: number, extend: boolean) => {
+    const row = Math.max(0, Math.min(rows - 1, (extend ? selection.bottom : anchor.row) + dRow));
+    const column = Math.max(0, Math.min(columns - 1, (extend ? selection.right : anchor.column) + dColumn));
+    onSelect(
+      extend
+        ? { sheet, top: Math.min(anchor.row, row), left: Math.min(anchor.column, column), bottom: Math.max(anchor.row, row), right: Math.max(anchor.column, column) }
+        : { sheet, top: row, left: column, bottom: row, right: column },
+    );
+  };
+
+  const onKeyDown = (e: KeyboardEvent) => {
+    const steps: Record<string, [number, number]> = { ArrowUp: [-1, 0], ArrowDown: [1, 0], ArrowLeft: [0, -1], ArrowRight: [0, 1] };
+    if (e.key in steps) {
+      e.preventDefault();
+      move(steps[e.key][0], steps[e.key][1], e.shiftKey);
+    } else if (e.key === 'Enter' || e.key === 'F2') {
+      e.preventDefault();
+      onStartEdit();
+    } else if (e.key === 'Delete' || e.key === 'Backspace') {
+      e.preventDefault();
+      const blank = Array.from({ length: selection.bottom - selection.top + 1 }, () => Array.from({ length: selection.right - selection.left + 1 }, () => null));
+      workbook.setInputs(sheet, selection.top, selection.left, blank);
+    } else if (e.key.length === 1 && !e.ctrlKey && !e.metaKey && !e.altKey) {
+      e.preventDefault();
+      onStartEdit(e.key);
+    }
+  };
+
+  const clickCell = (row: number, column: number, e: MouseEvent) => {
+    if (e.shiftKey) {
+      onSelect({ sheet, top: Math.min(anchor.row, row), left: Math.min(anchor.column, column), bottom: Math.max(anchor.row, row), right: Math.max(anchor.column, column) });
+    } else {
+      onSelect({ sheet, top: row, left: column, bottom: row, right: column });
+    }
+    scroller.current?.focus();
+  };
+
+  const visible = [];
+  for (let row = first; row <= last; row++) {
+    const cells = [];
+    for (let column = 0; column < columns; column++) {
+      const position = { sheet, row, column };
+      const value = workbook.valueAt(position);
+      const text = formatValue(value, workbook.numberFormatAt(position));
+      const isError = typeof value === 'object' && value !== null;
+      const classes = ['cell'];
+      if (typeof value === 'number') classes.push('number');
+      // Text runs on into an empty neighbour, as readers of spreadsheets expect.
+      if (typeof value === 'string' && workbook.valueAt({ sheet, row, column: column + 1 }) === null) classes.push('overflowing');
+      if (isError) classes.push('error');
+      if (inRange(selection, row, column)) classes.push('selected');
+      if (row === anchor.row && column === anchor.column) classes.push('active');
+      cells.push(
+        <div
+          key={column}
+          class={classes.join(' ')}
+          role="gridcell"
+          data-cell={cellAddress(row, column)}
+          title={isError ? (value.message ?? value.error) : text}
+          style={{ left: px(HEADER_WIDTH + column * COLUMN_WIDTH), width: px(COLUMN_WIDTH) }}
+          onMouseDown={(e) => clickCell(row, column, e)}
+          onDblClick={() => onStartEdit()}
+        >
+          {text}
+        </div>,
+      );
+    }
+    visible.push(
+      <div key={row} class="grid-row" role="row" style={{ top: px(ROW_HEIGHT + row * ROW_HEIGHT) }}>
+        <div class="row-header" role="rowheader" style={{ width: px(HEADER_WIDTH) }}>
+          {row + 1}
+        </div>
+        {cells}
+      </div>,
+    );
+  }
+
+  return (
+    <div
+      class="grid-scroller"
+      ref={scroller}
+      tabIndex={0}
+      role="grid"
+      aria-label={`Sheet ${sheet}`}
+      aria-rowcount={rows}
+      aria-colcount={columns}
+      onScroll={(e) => setScrollTop((e.currentTarget as HTMLDivElement).scrollTop)}
+      onKeyDown={onKeyDown}
+    >
+      <div class="grid-canvas" style={{ height: px(ROW_HEIGHT * (rows + 1)), width: px(HEADER_WIDTH + COLUMN_WIDTH * columns) }}>
+        <div class="column-headers" role="row" style={{ top: px(scrollTop) }}>
+          <div class="corner" style={{ width: px(HEADER_WIDTH) }} />
+          {Array.from({ length: columns }, (_, column) => (
+            <div key={column} class="column-header" role="columnheader" style={{ left: px(HEADER_WIDTH + column * COLUMN_WIDTH), width: px(COLUMN_WIDTH) }}>
+              {columnLetters(column)}
+            </div>
+          ))}
+        </div>
+        {visible}
+      </div>
+    </div>
+  );
+}

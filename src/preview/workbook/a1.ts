@@ -1,0 +1,87 @@
+/**
+ * A1 notation: column letters, cell and range addresses with optional sheet names and `$`
+ * anchors. Pure functions shared by the formula parser, the grid and the Office.js shim.
+ */
+import type { RangeRef } from './types';
+
+/** Excel's grid limits; addresses beyond them are invalid. */
+export const MAX_ROWS = 1_048_576;
+export const MAX_COLUMNS = 16_384;
+
+export function columnLetters(column: number): string {
+  let n = column + 1;
+  let letters = '';
+  while (n > 0) {
+    const rem = (n - 1) % 26;
+    letters = String.fromCharCode(65 + rem) + letters;
+    n = Math.floor((n - 1) / 26);
+  }
+  return letters;
+}
+
+export function columnIndex(letters: string): number {
+  let n = 0;
+  for (const ch of letters.toUpperCase()) n = n * 26 + (ch.charCodeAt(0) - 64);
+  return n - 1;
+}
+
+export function cellAddress(row: number, column: number): string {
+  return `${columnLetters(column)}${row + 1}`;
+}
+
+/** Sheet names that are not plain words are quoted, with inner quotes doubled, as Excel writes them. */
+export function quoteSheetName(name: string): string {
+  return /^[A-Za-z_][A-Za-z0-9_.]*$/.test(name) && !/^[A-Za-z]{1,3}\d+$/.test(name) ? name : `'${name.replace(/'/g, "''")}'`;
+}
+
+export function formatRange(range: RangeRef, withSheet = true): string {
+  const start = cellAddress(range.top, range.left);
+  const end = cellAddress(range.bottom, range.right);
+  const body = start === end ? start : `${start}:${end}`;
+  return withSheet ? `${quoteSheetName(range.sheet)}!${body}` : body;
+}
+
+const CELL = /^\$?([A-Za-z]{1,3})\$?(\d{1,7})$/;
+
+function parseCell(text: string): { row: number; column: number } | undefined {
+  const m = CELL.exec(text);
+  if (!m) return undefined;
+  const column = columnIndex(m[1]);
+  const row = Number(m[2]) - 1;
+  if (row < 0 || row >= MAX_ROWS || column >= MAX_COLUMNS) return undefined;
+  return { row, column };
+}
+
+/** Splits "Sheet!A1:B2" or "'Planned batches'!B2" into sheet and address; the sheet may be absent. */
+export function splitSheet(text: string): { sheet: string | undefined; address: string } {
+  const quoted = /^'((?:[^']|'')+)'!(.*)$/.exec(text);
+  if (quoted) return { sheet: quoted[1].replace(/''/g, "'"), address: quoted[2] };
+  const bang = text.lastIndexOf('!');
+  if (bang < 0) return { sheet: undefined, address: text };
+  return { sheet: text.slice(0, bang), address: text.slice(bang + 1) };
+}
+
+/** Parses "A1", "$B$2:C5" or "Sheet!A1:B2"; undefined when the text is not a valid address. */
+export function parseRange(text: string, defaultSheet: string): RangeRef | undefined {
+  const { sheet, address } = splitSheet(text.trim());
+  const parts = address.split(':');
+  if (parts.length > 2) return undefined;
+  const a = parseCell(parts[0]);
+  const b = parts.length === 2 ? parseCell(parts[1]) : a;
+  if (!a || !b) return undefined;
+  return {
+    sheet: sheet ?? defaultSheet,
+    top: Math.min(a.row, b.row),
+    left: Math.min(a.column, b.column),
+    bottom: Math.max(a.row, b.row),
+    right: Math.max(a.column, b.column),
+  };
+}
+
+export function rangeContains(range: RangeRef, sheet: string, row: number, column: number): boolean {
+  return range.sheet === sheet && row >= range.top && row <= range.bottom && column >= range.left && column <= range.right;
+}
+
+export function rangesOverlap(a: RangeRef, b: RangeRef): boolean {
+  return a.sheet === b.sheet && a.top <= b.bottom && b.top <= a.bottom && a.left <= b.right && b.left <= a.right;
+}

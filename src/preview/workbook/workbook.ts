@@ -1,0 +1,361 @@
+/**
+ * The preview workbook: sheets of cells holding constants or formulas, spilled results, number
+ * formats and a selection. Editing a cell re-evaluates the formulas that read it, then the
+ * formulas that read their results, until nothing changes.
+ */
+import { MAX_COLUMNS, rangesOverlap } from './a1';
+import { evaluate, type FormulaResult, type FunctionEntry, isCellError, NAMESPACE } from './evaluate';
+import { FormulaSyntaxError, parseFormula, referencedRanges, type Expression } from './formula';
+import type { CellError, CellInput, CellPosition, CellValue, CustomFunction, RangeRef, WorkbookModel } from './types';
+
+interface FormulaCell {
+  text: string;
+  expression: Expression | undefined;
+  syntaxError: string | undefined;
+  reads: RangeRef[];
+  /** What the formula last produced, before spilling. */
+  result: FormulaResult;
+  /** The area its grid covers (also when blocked), so a cleared blocker can re-spill it. */
+  area: RangeRef;
+  blocked: boolean;
+  generation: number;
+}
+
+interface Sheet {
+  name: string;
+  inputs: Map<number, CellInput>;
+  formats: Map<number, string>;
+  formulas: Map<number, FormulaCell>;
+  /** Values spilled from formulas into other cells, keyed by cell. */
+  spilled: Map<number, CellValue>;
+}
+
+export interface FunctionShape {
+  id: string;
+  parameters: { dimensionality: 'scalar' | 'matrix'; optional: boolean }[];
+}
+
+const key = (row: number, column: number): number => row * MAX_COLUMNS + column;
+const rowOf = (k: number): number => Math.floor(k / MAX_COLUMNS);
+const columnOf = (k: number): number => k % MAX_COLUMNS;
+const INVALID_SHEET_NAME = /[[\]:*?/\\]/;
+/** A guard against formulas that keep changing each other's inputs. */
+const MAX_PASSES = 64;
+
+export class PreviewWorkbook implements WorkbookModel {
+  private readonly sheets: Sheet[] = [];
+  private active = '';
+  private selected: RangeRef = { sheet: '', top: 0, left: 0, bottom: 0, right: 0 };
+  private readonly functions = new Map<string, FunctionEntry>();
+  private readonly shapes = new Map<string, FunctionShape['parameters']>();
+  private readonly listeners = new Set<() => void>();
+
+  constructor(firstSheet = 'Sheet1') {
+    this.addSheet(firstSheet);
+    this.activateSheet(firstSheet);
+  }
+
+  sheetNames(): string[] {
+    return this.sheets.map((s) => s.name);
+  }
+
+  hasSheet(name: string): boolean {
+    return this.find(name) !== undefined;
+  }
+
+  addSheet(name: string): void {
+    this.validateNewName(name);
+    this.sheets.push({ name, inputs: new Map(), formats: new Map(), formulas: new Map(), spilled: new Map() });
+    this.recalculate(this.allFormulasReading(name));
+    this.notify();
+  }
+
+  renameSheet(from: string, to: string): void {
+    const sheet = this.sheet(from);
+    if (from.toLowerCase() !== to.toLowerCase()) this.validateNewName(to);
+    sheet.name = to;
+    if (this.active === from) this.active = to;
+    if (this.selected.sheet === from) this.selected = { ...this.selected, sheet: to };
+    this.notify();
+  }
+
+  deleteSheet(name: string): void {
+    const sheet = this.sheet(name);
+    if (this.sheets.length === 1) throw new Error('A workbook must keep at least one sheet.');
+    this.sheets.splice(this.sheets.indexOf(sheet), 1);
+    if (this.active === sheet.name) this.activateSheet(this.sheets[0].name);
+    this.recalculate(this.allFormulasReading(sheet.name));
+    this.notify();
+  }
+
+  activeSheet(): string {
+    return this.active;
+  }
+
+  activateSheet(name: string): void {
+    this.active = this.sheet(name).name;
+    this.selected = { sheet: this.active, top: 0, left: 0, bottom: 0, right: 0 };
+    this.notify();
+  }
+
+  inputAt(p: CellPosition): CellInput {
+    const sheet = this.sheet(p.sheet);
+    const formula = sheet.formulas.get(key(p.row, p.column));
+    return formula !== undefined ? formula.text : (sheet.inputs.get(key(p.row, p.column)) ?? null);
+  }
+
+  valueAt(p: CellPosition): CellValue {
+    return this.value(this.sheet(p.sheet), p.row, p.column);
+  }
+
+  /** The formula's error message at a cell, for the grid's tooltip and status line. */
+  errorAt(p: CellPosition): CellError | undefined {
+    const value = this.valueAt(p);
+    return isCellError(value) ? value : undefined;
+  }
+
+  setInputs(sheetName: string, top: number, left: number, inputs: readonly (readonly CellInput[])[]): void {
+    const sheet = this.sheet(sheetName);
+    const changed: RangeRef = { sheet: sheet.name, top, left, bottom: top + inputs.length - 1, right: left + (inputs[0]?.length ?? 1) - 1 };
+    const dirty = new Set<FormulaCell>();
+    inputs.forEach((row, i) =>
+      row.forEach((input, j) => {
+        const k = key(top + i, left + j);
+        sheet.inputs.delete(k);
+        const old = sheet.formulas.get(k);
+        if (old !== undefined) {
+          this.clearSpill(sheet, k, old);
+          sheet.formulas.delete(k);
+          this.formulasReading(old.area).forEach((f) => dirty.add(f));
+        }
+        if (typeof input === 'string' && input.startsWith('=') && input.length > 1) {
+          const formula = this.newFormula(sheet, input, top + i, left + j);
+          sheet.formulas.set(k, formula);
+          dirty.add(formula);
+        } else if (input !== null && input !== '') {
+          sheet.inputs.set(k, input);
+        }
+      }),
+    );
+    this.formulasReading(changed).forEach((f) => dirty.add(f));
+    this.formulasSpillingInto(changed).forEach((f) => dirty.add(f));
+    this.recalculate(dirty);
+    this.notify();
+  }
+
+  numberFormatAt(p: CellPosition): string {
+    return this.sheet(p.sheet).formats.get(key(p.row, p.column)) ?? 'General';
+  }
+
+  setNumberFormats(sheetName: string, top: number, left: number, formats: readonly (readonly string[])[]): void {
+    const sheet = this.sheet(sheetName);
+    formats.forEach((row, i) => row.forEach((f, j) => sheet.formats.set(key(top + i, left + j), f)));
+    this.notify();
+  }
+
+  usedExtent(sheetName: string): { rows: number; columns: number } {
+    const sheet = this.sheet(sheetName);
+    let rows = 0;
+    let columns = 0;
+    for (const map of [sheet.inputs, sheet.formulas, sheet.spilled]) {
+      for (const k of map.keys()) {
+        rows = Math.max(rows, rowOf(k) + 1);
+        columns = Math.max(columns, columnOf(k) + 1);
+      }
+    }
+    return { rows, columns };
+  }
+
+  selection(): RangeRef {
+    return { ...this.selected };
+  }
+
+  select(range: RangeRef): void {
+    this.sheet(range.sheet);
+    this.active = range.sheet;
+    this.selected = { ...range };
+    this.notify();
+  }
+
+  registerFunction(id: string, fn: CustomFunction): void {
+    const upper = id.toUpperCase();
+    this.functions.set(upper, { fn, parameters: this.shapes.get(upper) });
+    this.recalculate(this.formulasCalling(upper));
+    this.notify();
+  }
+
+  /** Parameter shapes from functions.json, so scalar arguments get one value as in Excel. */
+  setFunctionShapes(shapes: readonly FunctionShape[]): void {
+    for (const s of shapes) {
+      const id = s.id.toUpperCase();
+      this.shapes.set(id, s.parameters);
+      const entry = this.functions.get(id);
+      if (entry !== undefined) this.functions.set(id, { ...entry, parameters: s.parameters });
+    }
+    this.recalculate(new Set(this.everyFormula()));
+    this.notify();
+  }
+
+  subscribe(listener: () => void): () => void {
+    this.listeners.add(listener);
+    return () => this.listeners.delete(listener);
+  }
+
+  private notify(): void {
+    for (const listener of this.listeners) listener();
+  }
+
+  private find(name: string): Sheet | undefined {
+    const lower = name.toLowerCase();
+    return this.sheets.find((s) => s.name.toLowerCase() === lower);
+  }
+
+  private sheet(name: string): Sheet {
+    const sheet = this.find(name);
+    if (sheet === undefined) throw new Error(`There is no sheet named ${name}.`);
+    return sheet;
+  }
+
+  private validateNewName(name: string): void {
+    if (name.trim() === '' || name.length > 31 || INVALID_SHEET_NAME.test(name) || name.startsWith("'") || name.endsWith("'")) {
+      throw new Error(`"${name}" is not a valid sheet name.`);
+    }
+    if (this.find(name) !== undefined) throw new Error(`A sheet named ${name} already exists.`);
+  }
+
+  private value(sheet: Sheet, row: number, column: number): CellValue {
+    const k = key(row, column);
+    const formula = sheet.formulas.get(k);
+    if (formula !== undefined) {
+      if ('error' in formula.result) return formula.result.error;
+      if (formula.blocked) return { error: '#SPILL!', message: 'The result needs empty cells to spill into; clear the cells in its way.' };
+      return formula.result.grid[0][0];
+    }
+    if (sheet.spilled.has(k)) return sheet.spilled.get(k) ?? null;
+    return sheet.inputs.get(k) ?? null;
+  }
+
+  private newFormula(sheet: Sheet, text: string, row: number, column: number): FormulaCell {
+    const here: RangeRef = { sheet: sheet.name, top: row, left: column, bottom: row, right: column };
+    try {
+      const expression = parseFormula(text, sheet.name);
+      return { text, expression, syntaxError: undefined, reads: referencedRanges(expression), result: { grid: [[null]] }, area: here, blocked: false, generation: 0 };
+    } catch (error) {
+      const message = error instanceof FormulaSyntaxError ? error.message : String(error);
+      return { text, expression: undefined, syntaxError: message, reads: [], result: { error: { error: '#NAME?', message } }, area: here, blocked: false, generation: 0 };
+    }
+  }
+
+  private *everyFormula(): Generator<FormulaCell> {
+    for (const sheet of this.sheets) yield* sheet.formulas.values();
+  }
+
+  private formulasReading(range: RangeRef): Set<FormulaCell> {
+    const found = new Set<FormulaCell>();
+    for (const f of this.everyFormula()) if (f.reads.some((r) => rangesOverlap(r, range))) found.add(f);
+    return found;
+  }
+
+  private allFormulasReading(sheetName: string): Set<FormulaCell> {
+    const lower = sheetName.toLowerCase();
+    return new Set([...this.everyFormula()].filter((f) => f.reads.some((r) => r.sheet.toLowerCase() === lower)));
+  }
+
+  private formulasSpillingInto(range: RangeRef): Set<FormulaCell> {
+    return new Set([...this.everyFormula()].filter((f) => rangesOverlap(f.area, range)));
+  }
+
+  private formulasCalling(id: string): Set<FormulaCell> {
+    const calls = (e: Expression | undefined | null): boolean =>
+      e !== undefined && e !== null && e.kind === 'call' && (e.name === `${NAMESPACE}${id}` || e.args.some(calls));
+    return new Set([...this.everyFormula()].filter((f) => calls(f.expression)));
+  }
+
+  private anchorOf(formula: FormulaCell): { sheet: Sheet; row: number; column: number } | undefined {
+    for (const sheet of this.sheets) {
+      for (const [k, f] of sheet.formulas) if (f === formula) return { sheet, row: rowOf(k), column: columnOf(k) };
+    }
+    return undefined;
+  }
+
+  private recalculate(dirty: Set<FormulaCell>): void {
+    let pending = dirty;
+    for (let pass = 0; pass < MAX_PASSES && pending.size > 0; pass++) {
+      const next = new Set<FormulaCell>();
+      for (const formula of pending) {
+        const place = this.anchorOf(formula);
+        if (place === undefined || formula.expression === undefined) continue;
+        const before = formula.area;
+        const outcome = evaluate(formula.expression, {
+          valueAt: (s, r, c) => {
+            const target = this.find(s);
+            return target === undefined ? { error: '#REF!' } : this.value(target, r, c);
+          },
+          hasSheet: (s) => this.hasSheet(s),
+          lookup: (name) => this.functions.get(name.toUpperCase()),
+        });
+        if (outcome instanceof Promise) {
+          const generation = ++formula.generation;
+          this.place(place.sheet, place.row, place.column, formula, { error: { error: '#BUSY!', message: 'Calculating…' } });
+          void outcome.then((result) => {
+            if (formula.generation !== generation || this.anchorOf(formula) === undefined) return;
+            const settled = formula.area;
+            this.place(place.sheet, place.row, place.column, formula, result);
+            this.recalculate(new Set([...this.formulasReading(settled), ...this.formulasReading(formula.area)]));
+            this.notify();
+          });
+        } else {
+          formula.generation++;
+          this.place(place.sheet, place.row, place.column, formula, outcome);
+        }
+        for (const f of this.formulasReading(before)) if (f !== formula) next.add(f);
+        for (const f of this.formulasReading(formula.area)) if (f !== formula) next.add(f);
+      }
+      pending = next;
+    }
+  }
+
+  private clearSpill(sheet: Sheet, anchor: number, formula: FormulaCell): void {
+    if (formula.blocked) return;
+    const { area } = formula;
+    for (let r = area.top; r <= area.bottom; r++) {
+      for (let c = area.left; c <= area.right; c++) {
+        const k = key(r, c);
+        if (k !== anchor) sheet.spilled.delete(k);
+      }
+    }
+  }
+
+  /** Writes a result at its anchor and spills it, unless any target cell is taken. */
+  private place(sheet: Sheet, row: number, column: number, formula: FormulaCell, result: FormulaResult): void {
+    const anchor = key(row, column);
+    this.clearSpill(sheet, anchor, formula);
+    formula.result = result;
+    const grid = 'grid' in result ? result.grid : [[null]];
+    formula.area = { sheet: sheet.name, top: row, left: column, bottom: row + grid.length - 1, right: column + grid[0].length - 1 };
+    formula.blocked = false;
+    if (!('grid' in result)) return;
+    const occupied = (r: number, c: number): boolean => {
+      const k = key(r, c);
+      return k !== anchor && (sheet.inputs.has(k) || sheet.formulas.has(k) || sheet.spilled.has(k));
+    };
+    for (let r = formula.area.top; r <= formula.area.bottom; r++) {
+      for (let c = formula.area.left; c <= formula.area.right; c++) {
+        if (occupied(r, c)) {
+          formula.blocked = true;
+          return;
+        }
+      }
+    }
+    grid.forEach((cells, i) =>
+      cells.forEach((value, j) => {
+        if (i !== 0 || j !== 0) sheet.spilled.set(key(row + i, column + j), value);
+      }),
+    );
+  }
+}
+
+export function createWorkbook(firstSheet = 'Sheet1'): PreviewWorkbook {
+  return new PreviewWorkbook(firstSheet);
+}
+

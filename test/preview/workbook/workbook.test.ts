@@ -1,0 +1,111 @@
+/**
+ * The preview workbook's spreadsheet behaviour: formulas with A1 references, spilling, blocked
+ * spills, recalculation of dependents, and errors with messages. The functions here are small
+ * stand-ins registered for the test, so each expectation is computed by hand.
+ */
+import { describe, expect, it } from 'vitest';
+import { createWorkbook } from '../../../src/preview/workbook/workbook';
+
+function setup() {
+  const wb = createWorkbook('Data');
+  wb.addSheet('Planned batches');
+  // SUMCOL: one column of column sums of a range; SCALE: a range times a scalar.
+  wb.registerFunction('SUMCOL', (range: unknown) => {
+    const grid = range as unknown[][];
+    return grid[0].map((_, j) => [grid.reduce((s, row) => s + (typeof row[j] === 'number' ? (row[j] as number) : 0), 0)]);
+  });
+  wb.registerFunction('SCALE', (range: unknown, factor: unknown) => (range as number[][]).map((r) => r.map((v) => v * (factor as number))));
+  wb.registerFunction('FAIL', () => {
+    throw { code: '#VALUE!', message: 'known_y is empty: select the column of responses.' };
+  });
+  wb.setFunctionShapes([{ id: 'SCALE', parameters: [{ dimensionality: 'matrix', optional: false }, { dimensionality: 'scalar', optional: false }] }]);
+  wb.setInputs('Data', 0, 0, [[1, 2], [3, 4], [5, 6]]);
+  return wb;
+}
+
+const at = (sheet: string, row: number, column: number) => ({ sheet, row, column });
+
+describe('preview workbook', () => {
+  it('spills a function result from its cell', () => {
+    const wb = setup();
+    wb.setInputs('Data', 0, 3, [['=PLUMB.SUMCOL(A1:B3)']]);
+    expect(wb.valueAt(at('Data', 0, 3))).toBe(9);
+    expect(wb.valueAt(at('Data', 1, 3))).toBe(12);
+    expect(wb.inputAt(at('Data', 0, 3))).toBe('=PLUMB.SUMCOL(A1:B3)');
+    expect(wb.inputAt(at('Data', 1, 3))).toBeNull();
+  });
+
+  it('reads quoted sheet names and absolute references, and passes a one-cell scalar argument as a value', () => {
+    const wb = setup();
+    wb.setInputs('Planned batches', 0, 0, [[10]]);
+    wb.setInputs('Data', 5, 0, [["=PLUMB.SCALE(Data!$A$1:$B$2, 'Planned batches'!$A$1)"]]);
+    expect(wb.valueAt(at('Data', 5, 0))).toBe(10);
+    expect(wb.valueAt(at('Data', 6, 1))).toBe(40);
+  });
+
+  it('recalculates dependents, and their dependents, when a cell is edited', () => {
+    const wb = setup();
+    wb.setInputs('Data', 0, 3, [['=PLUMB.SUMCOL(A1:B3)']]);
+    wb.setInputs('Data', 0, 5, [['=PLUMB.SCALE(D1:D2, 2)']]);
+    expect(wb.valueAt(at('Data', 1, 5))).toBe(24);
+    wb.setInputs('Data', 2, 1, [[16]]);
+    expect(wb.valueAt(at('Data', 1, 3))).toBe(22);
+    expect(wb.valueAt(at('Data', 1, 5))).toBe(44);
+  });
+
+  it('shows #SPILL! when the result would overwrite a cell, and spills once the cell is cleared', () => {
+    const wb = setup();
+    wb.setInputs('Data', 1, 3, [['in the way']]);
+    wb.setInputs('Data', 0, 3, [['=PLUMB.SUMCOL(A1:B3)']]);
+    expect(wb.valueAt(at('Data', 0, 3))).toMatchObject({ error: '#SPILL!' });
+    wb.setInputs('Data', 1, 3, [[null]]);
+    expect(wb.valueAt(at('Data', 0, 3))).toBe(9);
+    expect(wb.valueAt(at('Data', 1, 3))).toBe(12);
+  });
+
+  it('shows a thrown error with its message, an unknown function as #NAME?, a bad sheet as #REF!', () => {
+    const wb = setup();
+    wb.setInputs('Data', 0, 3, [['=PLUMB.FAIL()'], ['=PLUMB.NOPE(A1)'], ['=PLUMB.SUMCOL(Nowhere!A1:A2)'], ['=PLUMB.SUMCOL(A1:']]);
+    expect(wb.valueAt(at('Data', 0, 3))).toEqual({ error: '#VALUE!', message: 'known_y is empty: select the column of responses.' });
+    expect(wb.valueAt(at('Data', 1, 3))).toMatchObject({ error: '#NAME?' });
+    expect(wb.valueAt(at('Data', 2, 3))).toMatchObject({ error: '#REF!' });
+    expect(wb.valueAt(at('Data', 3, 3))).toMatchObject({ error: '#NAME?' });
+  });
+
+  it('evaluates formulas entered before their function is registered once it is', () => {
+    const wb = createWorkbook('Data');
+    wb.setInputs('Data', 0, 0, [[2], ['=PLUMB.LATE(A1)']]);
+    expect(wb.valueAt(at('Data', 1, 0))).toMatchObject({ error: '#NAME?' });
+    wb.registerFunction('late', (r: unknown) => (r as number[][])[0][0] * 3);
+    expect(wb.valueAt(at('Data', 1, 0))).toBe(6);
+  });
+
+  it('passes blanks as "" and null results show as 0, as Excel does', () => {
+    const wb = createWorkbook('Data');
+    let seen: unknown;
+    wb.registerFunction('PEEK', (r: unknown) => {
+      seen = r;
+      return [[null, 'x']];
+    });
+    wb.setInputs('Data', 0, 0, [[1, null]]);
+    wb.setInputs('Data', 2, 0, [['=PLUMB.PEEK(A1:B1)']]);
+    expect(seen).toEqual([[1, '']]);
+    expect(wb.valueAt(at('Data', 2, 0))).toBe(0);
+    expect(wb.valueAt(at('Data', 2, 1))).toBe('x');
+  });
+
+  it('keeps sheet names unique and valid, and never deletes the last sheet', () => {
+    const wb = createWorkbook('Data');
+    expect(() => wb.addSheet('data')).toThrow(/already exists/);
+    expect(() => wb.addSheet('a/b')).toThrow(/not a valid sheet name/);
+    expect(() => wb.deleteSheet('Data')).toThrow(/at least one sheet/);
+    wb.addSheet('Report');
+    expect(wb.sheetNames()).toEqual(['Data', 'Report']);
+  });
+
+  it('reports the used extent including spilled values', () => {
+    const wb = setup();
+    wb.setInputs('Data', 0, 3, [['=PLUMB.SUMCOL(A1:B3)']]);
+    expect(wb.usedExtent('Data')).toEqual({ rows: 3, columns: 4 });
+  });
+});
