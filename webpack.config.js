@@ -43,6 +43,16 @@ module.exports = (env = {}, argv = {}) => {
       filename: "[name].js",
       clean: true,
     },
+    // One runtime and one copy of the engine for every page: in the shared runtime the cell
+    // functions and the pane then use the very same fit cache, so they can never disagree.
+    optimization: {
+      runtimeChunk: "single",
+      splitChunks: {
+        cacheGroups: {
+          engine: { test: /[\\/]src[\\/]engine[\\/]|[\\/]node_modules[\\/]@stdlib[\\/]/, name: "engine", chunks: "all", enforce: true },
+        },
+      },
+    },
     resolve: {
       extensions: [".ts", ".tsx", ".js"],
     },
@@ -81,6 +91,7 @@ module.exports = (env = {}, argv = {}) => {
       new CopyWebpackPlugin({
         patterns: [
           { from: "src/preview/preview.css", to: "preview.css" },
+          { from: "src/taskpane/taskpane.css", to: "taskpane.css" },
           { from: "assets/*.png", to: "assets/[name][ext]" },
           { from: "manifest.xml", to: "manifest.xml" },
         ],

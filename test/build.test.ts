@@ -10,7 +10,7 @@ import { ORIGIN, ROOT, loadManifest, urlsIn } from "./support/manifest";
 
 // Every PLUMB cell function spills a grid, so each result is a matrix in functions.json.
 const EXPECTED_FUNCTIONS: ReadonlyArray<{ id: string; dimensionality: string }> = [
-  "TERMS", "ESTIMATES", "STDERRORS", "INTERVALS", "COVARIANCE", "FITSTATS", "NESTEDF", "PREDICT",
+  "TERMS", "ESTIMATES", "STDERRORS", "INTERVALS", "COVARIANCE", "FITSTATS", "NESTEDF", "PREDICT", "RESIDUALS",
 ].map((id) => ({ id, dimensionality: "matrix" }));
 
 const OFFICE_JS = "https://appsforoffice.microsoft.com/lib/1/hosted/office.js";
@@ -104,7 +104,16 @@ describe("production build", () => {
 
   it("makes preview.html load the shim first, then the unmodified functions and pane bundles, and nothing external", () => {
     const sources = scriptSources(readFileSync(join(outDir, "preview.html"), "utf8")).map((s) => s.replace(/^\.?\//, ""));
-    expect(sources).toEqual(["preview.js", "functions.js", "taskpane.js"]);
+    expect(sources).toEqual(["runtime.js", "preview.js", "engine.js", "functions.js", "taskpane.js"]);
+  });
+
+  it("ships the engine once, in a chunk both the functions and the pane use, so they share one fit cache", () => {
+    // An engine error message stands for the engine's code: it survives minification.
+    const marker = "more rows than parameters";
+    expect(readFileSync(join(outDir, "engine.js"), "utf8")).toContain(marker);
+    for (const bundle of ["functions.js", "taskpane.js", "preview.js"]) {
+      expect(readFileSync(join(outDir, bundle), "utf8")).not.toContain(marker);
+    }
   });
 
   it("loads no external script other than Office.js", () => {

@@ -4,6 +4,15 @@
 export { fitModel } from './fitModel';
 export { compareNested } from './compareNested';
 export { predict } from './predict';
+export {
+  residualDiagnostics,
+  maxCooksDistance,
+  highLeverageCount,
+  type ResidualDiagnostics,
+  type RowDiagnostics,
+  type DiagnosticFlag,
+  type UndefinedReason,
+} from './infer/influence';
 export { EngineError, type EngineErrorCode } from './errors';
 export type {
   FitSettings,

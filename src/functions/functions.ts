@@ -7,7 +7,7 @@
  * Shared settings, always the last four arguments and in this order: level, intercept,
  * known_sigma, weights.
  */
-import { compareNested, fitModel, predict as predictRows } from '../engine';
+import { compareNested, fitModel, predict as predictRows, residualDiagnostics } from '../engine';
 import { guarded } from './cellError';
 import type { RangeArgument } from './cellInput';
 import { toCellGrid } from './cellInput';
@@ -17,6 +17,7 @@ import { covarianceGrid, estimatesGrid, intervalsGrid, standardErrorsGrid } from
 import { fitStatsGrid } from './grids/fitStatsGrid';
 import { nestedGrid } from './grids/nestedGrid';
 import { predictGrid } from './grids/predictGrid';
+import { residualsGrid } from './grids/residualsGrid';
 import { termsGrid } from './grids/termsGrid';
 
 /* eslint-disable @typescript-eslint/no-explicit-any -- ranges arrive from Excel as any[][] */
@@ -203,5 +204,23 @@ export function predict(
       rows.map((row) => (row === undefined ? undefined : predicted[next++])),
       r.frame.hasHeader,
     );
+  });
+}
+
+/**
+ * Which rows stand out: fitted value, residual, standardized and studentized residuals, leverage, Cook's distance, DFFITS and a flag for every row used.
+ * @customfunction RESIDUALS
+ * @param known_y Responses: one column, with an optional text header.
+ * @param known_x Predictors: one or more columns with the same rows. Text columns are categorical.
+ * @param [level] Confidence level, accepted as in every PLUMB function; it does not change these diagnostics. Default 0.95.
+ * @param [intercept] TRUE (default) fits an intercept; FALSE forces the model through zero.
+ * @param [known_sigma] The noise standard deviation if known; used for the standardized residual and Cook's distance. Default: estimated.
+ * @param [weights] Optional column of positive case weights, same rows as known_y.
+ * @returns A table with a header row and one row per row used, numbered by its position in known_y.
+ */
+export function residuals(known_y: any[][], known_x: any[][], level?: any, intercept?: any, known_sigma?: any, weights?: any[][]): any[][] {
+  return guarded(() => {
+    const r = request(known_y, known_x, level, intercept, known_sigma, weights);
+    return residualsGrid(residualDiagnostics(r.frame.data, r.settings), r.frame);
   });
 }

@@ -1,8 +1,201 @@
+import { useMemo, useState } from 'preact/hooks';
+import { freezeActiveReport } from './excel/freezeCopy';
+import { readRanges } from './excel/readRanges';
+import { selectedAddress } from './excel/selection';
+import { writeReport } from './excel/writeReport';
+import { analyze, type ReadData } from './model/analysis';
+import { EMPTY_CHOICES, type FieldProblem, type PaneChoices, resolveRanges } from './model/choices';
+import { asCellGrid } from './model/readValues';
+import { planReport } from './model/reportPlan';
+import { DataSummary } from './views/DataSummary';
+import { RangeField } from './views/RangeField';
+import { ResultCards } from './views/ResultCards';
+import { useOfficeTheme } from './views/useOfficeTheme';
+
+type Status = { kind: 'idle' } | { kind: 'busy'; what: string } | { kind: 'done'; message: string } | { kind: 'failed'; message: string };
+
+function failure(error: unknown): string {
+  return error instanceof Error ? error.message : String(error);
+}
+
+/** The guided pane: data, settings, comparison and prediction choices, results in words, and the report. */
 export function App() {
+  useOfficeTheme();
+  const [choices, setChoices] = useState<PaneChoices>(EMPTY_CHOICES);
+  const [problems, setProblems] = useState<FieldProblem[]>([]);
+  const [data, setData] = useState<ReadData | undefined>(undefined);
+  const [status, setStatus] = useState<Status>({ kind: 'idle' });
+
+  const update = (patch: Partial<PaneChoices>) => setChoices((c) => ({ ...c, ...patch }));
+  const problemFor = (field: keyof PaneChoices) => problems.find((p) => p.field === field)?.message;
+  const analysis = useMemo(() => {
+    if (data === undefined) return undefined;
+    try {
+      return analyze(data, choices);
+    } catch (error) {
+      return failure(error);
+    }
+  }, [data, choices]);
+
+  const useSelection = (field: 'response' | 'predictors' | 'weights' | 'newRows', append = false) => async () => {
+    try {
+      const address = await selectedAddress();
+      setChoices((c) => ({ ...c, [field]: append && c[field].trim() !== '' ? `${c[field]},${address}` : address, ...(field === 'predictors' ? { added: [] } : {}) }));
+    } catch (error) {
+      setStatus({ kind: 'failed', message: failure(error) });
+    }
+  };
+
+  const readAndFit = async () => {
+    const { ranges, problems: found } = resolveRanges(choices);
+    setProblems(found);
+    if (ranges === undefined) return;
+    const cellCount = (ranges.response.bottom - ranges.response.top + 1) * (ranges.predictorColumns.length + 1);
+    setStatus({ kind: 'busy', what: `Reading ${cellCount.toLocaleString('en-US')} cells…` });
+    try {
+      const toRead = [ranges.response, ...ranges.predictorColumns, ...(ranges.weights ? [ranges.weights] : [])];
+      const grids = (await readRanges(toRead)).map(asCellGrid);
+      setData({ response: grids[0], predictorColumns: grids.slice(1, 1 + ranges.predictorColumns.length), weights: ranges.weights ? grids[grids.length - 1] : undefined });
+      setStatus({ kind: 'idle' });
+    } catch (error) {
+      setStatus({ kind: 'failed', message: failure(error) });
+    }
+  };
+
+  const report = async () => {
+    const { ranges, problems: found } = resolveRanges(choices);
+    setProblems(found);
+    if (ranges === undefined || analysis === undefined || typeof analysis === 'string') return;
+    setStatus({ kind: 'busy', what: 'Writing the report…' });
+    try {
+      const name = await writeReport((sheetName) => planReport({ sheetName, ranges, choices, analysis, writtenAt: new Date() }));
+      setStatus({ kind: 'done', message: `Report written to the new sheet "${name}". Its formulas stay live: edit the data or its settings cells and it recalculates.` });
+    } catch (error) {
+      setStatus({ kind: 'failed', message: `No report was written: ${failure(error)}` });
+    }
+  };
+
+  const freeze = async () => {
+    setStatus({ kind: 'busy', what: 'Copying values…' });
+    try {
+      const name = await freezeActiveReport(new Date());
+      setStatus({ kind: 'done', message: `Values-only copy written to "${name}": it reads the same in Excel without Plumbline.` });
+    } catch (error) {
+      setStatus({ kind: 'failed', message: failure(error) });
+    }
+  };
+
+  const predictorNames = data?.predictorColumns.map((column, j) => {
+    const first = column[0]?.[0];
+    return typeof analysis === 'object' && analysis.frame.hasHeader && typeof first === 'string' ? first : `x${j + 1}`;
+  });
+
   return (
-    <main>
+    <main class="pane">
       <h1>Plumbline</h1>
-      <p>The guided regression pane is coming soon.</p>
+      <section aria-labelledby="data-heading">
+        <h2 id="data-heading">Data</h2>
+        <RangeField id="response" label="Response (one column)" hint="Include the header cell to name it." value={choices.response} problem={problemFor('response')} onChange={(response) => update({ response })} onUseSelection={useSelection('response')} />
+        <RangeField
+          id="predictors"
+          label="Predictors"
+          hint="One or more column areas with the response's rows. Text columns are categorical."
+          value={choices.predictors}
+          problem={problemFor('predictors')}
+          onChange={(predictors) => update({ predictors, added: [] })}
+          onUseSelection={useSelection('predictors')}
+          onAddSelection={useSelection('predictors', true)}
+        />
+        <button type="button" class="primary" onClick={readAndFit}>
+          Read data and fit
+        </button>
+        {status.kind === 'busy' && (
+          <div class="progress" role="status">
+            <progress aria-label={status.what} />
+            <span>{status.what}</span>
+          </div>
+        )}
+        {typeof analysis === 'string' && (
+          <p class="problem" role="alert">
+            {analysis}
+          </p>
+        )}
+        {typeof analysis === 'object' && <DataSummary analysis={analysis} />}
+      </section>
+
+      <section aria-labelledby="settings-heading">
+        <h2 id="settings-heading">Settings</h2>
+        <div class="field">
+          <label for="level">Confidence level</label>
+          <input id="level" type="number" min="0.5" max="0.999" step="0.01" value={choices.level} onChange={(e) => update({ level: Number((e.currentTarget as HTMLInputElement).value) })} />
+          {problemFor('level') && <p class="problem" role="alert">{problemFor('level')}</p>}
+        </div>
+        <div class="field checkbox">
+          <input id="intercept" type="checkbox" checked={choices.intercept} onChange={(e) => update({ intercept: (e.currentTarget as HTMLInputElement).checked })} />
+          <label for="intercept">Fit an intercept</label>
+        </div>
+        <div class="field">
+          <label for="known-sigma">Known σ (leave empty to estimate it)</label>
+          <input id="known-sigma" type="text" inputMode="decimal" value={choices.knownSigma} onChange={(e) => update({ knownSigma: (e.currentTarget as HTMLInputElement).value })} />
+          {problemFor('knownSigma') && <p class="problem" role="alert">{problemFor('knownSigma')}</p>}
+        </div>
+        <RangeField id="weights" label="Weights (optional)" hint="A column of positive weights with the response's rows." value={choices.weights} problem={problemFor('weights')} onChange={(weights) => update({ weights })} onUseSelection={useSelection('weights')} />
+      </section>
+
+      <section aria-labelledby="compare-heading">
+        <h2 id="compare-heading">Compare</h2>
+        {predictorNames === undefined ? (
+          <p class="hint">Read the data first; then tick the predictors whose contribution you want tested, for example "does bean age add anything?".</p>
+        ) : (
+          <fieldset>
+            <legend>Test whether these added predictors help</legend>
+            {predictorNames.map((name, j) => (
+              <div class="field checkbox" key={name}>
+                <input
+                  id={`added-${j}`}
+                  type="checkbox"
+                  checked={choices.added.includes(j)}
+                  onChange={(e) => update({ added: (e.currentTarget as HTMLInputElement).checked ? [...choices.added, j].sort((a, b) => a - b) : choices.added.filter((k) => k !== j) })}
+                />
+                <label for={`added-${j}`}>{name}</label>
+              </div>
+            ))}
+          </fieldset>
+        )}
+      </section>
+
+      <section aria-labelledby="predict-heading">
+        <h2 id="predict-heading">Predict</h2>
+        <RangeField id="new-rows" label="New rows (optional)" hint="Laid out like the predictors, with or without the header row." value={choices.newRows} problem={problemFor('newRows')} onChange={(newRows) => update({ newRows })} onUseSelection={useSelection('newRows')} />
+      </section>
+
+      <section aria-labelledby="results-heading" aria-live="polite">
+        <h2 id="results-heading">Results</h2>
+        {typeof analysis === 'object' ? <ResultCards analysis={analysis} level={choices.level} /> : <p class="hint">Results appear here once the data are read.</p>}
+      </section>
+
+      <section aria-labelledby="report-heading">
+        <h2 id="report-heading">Report</h2>
+        <div class="actions">
+          <button type="button" class="primary" onClick={report} disabled={typeof analysis !== 'object'}>
+            Write report
+          </button>
+          <button type="button" onClick={freeze}>
+            Freeze a copy
+          </button>
+        </div>
+        <p class="hint">Write report adds a new sheet of live formulas. Freeze a copy turns the active report into plain values, for colleagues without Plumbline.</p>
+        {status.kind === 'done' && (
+          <p class="done" role="status">
+            {status.message}
+          </p>
+        )}
+        {status.kind === 'failed' && (
+          <p class="problem" role="alert">
+            {status.message}
+          </p>
+        )}
+      </section>
     </main>
   );
 }

@@ -29,6 +29,7 @@ const DATA_ARGUMENTS: Record<string, string[]> = {
   FITSTATS: ['known_y', 'known_x'],
   NESTEDF: ['known_y', 'base_x', 'added_x'],
   PREDICT: ['known_y', 'known_x', 'new_x'],
+  RESIDUALS: ['known_y', 'known_x'],
 };
 const SETTINGS = ['level', 'intercept', 'known_sigma', 'weights'];
 
@@ -41,7 +42,7 @@ beforeAll(async () => {
 });
 
 describe('generated function metadata', () => {
-  it('lists exactly the eight PLUMB functions', () => {
+  it('lists exactly the nine PLUMB functions', () => {
     expect(functions.map((f) => f.id).sort()).toEqual(Object.keys(DATA_ARGUMENTS).sort());
   });
 

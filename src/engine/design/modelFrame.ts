@@ -35,6 +35,8 @@ export interface ModelFrame {
   termNames: string[];
   /** For each predictor term (intercept excluded), the index of the x block it came from. */
   termBlocks: number[];
+  /** For each predictor term (intercept excluded), the source column (across blocks) it codes. */
+  termColumns: number[];
 }
 
 interface Located {
@@ -118,6 +120,7 @@ export function buildModelFrame(input: FrameInput): ModelFrame {
     data: { y, x: coded.x, names: coded.termNames, weights: input.weights === undefined ? undefined : weights },
     termNames: input.intercept ? [INTERCEPT_NAME, ...coded.termNames] : coded.termNames,
     termBlocks: coded.termColumns.map((c) => columnBlocks[c]),
+    termColumns: coded.termColumns,
   };
 }
 

@@ -1,5 +1,8 @@
 /** The Excel global: `Excel.run`, the request context class and the enums add-in code reads. */
 import type { WorkbookModel } from '../workbook/types';
+import { ShimChart } from './chart';
+import { ChartSeriesBy, ChartType } from './chartEnums';
+import { ShimChartCollection } from './charts';
 import { ShimClientObject } from './clientObject';
 import { ExcelErrorCodes, OfficeExtensionError } from './officeErrors';
 import { ShimRange } from './range';
@@ -72,7 +75,11 @@ export function createExcel(model: WorkbookModel) {
     ErrorCodes: ExcelErrorCodes,
     RangeValueType,
     ClearApplyTo,
+    ChartType,
+    ChartSeriesBy,
     Range: ShimRange,
+    Chart: ShimChart,
+    ChartCollection: ShimChartCollection,
     Worksheet: ShimWorksheet,
     WorksheetCollection: ShimWorksheetCollection,
     Workbook: ShimWorkbook,

@@ -8,7 +8,7 @@
  *   (ExcelApi ≤ 1.12, CustomFunctionsRuntime ≤ 1.3, SharedRuntime 1.1; anything else false).
  * - Excel.run(batch) and Excel.run(contextOrObject, batch), with the final implicit sync;
  *   new Excel.RequestContext(); context.sync(); Excel.ErrorCodes, Excel.RangeValueType,
- *   Excel.ClearApplyTo.
+ *   Excel.ClearApplyTo, Excel.ChartType, Excel.ChartSeriesBy.
  * - The load/sync model: load('a, b'), load(['a', 'b/c']), load({ a: true }), load({ select });
  *   reading a property before load and sync throws PropertyNotLoaded; writes are queued and
  *   applied in order at the next sync; a failing operation rejects the sync and leaves the
@@ -20,26 +20,47 @@
  *   Sheet2, Sheet3… names, getActiveWorksheet, items (load 'items' or 'items/name'), getCount.
  * - Worksheet: name (read, and set to rename), position, visibility,
  *   getRange(A1 or A1:B2, $ allowed, sheet-qualified), getCell, getUsedRange,
- *   getUsedRangeOrNullObject, activate, delete.
+ *   getUsedRangeOrNullObject, activate, delete, charts.
  * - Range: address and addressLocal (sheet names quoted as Excel writes them), values,
  *   formulas, numberFormat (read and write, 2-D arrays of the range's shape; null leaves a cell
  *   as it is), text, valueTypes, rowCount, columnCount, rowIndex, columnIndex, cellCount,
  *   worksheet; getCell, getResizedRange, getOffsetRange, getRow, getColumn, getLastRow,
- *   getLastColumn, getLastCell, select, clear('All' | 'Contents' | 'Formats'); track/untrack
- *   (no-ops). Blank cells read "", errors read as their text; written strings are read as
- *   Excel reads typed entries ("=…", "+…", "-…" become formulas; numbers, percents and
- *   TRUE/FALSE become values; cells formatted "@" keep text).
+ *   getLastColumn, getLastCell, select, clear('All' | 'Contents' | 'Formats', where formats are
+ *   number formats, bold, fill and wrapping); track/untrack (no-ops); format (below). Blank
+ *   cells read "", errors read as their text; written strings are read as Excel reads typed
+ *   entries ("=…", "+…", "-…" become formulas; numbers, percents and TRUE/FALSE become values;
+ *   cells formatted "@" keep text).
+ * - RangeFormat: columnWidth (points; read gives null when the columns differ), wrapText,
+ *   rowHeight (read only), autofitColumns() (width estimated from the length of the text each
+ *   column shows, columns showing nothing keep theirs), autofitRows() (nothing to do);
+ *   font.bold; fill.color ('#RRGGBB', 'RRGGBB' or a common HTML colour name; read as '#RRGGBB',
+ *   '#FFFFFF' without fill) and fill.clear(). Reads over cells that differ give null.
+ * - ChartCollection (worksheet.charts): add(Excel.ChartType.xyscatter, sourceData, seriesBy?)
+ *   — series laid out as Excel does (with series in columns the first column is X and each
+ *   further one a series of Y; 'Auto' runs series along the longer side; a first row or column
+ *   of text names the series); getItem(name) (case-insensitive), getItemOrNullObject,
+ *   getItemAt, getCount, count, items. New charts are named "Chart N" and are 360 × 216 points.
+ * - Chart: name (read/write), id, chartType, top/left/width/height (points, read/write),
+ *   setPosition(startCell, endCell?) with ranges or addresses, delete(), worksheet, title.text,
+ *   axes.categoryAxis.title.text (the X axis of a scatter chart), axes.valueAxis.title.text;
+ *   series: getItemAt, add(name?), getCount, count, items; ChartSeries: name (read/write; a
+ *   header name stays live), setXAxisValues(range), setValues(range), delete(). Charts read
+ *   their cells live and move and size with the cells under them.
  * - CustomFunctions.associate(id, fn) and associate(mappings) into model.registerFunction
  *   (ids upper-cased), CustomFunctions.Error(code, message?), CustomFunctions.ErrorCode.
  *
  * Not covered (calling one fails, or it is simply absent):
- * - Range.format (font, fill, borders, columnWidth, autofitColumns): the model keeps no
- *   formatting beyond number formats. Reading range.format throws ApiNotFound;
- *   Range.clear('Formats') resets number formats only.
+ * - Other formatting: borders, alignment, indent, protection, font colour/italic/size/name,
+ *   fill patterns, row heights (rows keep one height, so wrapped text shows its first line).
+ *   Touching one of these throws ApiNotFound rather than being silently ignored.
+ * - Chart types other than xyscatter (add rejects them with InvalidArgument), setData, legends,
+ *   data labels, chart and series formatting, axis scales (minimum, maximum, units), title
+ *   visibility, getImage, chart events. A new chart goes beside its data rather than in the
+ *   middle of the window as in Excel.
  * - Range.set(), insert, delete, getEntireRow/Column, getIntersection, getBoundingRect,
  *   getUsedRange on a range, Workbook.getRange/names/tables, Worksheet.getRanges.
  * - Whole-sheet ranges (getRange() with no address), whole rows or columns ("A:A", "1:1"),
- *   named items, tables, charts, events (onChanged, onSelectionChanged), protection, calculation
+ *   named items, tables, events (onChanged, onSelectionChanged), protection, calculation
  *   control, context.trackedObjects, Office.context.document, Office.addin, Office.actions,
  *   Office.initialize, worksheet ids, and writing a single scalar to a multi-cell range.
  * - Range.text follows General and plain numeric formats only, and ignores column width.

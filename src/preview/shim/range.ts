@@ -3,11 +3,12 @@
  * reaches it, then reads and writes cells there. Rows and columns are 0-based, as in the API.
  */
 import type { CellInput, RangeRef } from '../workbook/types';
-import { formatRange, MAX_COLUMNS, MAX_ROWS } from '../workbook/a1';
+import { formatRange, MAX_COLUMNS, MAX_ROWS } from '../../addressing/a1';
 import { cellText } from './cellText';
 import { apiFormula, apiValue, inputFromWrite, KEEP, valueType } from './cellValues';
 import { ShimClientObject, type Loadable } from './clientObject';
-import { invalidArgument, notInPreview } from './officeErrors';
+import { invalidArgument } from './officeErrors';
+import { ShimRangeFormat } from './rangeFormat';
 import type { SheetHandle, ShimRequestContext } from './requestContext';
 import { ShimWorksheet } from './worksheet';
 
@@ -80,6 +81,7 @@ export class ShimRange extends ShimClientObject<RangeTarget> {
   protected readonly typeName = 'Range';
   protected readonly scalarNames: readonly string[] = RANGE_SCALARS;
   private worksheetProxy: ShimWorksheet | undefined;
+  private formatProxy: ShimRangeFormat | undefined;
 
   constructor(
     context: ShimRequestContext,
@@ -95,7 +97,9 @@ export class ShimRange extends ShimClientObject<RangeTarget> {
   }
 
   protected override navigation(name: string): Loadable | undefined {
-    return name === 'worksheet' ? this.worksheet : undefined;
+    if (name === 'worksheet') return this.worksheet;
+    if (name === 'format') return this.format;
+    return undefined;
   }
 
   private ref(target: RangeTarget, location: string): RangeRef {
@@ -213,12 +217,10 @@ export class ShimRange extends ShimClientObject<RangeTarget> {
     model.setInputs(ref.sheet, ref.top, ref.left, inputs);
   }
 
-  /**
-   * The model keeps no fonts, fills or widths, so formatting cannot be shown; failing loudly
-   * here beats a TypeError deep inside the add-in's own code.
-   */
-  get format(): never {
-    throw notInPreview('Range.format');
+  /** Bold, fill, wrapping and column widths; like the real navigation property it needs no load itself. */
+  get format(): ShimRangeFormat {
+    this.formatProxy ??= new ShimRangeFormat(this.context, () => this.target('Range.format'));
+    return this.formatProxy;
   }
 
   /** The sheet the range is on; like the real navigation property it needs no load itself. */
@@ -282,7 +284,7 @@ export class ShimRange extends ShimClientObject<RangeTarget> {
     });
   }
 
-  /** 'All' (default), 'Contents' or 'Formats'; formats here means number formats only. */
+  /** 'All' (default), 'Contents' or 'Formats'; formats are number formats, bold, fill and wrapping (widths stay, as in Excel). */
   clear(applyTo?: string): void {
     const location = 'Range.clear';
     const mode = applyTo ?? 'All';
@@ -291,7 +293,10 @@ export class ShimRange extends ShimClientObject<RangeTarget> {
       const target = this.target(location);
       const ref = this.ref(target, location);
       if (mode !== 'Formats') this.context.model.setInputs(ref.sheet, ref.top, ref.left, grid(target, () => null));
-      if (mode !== 'Contents') this.context.model.setNumberFormats(ref.sheet, ref.top, ref.left, grid(target, () => 'General'));
+      if (mode !== 'Contents') {
+        this.context.model.setNumberFormats(ref.sheet, ref.top, ref.left, grid(target, () => 'General'));
+        this.context.model.clearStyles(ref);
+      }
     });
   }
 }

@@ -1,6 +1,7 @@
-/** Excel.Worksheet over the model: its name and position, ranges on it, activation, deletion. */
-import { parseRange, splitSheet } from '../workbook/a1';
-import { ShimClientObject } from './clientObject';
+/** Excel.Worksheet over the model: its name and position, ranges and charts on it, activation, deletion. */
+import { parseRange, splitSheet } from '../../addressing/a1';
+import { ShimChartCollection } from './charts';
+import { ShimClientObject, type Loadable } from './clientObject';
 import { invalidArgument, invalidOperation, itemAlreadyExists } from './officeErrors';
 import { insideGrid, rangeTarget, ShimRange, type RangeTarget } from './range';
 import type { SheetHandle, ShimRequestContext } from './requestContext';
@@ -11,6 +12,7 @@ const WORKSHEET_SCALARS = ['name', 'position', 'visibility'] as const;
 export class ShimWorksheet extends ShimClientObject<SheetHandle> {
   protected readonly typeName = 'Worksheet';
   protected readonly scalarNames: readonly string[] = WORKSHEET_SCALARS;
+  private chartsProxy: ShimChartCollection | undefined;
 
   /** `location` undefined: the handle is already known (collection items), nothing to queue. */
   constructor(
@@ -25,6 +27,16 @@ export class ShimWorksheet extends ShimClientObject<SheetHandle> {
 
   protected locate(): SheetHandle | null {
     return this.locator();
+  }
+
+  protected override navigation(name: string): Loadable | undefined {
+    return name === 'charts' ? this.charts : undefined;
+  }
+
+  /** Like the real navigation property it needs no load itself. */
+  get charts(): ShimChartCollection {
+    this.chartsProxy ??= new ShimChartCollection(this.context, () => this.target('Worksheet.charts'));
+    return this.chartsProxy;
   }
 
   protected readScalar(name: string, handle: SheetHandle): unknown {

@@ -1,6 +1,6 @@
 import { useEffect, useRef, useState } from 'preact/hooks';
-import { formatRange } from '../workbook/a1';
 import type { CellInput, RangeRef } from '../workbook/types';
+import { NameBox } from './NameBox';
 
 interface FormulaBarProps {
   selection: RangeRef;
@@ -9,6 +9,7 @@ interface FormulaBarProps {
   editSeed: { text: string | undefined; token: number };
   onCommit(text: string): void;
   onCancel(): void;
+  onGoTo(range: RangeRef): boolean;
 }
 
 function inputText(input: CellInput): string {
@@ -18,7 +19,7 @@ function inputText(input: CellInput): string {
 }
 
 /** The selected cell's address and its input, edited here: Enter commits, Escape cancels. */
-export function FormulaBar({ selection, input, editSeed, onCommit, onCancel }: FormulaBarProps) {
+export function FormulaBar({ selection, input, editSeed, onCommit, onCancel, onGoTo }: FormulaBarProps) {
   const field = useRef<HTMLInputElement>(null);
   const [text, setText] = useState(inputText(input));
 
@@ -31,9 +32,7 @@ export function FormulaBar({ selection, input, editSeed, onCommit, onCancel }: F
 
   return (
     <div class="formula-bar">
-      <output class="name-box" aria-label="Selected cell">
-        {formatRange(selection, false)}
-      </output>
+      <NameBox selection={selection} onGoTo={onGoTo} />
       <label class="visually-hidden" for="formula-input">
         Cell contents
       </label>

@@ -1,11 +1,13 @@
 import { useEffect, useRef, useState } from 'preact/hooks';
-import { cellAddress, columnLetters } from '../workbook/a1';
+import { cellAddress, columnLetters } from '../../addressing/a1';
+import { plotChart } from '../workbook/chartData';
+import { anchorAt, PIXELS_PER_POINT } from '../workbook/layout';
 import type { RangeRef } from '../workbook/types';
 import type { PreviewWorkbook } from '../workbook/workbook';
 import { formatValue } from './formatValue';
+import { ScatterChart } from './ScatterChart';
 
 const ROW_HEIGHT = 24;
-const COLUMN_WIDTH = 104;
 const HEADER_WIDTH = 52;
 /** Rows drawn beyond the visible window, so scrolling does not show blank gaps. */
 const OVERSCAN = 10;
@@ -35,8 +37,15 @@ export function Grid({ workbook, sheet, selection, onSelect, onStartEdit }: Grid
   const [scrollTop, setScrollTop] = useState(0);
   const [height, setHeight] = useState(600);
   const extent = workbook.usedExtent(sheet);
-  const rows = Math.max(MIN_ROWS, extent.rows + 20);
-  const columns = Math.max(MIN_COLUMNS, extent.columns + 3);
+  const charts = workbook.charts(sheet);
+  const widthOf = (column: number) => workbook.columnWidth(sheet, column);
+  // The grid reaches past the last chart too, so every chart can be scrolled into view.
+  const chartEnds = charts.map((c) => anchorAt(widthOf, c.bounds.left + c.bounds.width, c.bounds.top + c.bounds.height));
+  const rows = Math.max(MIN_ROWS, extent.rows + 20, ...chartEnds.map((e) => e.row + 2));
+  const columns = Math.max(MIN_COLUMNS, extent.columns + 3, ...chartEnds.map((e) => e.column + 2));
+  /** Column edges in pixels from the canvas's left, one more than there are columns. */
+  const edges = [HEADER_WIDTH];
+  for (let column = 0; column < columns; column++) edges.push(edges[column] + widthOf(column) * PIXELS_PER_POINT);
 
   useEffect(() => {
     const el = scroller.current;
@@ -93,14 +102,18 @@ export function Grid({ workbook, sheet, selection, onSelect, onStartEdit }: Grid
     for (let column = 0; column < columns; column++) {
       const position = { sheet, row, column };
       const value = workbook.valueAt(position);
+      const style = workbook.styleAt(position);
       const text = formatValue(value, workbook.numberFormatAt(position));
       const isError = typeof value === 'object' && value !== null;
+      const selected = inRange(selection, row, column);
       const classes = ['cell'];
       if (typeof value === 'number') classes.push('number');
-      // Text runs on into an empty neighbour, as readers of spreadsheets expect.
-      if (typeof value === 'string' && workbook.valueAt({ sheet, row, column: column + 1 }) === null) classes.push('overflowing');
+      if (style.bold) classes.push('bold');
+      if (style.wrap) classes.push('wrap');
+      // Text runs on into an empty neighbour, as readers of spreadsheets expect, unless it wraps.
+      else if (typeof value === 'string' && workbook.valueAt({ sheet, row, column: column + 1 }) === null) classes.push('overflowing');
       if (isError) classes.push('error');
-      if (inRange(selection, row, column)) classes.push('selected');
+      if (selected) classes.push('selected');
       if (row === anchor.row && column === anchor.column) classes.push('active');
       cells.push(
         <div
@@ -109,7 +122,8 @@ export function Grid({ workbook, sheet, selection, onSelect, onStartEdit }: Grid
           role="gridcell"
           data-cell={cellAddress(row, column)}
           title={isError ? (value.message ?? value.error) : text}
-          style={{ left: px(HEADER_WIDTH + column * COLUMN_WIDTH), width: px(COLUMN_WIDTH) }}
+          // The selection's tint wins over a fill so the selected cells stay visible.
+          style={{ left: px(edges[column]), width: px(edges[column + 1] - edges[column]), background: style.fill !== null && !selected ? style.fill : undefined }}
           onMouseDown={(e) => clickCell(row, column, e)}
           onDblClick={() => onStartEdit()}
         >
@@ -139,16 +153,27 @@ export function Grid({ workbook, sheet, selection, onSelect, onStartEdit }: Grid
       onScroll={(e) => setScrollTop((e.currentTarget as HTMLDivElement).scrollTop)}
       onKeyDown={onKeyDown}
     >
-      <div class="grid-canvas" style={{ height: px(ROW_HEIGHT * (rows + 1)), width: px(HEADER_WIDTH + COLUMN_WIDTH * columns) }}>
+      <div class="grid-canvas" style={{ height: px(ROW_HEIGHT * (rows + 1)), width: px(edges[columns]) }}>
         <div class="column-headers" role="row" style={{ top: px(scrollTop) }}>
           <div class="corner" style={{ width: px(HEADER_WIDTH) }} />
           {Array.from({ length: columns }, (_, column) => (
-            <div key={column} class="column-header" role="columnheader" style={{ left: px(HEADER_WIDTH + column * COLUMN_WIDTH), width: px(COLUMN_WIDTH) }}>
+            <div key={column} class="column-header" role="columnheader" style={{ left: px(edges[column]), width: px(edges[column + 1] - edges[column]) }}>
               {columnLetters(column)}
             </div>
           ))}
         </div>
         {visible}
+        {charts.map((chart) => (
+          <ScatterChart
+            key={chart.id}
+            name={chart.name}
+            plotted={plotChart(workbook, chart)}
+            left={HEADER_WIDTH + chart.bounds.left * PIXELS_PER_POINT}
+            top={ROW_HEIGHT + chart.bounds.top * PIXELS_PER_POINT}
+            width={chart.bounds.width * PIXELS_PER_POINT}
+            height={chart.bounds.height * PIXELS_PER_POINT}
+          />
+        ))}
       </div>
     </div>
   );

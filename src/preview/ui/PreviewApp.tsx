@@ -1,5 +1,5 @@
 import { useEffect, useState } from 'preact/hooks';
-import { cellAddress } from '../workbook/a1';
+import { cellAddress } from '../../addressing/a1';
 import type { PreviewWorkbook } from '../workbook/workbook';
 import { FormulaBar } from './FormulaBar';
 import { Grid } from './Grid';
@@ -37,6 +37,11 @@ export function PreviewApp({ workbook }: { workbook: PreviewWorkbook }) {
         editSeed={editSeed}
         onCommit={commit}
         onCancel={() => document.querySelector<HTMLElement>('.grid-scroller')?.focus()}
+        onGoTo={(range) => {
+          if (!workbook.hasSheet(range.sheet)) return false;
+          workbook.select(range);
+          return true;
+        }}
       />
       <Grid
         workbook={workbook}

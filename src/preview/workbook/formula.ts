@@ -3,7 +3,7 @@
  * function call (`=PLUMB.TERMS(B1:B61, 'Planned batches'!$C$1:$F$6, 0.9, , FALSE)`), a reference
  * (`=B2`) or a constant. Arguments may be left empty, which passes an omitted argument.
  */
-import { parseRange } from './a1';
+import { parseRange } from '../../addressing/a1';
 import type { RangeRef } from './types';
 
 export type Expression =

@@ -2,6 +2,8 @@
  * The preview workbook's model, shared by its grid UI and by the Office.js shim. Rows and
  * columns are 0-based here; A1 text appears only at the edges (formulas, addresses).
  */
+import type { RangeRef } from '../../addressing/a1';
+
 
 /** What a cell holds as entered: a constant, or formula text starting with "=". */
 export type CellInput = number | string | boolean | null;
@@ -21,16 +23,50 @@ export interface CellPosition {
   column: number;
 }
 
-export interface RangeRef {
-  sheet: string;
-  top: number;
-  left: number;
-  /** Inclusive. */
-  bottom: number;
-  right: number;
-}
+export type { RangeRef };
 
 export type CustomFunction = (...args: unknown[]) => unknown;
+
+/** The cell formatting the preview keeps besides number formats. */
+export interface CellStyle {
+  bold: boolean;
+  /** '#RRGGBB' in capitals, or null for no fill. */
+  fill: string | null;
+  wrap: boolean;
+}
+
+/** Where a chart sits, in points from the sheet's top-left corner, as Excel's API measures it. */
+export interface ChartBounds {
+  left: number;
+  top: number;
+  width: number;
+  height: number;
+}
+
+export interface ChartSeriesSource {
+  /** Literal text, or the cell the name is read from (a header), which Excel keeps live. */
+  name: string | RangeRef;
+  /** Null: points are numbered 1, 2, 3… as Excel plots a series without X values. */
+  x: RangeRef | null;
+  /** Null only for a series added without values yet. */
+  y: RangeRef | null;
+}
+
+export interface ChartSpec {
+  /** Unique in the workbook and never reused; the name can change, the id cannot. */
+  id: string;
+  name: string;
+  type: 'XYScatter';
+  /** Null: the automatic title, the series name when there is exactly one series. */
+  title: string | null;
+  series: ChartSeriesSource[];
+  /** For a scatter chart the category axis is the horizontal (X) one; '' means no title. */
+  axisTitles: { category: string; value: string };
+  bounds: ChartBounds;
+}
+
+export type NewChart = Omit<ChartSpec, 'id' | 'name'> & { name?: string };
+export type ChartChange = Partial<Omit<ChartSpec, 'id' | 'type'>>;
 
 export interface WorkbookModel {
   sheetNames(): string[];
@@ -52,6 +88,26 @@ export interface WorkbookModel {
   numberFormatAt(position: CellPosition): string;
   setNumberFormats(sheet: string, top: number, left: number, formats: readonly (readonly string[])[]): void;
 
+  /** Bold, fill and wrapping; all off when never set. */
+  styleAt(position: CellPosition): CellStyle;
+  /** Changes the given style members on every cell of the range, keeping the others. */
+  setStyle(range: RangeRef, change: Partial<CellStyle>): void;
+  /** Resets bold, fill and wrapping on the range; number formats are separate. */
+  clearStyles(range: RangeRef): void;
+  /** In points; STANDARD_COLUMN_WIDTH when never set. */
+  columnWidth(sheet: string, column: number): number;
+  setColumnWidth(sheet: string, left: number, right: number, points: number): void;
+  /** In points; the preview keeps every row at one height. */
+  rowHeight(sheet: string): number;
+
+  /** The sheet's charts, front-most last; positions follow column widths, as charts move with their cells in Excel. */
+  charts(sheet: string): ChartSpec[];
+  /** Adds a chart named "Chart N" unless named; returns it with its id. */
+  addChart(sheet: string, chart: NewChart): ChartSpec;
+  /** Throws when no chart on the sheet has the id. */
+  updateChart(sheet: string, id: string, change: ChartChange): void;
+  removeChart(sheet: string, id: string): void;
+
   /** Rows and columns from A1 to the last non-empty input or spilled value; {0, 0} when empty. */
   usedExtent(sheet: string): { rows: number; columns: number };
 
@@ -60,6 +116,6 @@ export interface WorkbookModel {
 
   registerFunction(id: string, fn: CustomFunction): void;
 
-  /** Called after every change (edit, recalculation, sheet added/removed, selection). */
+  /** Called after every change (edit, recalculation, formatting, charts, sheet added/removed, selection). */
   subscribe(listener: () => void): () => void;
 }

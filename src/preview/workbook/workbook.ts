@@ -1,12 +1,26 @@
 /**
  * The preview workbook: sheets of cells holding constants or formulas, spilled results, number
- * formats and a selection. Editing a cell re-evaluates the formulas that read it, then the
+ * formats, cell styles, column widths, charts and a selection. Editing a cell re-evaluates the formulas that read it, then the
  * formulas that read their results, until nothing changes.
  */
-import { MAX_COLUMNS, rangesOverlap } from './a1';
+import { MAX_COLUMNS, rangesOverlap } from '../../addressing/a1';
 import { evaluate, type FormulaResult, type FunctionEntry, isCellError, NAMESPACE } from './evaluate';
+import { ChartList } from './charts';
 import { FormulaSyntaxError, parseFormula, referencedRanges, type Expression } from './formula';
-import type { CellError, CellInput, CellPosition, CellValue, CustomFunction, RangeRef, WorkbookModel } from './types';
+import { ROW_HEIGHT, STANDARD_COLUMN_WIDTH } from './layout';
+import type {
+  CellError,
+  CellInput,
+  CellPosition,
+  CellStyle,
+  CellValue,
+  ChartChange,
+  ChartSpec,
+  CustomFunction,
+  NewChart,
+  RangeRef,
+  WorkbookModel,
+} from './types';
 
 interface FormulaCell {
   text: string;
@@ -28,7 +42,13 @@ interface Sheet {
   formulas: Map<number, FormulaCell>;
   /** Values spilled from formulas into other cells, keyed by cell. */
   spilled: Map<number, CellValue>;
+  /** Only cells with some style set. */
+  styles: Map<number, CellStyle>;
+  widths: Map<number, number>;
+  charts: ChartList;
 }
+
+const PLAIN: CellStyle = { bold: false, fill: null, wrap: false };
 
 export interface FunctionShape {
   id: string;
@@ -49,6 +69,7 @@ export class PreviewWorkbook implements WorkbookModel {
   private readonly functions = new Map<string, FunctionEntry>();
   private readonly shapes = new Map<string, FunctionShape['parameters']>();
   private readonly listeners = new Set<() => void>();
+  private chartsAdded = 0;
 
   constructor(firstSheet = 'Sheet1') {
     this.addSheet(firstSheet);
@@ -65,7 +86,9 @@ export class PreviewWorkbook implements WorkbookModel {
 
   addSheet(name: string): void {
     this.validateNewName(name);
-    this.sheets.push({ name, inputs: new Map(), formats: new Map(), formulas: new Map(), spilled: new Map() });
+    const widths = new Map<number, number>();
+    const charts = new ChartList((column) => widths.get(column) ?? STANDARD_COLUMN_WIDTH);
+    this.sheets.push({ name, inputs: new Map(), formats: new Map(), formulas: new Map(), spilled: new Map(), styles: new Map(), widths, charts });
     this.recalculate(this.allFormulasReading(name));
     this.notify();
   }
@@ -76,6 +99,7 @@ export class PreviewWorkbook implements WorkbookModel {
     sheet.name = to;
     if (this.active === from) this.active = to;
     if (this.selected.sheet === from) this.selected = { ...this.selected, sheet: to };
+    for (const s of this.sheets) s.charts.renameSheet(from, to);
     this.notify();
   }
 
@@ -153,6 +177,62 @@ export class PreviewWorkbook implements WorkbookModel {
     this.notify();
   }
 
+  styleAt(p: CellPosition): CellStyle {
+    return { ...(this.sheet(p.sheet).styles.get(key(p.row, p.column)) ?? PLAIN) };
+  }
+
+  setStyle(range: RangeRef, change: Partial<CellStyle>): void {
+    const sheet = this.sheet(range.sheet);
+    this.eachCell(range, (k) => {
+      const style = { ...(sheet.styles.get(k) ?? PLAIN), ...change };
+      if (style.bold || style.fill !== null || style.wrap) sheet.styles.set(k, style);
+      else sheet.styles.delete(k);
+    });
+    this.notify();
+  }
+
+  clearStyles(range: RangeRef): void {
+    const sheet = this.sheet(range.sheet);
+    this.eachCell(range, (k) => sheet.styles.delete(k));
+    this.notify();
+  }
+
+  columnWidth(sheetName: string, column: number): number {
+    return this.sheet(sheetName).widths.get(column) ?? STANDARD_COLUMN_WIDTH;
+  }
+
+  setColumnWidth(sheetName: string, left: number, right: number, points: number): void {
+    if (!Number.isFinite(points) || points < 0) throw new Error(`${points} is not a column width.`);
+    const sheet = this.sheet(sheetName);
+    for (let c = left; c <= right; c++) sheet.widths.set(c, points);
+    this.notify();
+  }
+
+  rowHeight(sheetName: string): number {
+    this.sheet(sheetName);
+    return ROW_HEIGHT;
+  }
+
+  charts(sheetName: string): ChartSpec[] {
+    return this.sheet(sheetName).charts.list();
+  }
+
+  addChart(sheetName: string, chart: NewChart): ChartSpec {
+    const added = this.sheet(sheetName).charts.add(chart, `preview-chart-${++this.chartsAdded}`);
+    this.notify();
+    return added;
+  }
+
+  updateChart(sheetName: string, id: string, change: ChartChange): void {
+    this.sheet(sheetName).charts.update(id, change);
+    this.notify();
+  }
+
+  removeChart(sheetName: string, id: string): void {
+    this.sheet(sheetName).charts.remove(id);
+    this.notify();
+  }
+
   usedExtent(sheetName: string): { rows: number; columns: number } {
     const sheet = this.sheet(sheetName);
     let rows = 0;
@@ -203,6 +283,10 @@ export class PreviewWorkbook implements WorkbookModel {
 
   private notify(): void {
     for (const listener of this.listeners) listener();
+  }
+
+  private eachCell(range: RangeRef, visit: (k: number) => void): void {
+    for (let r = range.top; r <= range.bottom; r++) for (let c = range.left; c <= range.right; c++) visit(key(r, c));
   }
 
   private find(name: string): Sheet | undefined {

@@ -192,9 +192,9 @@ describe('members the preview lacks', () => {
   it('fail with ApiNotFound naming the member instead of a TypeError', async () => {
     await Excel.run(async (context) => {
       const range = context.workbook.worksheets.getItem('Data').getRange('A1');
-      const error = thrownOfficeError(() => range.format);
+      const error = thrownOfficeError(() => range.format.borders);
       expect(error.code).toBe('ApiNotFound');
-      expect(error.message).toBe('Range.format is not available in the preview workbook.');
+      expect(error.message).toBe('RangeFormat.borders is not available in the preview workbook.');
     });
   });
 });

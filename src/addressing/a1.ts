@@ -1,8 +1,15 @@
 /**
  * A1 notation: column letters, cell and range addresses with optional sheet names and `$`
- * anchors. Pure functions shared by the formula parser, the grid and the Office.js shim.
+ * anchors. Pure functions shared by the task pane and the preview host.
  */
-import type { RangeRef } from './types';
+/** A rectangular block of cells on one sheet; rows and columns are 0-based and inclusive. */
+export interface RangeRef {
+  sheet: string;
+  top: number;
+  left: number;
+  bottom: number;
+  right: number;
+}
 
 /** Excel's grid limits; addresses beyond them are invalid. */
 export const MAX_ROWS = 1_048_576;
@@ -84,4 +91,43 @@ export function rangeContains(range: RangeRef, sheet: string, row: number, colum
 
 export function rangesOverlap(a: RangeRef, b: RangeRef): boolean {
   return a.sheet === b.sheet && a.top <= b.bottom && b.top <= a.bottom && a.left <= b.right && b.left <= a.right;
+}
+
+/** "$B$1:$B$61" style, with the sheet: how report formulas refer to data so they survive copying. */
+export function formatAbsolute(range: RangeRef): string {
+  const cell = (row: number, column: number) => `$${columnLetters(column)}$${row + 1}`;
+  const start = cell(range.top, range.left);
+  const end = cell(range.bottom, range.right);
+  return `${quoteSheetName(range.sheet)}!${start === end ? start : `${start}:${end}`}`;
+}
+
+/** Splits a multi-area address ("Data!C1:E9,Data!G1:G9") at commas outside quoted sheet names. */
+export function splitAreas(address: string): string[] {
+  const areas: string[] = [];
+  let current = '';
+  let quoted = false;
+  for (const ch of address) {
+    if (ch === "'") quoted = !quoted;
+    if (ch === ',' && !quoted) {
+      areas.push(current.trim());
+      current = '';
+    } else {
+      current += ch;
+    }
+  }
+  if (current.trim() !== '') areas.push(current.trim());
+  return areas;
+}
+
+export function rowCount(range: RangeRef): number {
+  return range.bottom - range.top + 1;
+}
+
+export function columnCount(range: RangeRef): number {
+  return range.right - range.left + 1;
+}
+
+/** One single-column range per column of `range`. */
+export function columnsOf(range: RangeRef): RangeRef[] {
+  return Array.from({ length: columnCount(range) }, (_, j) => ({ ...range, left: range.left + j, right: range.left + j }));
 }

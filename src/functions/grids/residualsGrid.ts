@@ -1,0 +1,56 @@
+import type { DiagnosticFlag, ModelFrame, ResidualDiagnostics, RowDiagnostics, UndefinedReason } from '../../engine';
+import { finiteOrBlank, type Grid } from './gridCell';
+
+export const RESIDUALS_HEADER = [
+  'Row',
+  'Fitted',
+  'Residual',
+  'Standardized',
+  'Studentized',
+  'Leverage',
+  "Cook's distance",
+  'DFFITS',
+  'Flag',
+];
+
+const FLAG_TEXT: Record<DiagnosticFlag, string> = {
+  'high-leverage': 'high leverage',
+  outlier: 'outlier',
+  influential: 'influential',
+};
+
+/** Each text names what a blank above it means, so no blank is left unexplained. */
+const REASON_TEXT: Record<UndefinedReason, string> = {
+  'leverage-one': 'leverage 1: fit passes through this row',
+  'exact-fit': 'exact fit: every residual is 0, so they cannot be scaled',
+  'no-deleted-df': 'rows = parameters + 1: nothing left to estimate sigma without this row',
+  'rest-fit-exactly': 'the other rows fit exactly: studentized residual is unbounded',
+};
+
+/**
+ * One row per used data row. Row is that row's position in the input range (a header counts as
+ * row 1), so rows skipped for blanks leave visible gaps and every line traces back to its data.
+ */
+export function residualsGrid(diagnostics: ResidualDiagnostics, frame: ModelFrame): Grid {
+  return [[...RESIDUALS_HEADER], ...diagnostics.rows.map((row, i) => residualRow(row, frame.usedRows[i]))];
+}
+
+function residualRow(row: RowDiagnostics, position: number): Grid[number] {
+  return [
+    position,
+    finiteOrBlank(row.fitted),
+    finiteOrBlank(row.residual),
+    finiteOrBlank(row.standardized),
+    finiteOrBlank(row.studentized),
+    finiteOrBlank(row.leverage),
+    finiteOrBlank(row.cooksDistance),
+    finiteOrBlank(row.dffits),
+    flagText(row),
+  ];
+}
+
+export function flagText(row: RowDiagnostics): string {
+  const parts = row.flags.map((f) => FLAG_TEXT[f]);
+  if (row.undefinedBecause !== undefined) parts.push(REASON_TEXT[row.undefinedBecause]);
+  return parts.join(', ');
+}

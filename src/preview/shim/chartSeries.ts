@@ -1,0 +1,184 @@
+/** Excel.ChartSeriesCollection and ChartSeries: which cells each series of a chart reads. */
+import { seriesName } from '../workbook/chartData';
+import type { ChartSeriesSource, RangeRef } from '../workbook/types';
+import { ShimClientObject, ShimClientResult } from './clientObject';
+import { changeChart, liveChart, type ChartTarget } from './chartTarget';
+import { splitCollectionLoad } from './collectionLoad';
+import type { LoadSpec } from './loadOptions';
+import { invalidArgument, itemNotFound } from './officeErrors';
+import { ShimRange } from './range';
+import { rangeRefOf } from './rangeRef';
+import type { ShimRequestContext } from './requestContext';
+import { refuseMembers } from './unsupported';
+
+interface SeriesTarget {
+  chart: ChartTarget;
+  index: number;
+}
+
+export class ShimChartSeries extends ShimClientObject<SeriesTarget> {
+  protected readonly typeName = 'ChartSeries';
+  protected readonly scalarNames: readonly string[] = ['name'];
+
+  constructor(
+    context: ShimRequestContext,
+    private readonly locator: () => SeriesTarget,
+    location: string | undefined,
+  ) {
+    super(context);
+    if (location === undefined) this.resolveOrNull();
+    else this.queueResolve(location);
+  }
+
+  protected locate(): SeriesTarget {
+    return this.locator();
+  }
+
+  private source(target: SeriesTarget, location: string): ChartSeriesSource {
+    const series = liveChart(this.context, target.chart, location).chart.series[target.index];
+    if (series === undefined) throw itemNotFound(location);
+    return series;
+  }
+
+  private change(location: string, edit: (series: ChartSeriesSource) => ChartSeriesSource): void {
+    const target = this.target(location);
+    this.source(target, location);
+    changeChart(this.context, target.chart, location, (chart) => ({ series: chart.series.map((s, i) => (i === target.index ? edit(s) : s)) }));
+  }
+
+  protected readScalar(name: string, target: SeriesTarget): unknown {
+    const location = `ChartSeries.${name}`;
+    if (name !== 'name') throw invalidArgument(location);
+    return seriesName(this.context.model, this.source(target, location));
+  }
+
+  get name(): string {
+    return this.loadedValue('name');
+  }
+  set name(name: string) {
+    this.queueWrite('name', name, (_target, location) => {
+      if (typeof name !== 'string') throw invalidArgument(location);
+      this.change(location, (s) => ({ ...s, name }));
+    });
+  }
+
+  /** A one-row or one-column range; the chart keeps reading it, so later edits show. */
+  private sourceRange(range: unknown, location: string): RangeRef {
+    if (!(range instanceof ShimRange)) throw invalidArgument(location);
+    const ref = rangeRefOf(this.context, range.target(location), location);
+    if (ref.top !== ref.bottom && ref.left !== ref.right) throw invalidArgument(location);
+    return ref;
+  }
+
+  setXAxisValues(sourceData: unknown): void {
+    const location = 'ChartSeries.setXAxisValues';
+    this.context.enqueue(location, () => {
+      const x = this.sourceRange(sourceData, location);
+      this.change(location, (s) => ({ ...s, x }));
+    });
+  }
+
+  /** For a scatter chart these are the Y values. */
+  setValues(sourceData: unknown): void {
+    const location = 'ChartSeries.setValues';
+    this.context.enqueue(location, () => {
+      const y = this.sourceRange(sourceData, location);
+      this.change(location, (s) => ({ ...s, y }));
+    });
+  }
+
+  delete(): void {
+    const location = 'ChartSeries.delete';
+    this.context.enqueue(location, () => {
+      const target = this.target(location);
+      this.source(target, location);
+      changeChart(this.context, target.chart, location, (chart) => ({ series: chart.series.filter((_, i) => i !== target.index) }));
+    });
+  }
+}
+refuseMembers(ShimChartSeries.prototype, 'ChartSeries', ['format', 'markerStyle', 'markerSize', 'markerBackgroundColor', 'markerForegroundColor', 'trendlines', 'points', 'chartType']);
+
+export class ShimChartSeriesCollection extends ShimClientObject<ChartTarget> {
+  protected readonly typeName = 'ChartSeriesCollection';
+  protected readonly scalarNames: readonly string[] = ['count'];
+  private loadedItems: ShimChartSeries[] | undefined;
+
+  constructor(
+    context: ShimRequestContext,
+    private readonly locator: () => ChartTarget,
+  ) {
+    super(context);
+  }
+
+  protected locate(): ChartTarget {
+    return this.locator();
+  }
+
+  protected readScalar(name: string, target: ChartTarget): unknown {
+    const location = `ChartSeriesCollection.${name}`;
+    if (name !== 'count') throw invalidArgument(location);
+    return liveChart(this.context, target, location).chart.series.length;
+  }
+
+  /** As for other collections, member names without 'items/' mean those members of each item. */
+  override applyLoad(spec: LoadSpec): void {
+    const { scalars, items } = splitCollectionLoad(spec, this.scalarNames);
+    if (scalars.length > 0) super.applyLoad({ all: false, members: new Map(scalars.map((s) => [s, { all: true }])) });
+    if (items === undefined) return;
+    const target = this.target('ChartSeriesCollection.items');
+    const count = liveChart(this.context, target, 'ChartSeriesCollection.items').chart.series.length;
+    this.loadedItems = Array.from({ length: count }, (_, index) => new ShimChartSeries(this.context, () => ({ chart: target, index }), undefined));
+    for (const item of this.loadedItems) item.applyLoad(items);
+  }
+
+  get items(): ShimChartSeries[] {
+    return this.loadedItems ?? this.loadedValue('items');
+  }
+
+  get count(): number {
+    return this.loadedValue('count');
+  }
+
+  getCount(): ShimClientResult<number> {
+    const result = new ShimClientResult<number>();
+    const location = 'ChartSeriesCollection.getCount';
+    this.context.enqueue(location, () => result.settle(liveChart(this.context, this.target(location), location).chart.series.length));
+    return result;
+  }
+
+  // Whether Excel reports an index past the end as ItemNotFound or InvalidArgument is not
+  // checked against a live host; ItemNotFound says what happened.
+  getItemAt(index: number): ShimChartSeries {
+    const location = 'ChartSeriesCollection.getItemAt';
+    return new ShimChartSeries(
+      this.context,
+      () => {
+        const chart = this.target(location);
+        const count = liveChart(this.context, chart, location).chart.series.length;
+        if (!Number.isInteger(index) || index < 0) throw invalidArgument(location);
+        if (index >= count) throw itemNotFound(location);
+        return { chart, index };
+      },
+      location,
+    );
+  }
+
+  /** A series with no values yet, named "SeriesN" unless named, for setXAxisValues and setValues to fill. */
+  add(name?: string): ShimChartSeries {
+    const location = 'ChartSeriesCollection.add';
+    return new ShimChartSeries(
+      this.context,
+      () => {
+        const chart = this.target(location);
+        if (name !== undefined && typeof name !== 'string') throw invalidArgument(location);
+        let index = 0;
+        changeChart(this.context, chart, location, (c) => {
+          index = c.series.length;
+          return { series: [...c.series, { name: name ?? `Series${index + 1}`, x: null, y: null }] };
+        });
+        return { chart, index };
+      },
+      location,
+    );
+  }
+}

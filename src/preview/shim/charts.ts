@@ -1,0 +1,146 @@
+/**
+ * Excel.ChartCollection: a worksheet's charts. Only scatter charts can be made; any other type
+ * is refused with InvalidArgument, so an add-in learns at once that the preview cannot show it.
+ */
+import { columnLeft, ROW_HEIGHT } from '../workbook/layout';
+import type { ChartBounds, RangeRef } from '../workbook/types';
+import { ShimChart } from './chart';
+import type { ChartTarget } from './chartTarget';
+import { SERIES_BY, seriesFromSource, type SeriesBy } from './chartSource';
+import { ShimClientObject, ShimClientResult } from './clientObject';
+import { splitCollectionLoad } from './collectionLoad';
+import type { LoadSpec } from './loadOptions';
+import { invalidArgument, itemNotFound } from './officeErrors';
+import { ShimRange } from './range';
+import { rangeRefOf } from './rangeRef';
+import type { SheetHandle, ShimRequestContext } from './requestContext';
+
+/** Excel's size for a new chart: 5 by 3 inches. */
+const NEW_CHART_WIDTH = 360;
+const NEW_CHART_HEIGHT = 216;
+
+export class ShimChartCollection extends ShimClientObject<SheetHandle> {
+  protected readonly typeName = 'ChartCollection';
+  protected readonly scalarNames: readonly string[] = ['count'];
+  private loadedItems: ShimChart[] | undefined;
+
+  constructor(
+    context: ShimRequestContext,
+    private readonly locator: () => SheetHandle,
+  ) {
+    super(context);
+  }
+
+  protected locate(): SheetHandle {
+    return this.locator();
+  }
+
+  private sheetName(location: string): string {
+    return this.context.liveSheet(this.target(location), location);
+  }
+
+  protected readScalar(name: string): unknown {
+    const location = `ChartCollection.${name}`;
+    if (name !== 'count') throw invalidArgument(location);
+    return this.context.model.charts(this.sheetName(location)).length;
+  }
+
+  override applyLoad(spec: LoadSpec): void {
+    const { scalars, items } = splitCollectionLoad(spec, this.scalarNames);
+    if (scalars.length > 0) super.applyLoad({ all: false, members: new Map(scalars.map((s) => [s, { all: true }])) });
+    if (items === undefined) return;
+    const sheet = this.target('ChartCollection.items');
+    const charts = this.context.model.charts(this.sheetName('ChartCollection.items'));
+    this.loadedItems = charts.map((chart) => new ShimChart(this.context, () => ({ sheet, id: chart.id }), undefined));
+    for (const item of this.loadedItems) item.applyLoad(items);
+  }
+
+  get items(): ShimChart[] {
+    return this.loadedItems ?? this.loadedValue('items');
+  }
+
+  get count(): number {
+    return this.loadedValue('count');
+  }
+
+  getCount(): ShimClientResult<number> {
+    const result = new ShimClientResult<number>();
+    const location = 'ChartCollection.getCount';
+    this.context.enqueue(location, () => result.settle(this.context.model.charts(this.sheetName(location)).length));
+    return result;
+  }
+
+  /** The first chart of that name, matched without regard to case as Excel matches names. */
+  private find(name: unknown, location: string): ChartTarget | null {
+    const sheet = this.target(location);
+    const wanted = String(name).toLocaleUpperCase();
+    const chart = this.context.model.charts(this.sheetName(location)).find((c) => c.name.toLocaleUpperCase() === wanted);
+    return chart === undefined ? null : { sheet, id: chart.id };
+  }
+
+  getItem(name: string): ShimChart {
+    const location = 'ChartCollection.getItem';
+    return new ShimChart(this.context, () => this.find(name, location) ?? throwError(itemNotFound(location)), location);
+  }
+
+  getItemOrNullObject(name: string): ShimChart {
+    const location = 'ChartCollection.getItemOrNullObject';
+    return new ShimChart(this.context, () => this.find(name, location), location);
+  }
+
+  getItemAt(index: number): ShimChart {
+    const location = 'ChartCollection.getItemAt';
+    return new ShimChart(
+      this.context,
+      () => {
+        const sheet = this.target(location);
+        const charts = this.context.model.charts(this.sheetName(location));
+        if (!Number.isInteger(index) || index < 0) throw invalidArgument(location);
+        if (index >= charts.length) throw itemNotFound(location);
+        return { sheet, id: charts[index].id };
+      },
+      location,
+    );
+  }
+
+  /**
+   * Made when the batch reaches it, reading its series from the source as Excel lays them out.
+   * Excel places a new chart in the middle of the window; the preview has no window to centre
+   * in, so it puts the chart beside its data, one column clear of it.
+   */
+  add(type: string, sourceData: unknown, seriesBy?: string): ShimChart {
+    const location = 'ChartCollection.add';
+    return new ShimChart(
+      this.context,
+      () => {
+        const sheet = this.target(location);
+        const sheetName = this.sheetName(location);
+        const by = seriesBy ?? 'Auto';
+        if (type !== 'XYScatter' || !(sourceData instanceof ShimRange) || !isSeriesBy(by)) throw invalidArgument(location);
+        const source = rangeRefOf(this.context, sourceData.target(location), location);
+        const chart = this.context.model.addChart(sheetName, {
+          type: 'XYScatter',
+          title: null,
+          series: seriesFromSource(this.context.model, source, by),
+          axisTitles: { category: '', value: '' },
+          bounds: this.besideData(sheetName, source),
+        });
+        return { sheet, id: chart.id };
+      },
+      location,
+    );
+  }
+
+  private besideData(sheet: string, source: RangeRef): ChartBounds {
+    const left = columnLeft((column) => this.context.model.columnWidth(sheet, column), source.right + 2);
+    return { left, top: source.top * ROW_HEIGHT, width: NEW_CHART_WIDTH, height: NEW_CHART_HEIGHT };
+  }
+}
+
+function isSeriesBy(value: string): value is SeriesBy {
+  return (SERIES_BY as readonly string[]).includes(value);
+}
+
+function throwError(error: Error): never {
+  throw error;
+}

@@ -1,0 +1,71 @@
+/**
+ * What a chart shows, read live from its cells each time it is asked: the shim answers
+ * `title.text` and `series.name` from here and the grid draws from here, so an edit to a source
+ * cell reaches the picture without the chart storing any values.
+ */
+import type { CellValue, ChartSeriesSource, ChartSpec, RangeRef, WorkbookModel } from './types';
+
+export type CellReader = Pick<WorkbookModel, 'valueAt' | 'hasSheet'>;
+
+export interface PlottedSeries {
+  name: string;
+  points: { x: number; y: number }[];
+}
+
+export interface PlottedChart {
+  title: string;
+  xTitle: string;
+  yTitle: string;
+  series: PlottedSeries[];
+}
+
+/** Reads across then down, the order Excel takes a one-row or one-column range in. */
+export function rangeValues(model: CellReader, ref: RangeRef): CellValue[] {
+  if (!model.hasSheet(ref.sheet)) return [];
+  const values: CellValue[] = [];
+  for (let row = ref.top; row <= ref.bottom; row++) {
+    for (let column = ref.left; column <= ref.right; column++) values.push(model.valueAt({ sheet: ref.sheet, row, column }));
+  }
+  return values;
+}
+
+function labelOf(value: CellValue): string {
+  if (value === null) return '';
+  if (typeof value === 'object') return value.error;
+  if (typeof value === 'boolean') return value ? 'TRUE' : 'FALSE';
+  return String(value);
+}
+
+export function seriesName(model: CellReader, series: ChartSeriesSource): string {
+  if (typeof series.name === 'string') return series.name;
+  return rangeValues(model, series.name).map(labelOf).join(' ');
+}
+
+/** With one series Excel titles the chart with its name; otherwise with a placeholder. */
+export function chartTitle(model: CellReader, chart: ChartSpec): string {
+  if (chart.title !== null) return chart.title;
+  return chart.series.length === 1 ? seriesName(model, chart.series[0]) : 'Chart Title';
+}
+
+export function plotSeries(model: CellReader, series: ChartSeriesSource): PlottedSeries {
+  const ys = series.y ? rangeValues(model, series.y) : [];
+  const xs = series.x ? rangeValues(model, series.x) : [];
+  // Any text among the X values makes Excel number the points 1, 2, 3… instead.
+  const numbered = series.x === null || xs.some((x) => x !== null && typeof x !== 'number');
+  const points: { x: number; y: number }[] = [];
+  ys.forEach((y, i) => {
+    const x = numbered ? i + 1 : xs[i];
+    // Blank, text and error cells leave a gap rather than a point at zero.
+    if (typeof y === 'number' && typeof x === 'number') points.push({ x, y });
+  });
+  return { name: seriesName(model, series), points };
+}
+
+export function plotChart(model: CellReader, chart: ChartSpec): PlottedChart {
+  return {
+    title: chartTitle(model, chart),
+    xTitle: chart.axisTitles.category,
+    yTitle: chart.axisTitles.value,
+    series: chart.series.map((s) => plotSeries(model, s)),
+  };
+}

@@ -1,0 +1,89 @@
+import {
+  buildModelFrame,
+  type CellGrid,
+  compareNested,
+  EngineError,
+  type FitSettings,
+  fitModel,
+  type ModelFit,
+  type ModelFrame,
+  type NestedComparison,
+} from '../../engine';
+import type { PaneChoices } from './choices';
+import { joinColumns } from './readValues';
+import { dataWarnings } from './warnings';
+
+/** The cells the pane has read, one grid per chosen range. */
+export interface ReadData {
+  response: CellGrid;
+  predictorColumns: CellGrid[];
+  weights: CellGrid | undefined;
+}
+
+export interface PaneAnalysis {
+  frame: ModelFrame;
+  fit: ModelFit | undefined;
+  fitError: string | undefined;
+  nested: NestedComparison | undefined;
+  nestedError: string | undefined;
+  addedNames: string[];
+  settings: FitSettings;
+  warnings: string[];
+}
+
+export function settingsOf(choices: PaneChoices): FitSettings {
+  const sigma = Number(choices.knownSigma);
+  return { level: choices.level, intercept: choices.intercept, knownSigma: choices.knownSigma.trim() !== '' && sigma > 0 ? sigma : undefined };
+}
+
+function message(error: unknown): string {
+  return error instanceof EngineError ? error.message : `Unexpected problem: ${String(error)}`;
+}
+
+/**
+ * Everything the pane shows about the data and the model, from the engine (and so from the same
+ * cache as the cell functions). Base predictors come first and added ones last, the order the
+ * report's formulas use.
+ */
+export function analyze(data: ReadData, choices: PaneChoices): PaneAnalysis {
+  const settings = settingsOf(choices);
+  const isAdded = (j: number) => choices.added.includes(j);
+  const order = data.predictorColumns.map((_, j) => j).sort((a, b) => Number(isAdded(a)) - Number(isAdded(b)));
+  const frame = buildModelFrame({
+    y: data.response,
+    x: [joinColumns(order.map((j) => data.predictorColumns[j]))],
+    weights: data.weights,
+    intercept: choices.intercept,
+  });
+  let fit: ModelFit | undefined;
+  let fitError: string | undefined;
+  try {
+    fit = fitModel(frame.data, settings);
+  } catch (error) {
+    fitError = message(error);
+  }
+
+  const addedSources = new Set(order.map((j, position) => (isAdded(j) ? position : -1)).filter((p) => p >= 0));
+  const inAdded = frame.termColumns.map((c) => addedSources.has(c));
+  let nested: NestedComparison | undefined;
+  let nestedError: string | undefined;
+  if (fit !== undefined && addedSources.size > 0) {
+    try {
+      const { x, y, weights } = frame.data;
+      nested = compareNested({ y, base: x.map((r) => r.filter((_, j) => !inAdded[j])), added: x.map((r) => r.filter((_, j) => inAdded[j])), weights }, settings);
+    } catch (error) {
+      nestedError = message(error);
+    }
+  }
+  return {
+    frame,
+    fit,
+    fitError,
+    nested,
+    nestedError,
+    addedNames: frame.columns.filter((_, c) => addedSources.has(c)).map((c) => c.name),
+    settings,
+    warnings: dataWarnings(frame, fit),
+  };
+}
+

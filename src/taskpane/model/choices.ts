@@ -1,0 +1,90 @@
+import { columnsOf, parseRange, type RangeRef, splitAreas } from '../../addressing/a1';
+
+/** What the user has chosen in the pane, as addresses: the pane's whole input. */
+export interface PaneChoices {
+  response: string;
+  /** One or more areas, comma-separated, as Excel writes a multi-area selection. */
+  predictors: string;
+  weights: string;
+  newRows: string;
+  /** Indexes (into the predictor columns, in order) of the columns that form the "added" set. */
+  added: number[];
+  level: number;
+  intercept: boolean;
+  /** Empty when σ is to be estimated. */
+  knownSigma: string;
+}
+
+export const EMPTY_CHOICES: PaneChoices = {
+  response: '',
+  predictors: '',
+  weights: '',
+  newRows: '',
+  added: [],
+  level: 0.95,
+  intercept: true,
+  knownSigma: '',
+};
+
+/** A field's problem, shown beside it. */
+export interface FieldProblem {
+  field: keyof PaneChoices;
+  message: string;
+}
+
+export interface ResolvedRanges {
+  response: RangeRef;
+  predictorColumns: RangeRef[];
+  weights: RangeRef | undefined;
+  newRows: RangeRef[] | undefined;
+}
+
+function parseField(text: string, field: keyof PaneChoices, label: string, problems: FieldProblem[]): RangeRef[] {
+  const areas = splitAreas(text);
+  if (areas.length === 0) {
+    problems.push({ field, message: `Choose the ${label}: select it in the sheet, then press "Use selection".` });
+    return [];
+  }
+  const ranges = areas.map((a) => parseRange(a, ''));
+  if (ranges.some((r) => r === undefined || r.sheet === '')) {
+    problems.push({ field, message: `"${text}" is not a range address with its sheet, such as Batches!B1:B61.` });
+    return [];
+  }
+  return ranges as RangeRef[];
+}
+
+/**
+ * Turns the typed or picked addresses into ranges and checks their shapes against each other,
+ * so the pane can say what to fix before anything is read.
+ */
+export function resolveRanges(choices: PaneChoices): { ranges?: ResolvedRanges; problems: FieldProblem[] } {
+  const problems: FieldProblem[] = [];
+  const [response] = parseField(choices.response, 'response', 'response column', problems);
+  const predictorAreas = parseField(choices.predictors, 'predictors', 'predictor columns', problems);
+  const weightAreas = choices.weights.trim() === '' ? [] : parseField(choices.weights, 'weights', 'weights column', problems);
+  const newAreas = choices.newRows.trim() === '' ? [] : parseField(choices.newRows, 'newRows', 'new rows', problems);
+  if (problems.length > 0 || response === undefined) return { problems };
+
+  const rows = response.bottom - response.top;
+  if (response.left !== response.right) problems.push({ field: 'response', message: 'The response must be a single column.' });
+  for (const area of predictorAreas) {
+    if (area.sheet !== response.sheet || area.top !== response.top || area.bottom !== response.bottom) {
+      problems.push({ field: 'predictors', message: `Every predictor area must cover the response's rows (${response.sheet} rows ${response.top + 1}–${response.bottom + 1}).` });
+      break;
+    }
+  }
+  const weights = weightAreas[0];
+  if (weights !== undefined && (weights.left !== weights.right || weights.bottom - weights.top !== rows)) {
+    problems.push({ field: 'weights', message: 'Weights must be one column with the same rows as the response.' });
+  }
+  const predictorColumns = predictorAreas.flatMap(columnsOf);
+  if (newAreas.length > 0 && newAreas.reduce((n, a) => n + a.right - a.left + 1, 0) !== predictorColumns.length) {
+    problems.push({ field: 'newRows', message: `New rows need ${predictorColumns.length} columns, one per predictor, in the same order.` });
+  }
+  if (choices.knownSigma.trim() !== '' && !(Number(choices.knownSigma) > 0)) {
+    problems.push({ field: 'knownSigma', message: 'Known σ must be a positive number, or left empty to estimate it.' });
+  }
+  if (!(choices.level > 0 && choices.level < 1)) problems.push({ field: 'level', message: 'The confidence level must be between 0 and 1, such as 0.95.' });
+  if (problems.length > 0) return { problems };
+  return { ranges: { response, predictorColumns, weights, newRows: newAreas.length > 0 ? newAreas : undefined }, problems };
+}

@@ -1,0 +1,218 @@
+import { cellAddress, columnLetters, formatAbsolute, type RangeRef } from '../../addressing/a1';
+import type { PaneChoices, ResolvedRanges } from './choices';
+import type { PaneAnalysis } from './analysis';
+import { splitUnit } from './sentences';
+
+/** One cell the report writes. Labels are always written as text, never as formulas. */
+export type ReportCell =
+  | { row: number; column: number; kind: 'label'; text: string; bold?: boolean }
+  | { row: number; column: number; kind: 'value'; value: number | boolean | '' }
+  | { row: number; column: number; kind: 'formula'; formula: string };
+
+export interface ReportFormat {
+  range: RangeRef;
+  numberFormat: string;
+}
+
+export interface ReportChart {
+  name: string;
+  title: string;
+  x: RangeRef;
+  y: RangeRef;
+  xTitle: string;
+  yTitle: string;
+  topLeft: string;
+  bottomRight: string;
+}
+
+export interface ReportPlan {
+  cells: ReportCell[];
+  formats: ReportFormat[];
+  charts: ReportChart[];
+  /** The A1 text stamped on the sheet, so a frozen copy can repeat it. */
+  specification: string;
+}
+
+export const REPORT_TITLE_PREFIX = 'Plumbline report';
+/** p-values: four decimals, and "<0.0001" rather than a row of zeros. */
+export const P_VALUE_FORMAT = '[<0.0001]"<0.0001";0.0000';
+export const SETTINGS_CELLS = { level: '$B$5', intercept: '$B$6', knownSigma: '$B$7' } as const;
+
+const CHART_DATA_COLUMN = 19; // T: observed, then U..Y: fitted rows from PREDICT
+const RESIDUALS_COLUMN = 26; // AA..AI
+const GATHER_COLUMN = 36; // AK..: predictor columns gathered when they are not one block
+
+interface Layout {
+  y: string;
+  x: string;
+  base: string;
+  added: string | undefined;
+  gathered: { column: number; source: RangeRef }[];
+}
+
+function sameBlock(columns: RangeRef[]): boolean {
+  return columns.every((c, j) => j === 0 || (c.sheet === columns[0].sheet && c.left === columns[0].left + j));
+}
+
+/**
+ * Formulas read the data directly when the predictors are one block with any added set at its
+ * right end; otherwise the report first gathers the columns, base ones then added ones, with plain
+ * reference formulas, so every PLUMB formula still reads one contiguous, live range.
+ */
+function layout(sheet: string, ranges: ResolvedRanges, added: readonly number[]): Layout {
+  const columns = ranges.predictorColumns;
+  const k = added.length;
+  const addedAtEnd = added.every((j) => j >= columns.length - k);
+  const y = formatAbsolute(ranges.response);
+  const block = (cols: RangeRef[]): RangeRef => ({ ...cols[0], right: cols[cols.length - 1].right });
+  if (sameBlock(columns) && addedAtEnd) {
+    return {
+      y,
+      x: formatAbsolute(block(columns)),
+      base: formatAbsolute(block(columns.slice(0, columns.length - k))),
+      added: k > 0 ? formatAbsolute(block(columns.slice(columns.length - k))) : undefined,
+      gathered: [],
+    };
+  }
+  const order = columns.map((_, j) => j).sort((a, b) => Number(added.includes(a)) - Number(added.includes(b)));
+  const rows = ranges.response.bottom - ranges.response.top;
+  const here = (left: number, right: number): RangeRef => ({ sheet, top: 0, bottom: rows, left, right });
+  const n = columns.length;
+  return {
+    y,
+    x: formatAbsolute(here(GATHER_COLUMN, GATHER_COLUMN + n - 1)).replace(/^.*!/, ''),
+    base: formatAbsolute(here(GATHER_COLUMN, GATHER_COLUMN + n - k - 1)).replace(/^.*!/, ''),
+    added: k > 0 ? formatAbsolute(here(GATHER_COLUMN + n - k, GATHER_COLUMN + n - 1)).replace(/^.*!/, '') : undefined,
+    gathered: order.map((j, position) => ({ column: GATHER_COLUMN + position, source: columns[j] })),
+  };
+}
+
+/** Decimals that show a quantity to about three significant digits of its standard error. */
+export function decimalsFor(standardError: number): number {
+  if (!(standardError > 0) || !Number.isFinite(standardError)) return 4;
+  return Math.min(10, Math.max(2, 2 - Math.floor(Math.log10(standardError))));
+}
+
+const fixed = (decimals: number): string => (decimals <= 0 ? '0' : `0.${'0'.repeat(decimals)}`);
+
+export interface PlanInput {
+  sheetName: string;
+  ranges: ResolvedRanges;
+  choices: PaneChoices;
+  analysis: PaneAnalysis;
+  writtenAt: Date;
+}
+
+/** The whole report sheet as data: written by one adapter, checked by tests without Excel. */
+export function planReport({ sheetName, ranges, choices, analysis, writtenAt }: PlanInput): ReportPlan {
+  const cells: ReportCell[] = [];
+  const formats: ReportFormat[] = [];
+  const charts: ReportChart[] = [];
+  const at = (row: number, column: number): RangeRef => ({ sheet: sheetName, top: row, left: column, bottom: row, right: column });
+  const block = (top: number, left: number, rows: number, columns: number): RangeRef => ({ sheet: sheetName, top, left, bottom: top + rows - 1, right: left + columns - 1 });
+  const label = (row: number, column: number, text: string, bold = false) => cells.push({ row, column, kind: 'label', text, bold });
+
+  const { frame, fit } = analysis;
+  const l = layout(sheetName, ranges, choices.added);
+  const weights = ranges.weights === undefined ? '' : `, ${formatAbsolute(ranges.weights)}`;
+  const settings = `${SETTINGS_CELLS.level}, ${SETTINGS_CELLS.intercept}, ${SETTINGS_CELLS.knownSigma}${weights}`;
+  const predictorText = sameBlock(ranges.predictorColumns)
+    ? formatAbsolute({ ...ranges.predictorColumns[0], right: ranges.predictorColumns[ranges.predictorColumns.length - 1].right })
+    : ranges.predictorColumns.map(formatAbsolute).join(', ');
+  const specification = `${frame.responseName} from ${l.y}; predictors ${predictorText}`;
+  const date = writtenAt.toISOString().slice(0, 10);
+
+  label(0, 0, `${REPORT_TITLE_PREFIX}: ${frame.responseName}`, true);
+  label(1, 0, `Written ${date}. ${specification}. Every number below is a live formula over those cells.`);
+  label(3, 0, 'Settings: edit these cells and every result below recalculates', true);
+  label(4, 0, 'Confidence level');
+  cells.push({ row: 4, column: 1, kind: 'value', value: choices.level });
+  label(5, 0, 'Intercept');
+  cells.push({ row: 5, column: 1, kind: 'value', value: choices.intercept });
+  label(6, 0, 'Known sigma (empty: estimated)');
+  cells.push({ row: 6, column: 1, kind: 'value', value: analysis.settings.knownSigma ?? '' });
+  label(7, 0, 'Weights');
+  label(7, 1, ranges.weights === undefined ? 'none' : formatAbsolute(ranges.weights));
+
+  label(9, 0, 'The model', true);
+  const terms = frame.termNames.filter((t) => t !== 'Intercept');
+  const equation = [choices.intercept ? 'b0' : undefined, ...terms.map((t, j) => `b${j + 1}·[${t}]`)].filter((s) => s !== undefined).join(' + ');
+  label(10, 0, `[${frame.responseName}] = ${equation} + error`);
+  label(11, 0, 'The b values are the Estimates in the next table, in the same order.');
+
+  let row = 13;
+  const termRows = frame.termNames.length;
+  label(row, 0, 'Which terms matter?', true);
+  label(row, 1, 'A term is clear of zero when its interval excludes 0; roughly, when |estimate| > 2 × std error.');
+  cells.push({ row: row + 1, column: 0, kind: 'formula', formula: `=PLUMB.TERMS(${l.y}, ${l.x}, ${settings})` });
+  (fit?.terms ?? []).forEach((t, i) => {
+    const decimals = fixed(decimalsFor(t.standardError));
+    for (const c of [1, 2, 5, 6]) formats.push({ range: at(row + 2 + i, c), numberFormat: decimals });
+  });
+  formats.push({ range: block(row + 2, 3, termRows, 1), numberFormat: '0.00' });
+  formats.push({ range: block(row + 2, 4, termRows, 1), numberFormat: P_VALUE_FORMAT });
+  formats.push({ range: block(row + 2, 7, termRows, 1), numberFormat: '0.0' });
+  row += termRows + 4;
+
+  label(row, 0, 'How well does it fit?', true);
+  cells.push({ row: row + 1, column: 0, kind: 'formula', formula: `=PLUMB.FITSTATS(${l.y}, ${l.x}, ${settings})` });
+  const statFormats = ['0', '0', '0', '0', 'General', 'General', '0.0000', '0.0000', '0.00', P_VALUE_FORMAT, '0.00', '0.00', '0.00'];
+  statFormats.forEach((f, i) => formats.push({ range: at(row + 1 + i, 1), numberFormat: f }));
+  row += statFormats.length + 3;
+
+  if (l.added !== undefined) {
+    label(row, 0, `Does ${analysis.addedNames.join(', ')} add anything?`, true);
+    cells.push({ row: row + 1, column: 0, kind: 'formula', formula: `=PLUMB.NESTEDF(${l.y}, ${l.base}, ${l.added}, ${settings})` });
+    ['0.00', '0', '0', P_VALUE_FORMAT, '0.00', 'General', 'General'].forEach((f, i) => formats.push({ range: at(row + 1 + i, 1), numberFormat: f }));
+    row += 11;
+  }
+
+  if (ranges.newRows !== undefined) {
+    const newRows = ranges.newRows[0];
+    label(row, 0, 'What to expect for new cases', true);
+    label(row, 1, 'Mean: where the average of many such cases should lie. New: where one new case should fall.');
+    cells.push({ row: row + 1, column: 0, kind: 'formula', formula: `=PLUMB.PREDICT(${l.y}, ${l.x}, ${formatAbsolute(newRows)}, ${settings})` });
+    const decimals = fixed(decimalsFor(fit?.sigma ?? 1));
+    formats.push({ range: block(row + 1, 0, newRows.bottom - newRows.top + 2, 5), numberFormat: decimals });
+    row += newRows.bottom - newRows.top + 5;
+  }
+
+  label(row, 0, 'Cautions', true);
+  [
+    'These are associations in the data, not proof of cause: a clear-of-zero term does not show that changing it will change the response.',
+    'Predictions outside the range of the data are extrapolations and can be badly wrong, however narrow the intervals look.',
+    'Standard errors, intervals and p-values assume independent errors with constant variance, roughly normal, and no single row steering the fit: check the residual chart before relying on them.',
+  ].forEach((text, i) => label(row + 1 + i, 0, text));
+
+  const dataRows = ranges.response.bottom - ranges.response.top + 1;
+  const first = frame.hasHeader ? 1 : 0;
+  const chartTop = 3;
+  label(chartTop - 1, CHART_DATA_COLUMN, 'Chart data (live): observed and fitted for every data row');
+  cells.push({ row: chartTop, column: CHART_DATA_COLUMN, kind: 'formula', formula: `=${l.y}` });
+  cells.push({ row: chartTop, column: CHART_DATA_COLUMN + 1, kind: 'formula', formula: `=PLUMB.PREDICT(${l.y}, ${l.x}, ${l.x}, ${settings})` });
+  const observed = block(chartTop + first, CHART_DATA_COLUMN, dataRows - first, 1);
+  const fitted = block(chartTop + first, CHART_DATA_COLUMN + 1, dataRows - first, 1);
+  const response = splitUnit(frame.responseName).name;
+  charts.push({ name: 'ObservedVsFitted', title: `Observed vs fitted ${response.toLowerCase()}`, x: fitted, y: observed, xTitle: 'Fitted', yTitle: 'Observed', topLeft: cellAddress(3, 10), bottomRight: cellAddress(20, 17) });
+
+  label(chartTop - 1, RESIDUALS_COLUMN, 'Residuals of the rows used (live)');
+  cells.push({ row: chartTop, column: RESIDUALS_COLUMN, kind: 'formula', formula: `=PLUMB.RESIDUALS(${l.y}, ${l.x}, ${settings})` });
+  const residualRows = dataRows - first;
+  charts.push({
+    name: 'ResidualsVsFitted',
+    title: 'Residuals vs fitted: look for curves, funnels and lone points',
+    x: block(chartTop + 1, RESIDUALS_COLUMN + 1, residualRows, 1),
+    y: block(chartTop + 1, RESIDUALS_COLUMN + 2, residualRows, 1),
+    xTitle: 'Fitted',
+    yTitle: 'Residual',
+    topLeft: cellAddress(22, 10),
+    bottomRight: cellAddress(39, 17),
+  });
+
+  for (const g of l.gathered) {
+    cells.push({ row: 0, column: g.column, kind: 'formula', formula: `=${formatAbsolute(g.source)}` });
+  }
+  if (l.gathered.length > 0) label(0, GATHER_COLUMN - 1, `Model columns gathered from the data (${columnLetters(GATHER_COLUMN)} onwards)`);
+
+  return { cells, formats, charts, specification };
+}

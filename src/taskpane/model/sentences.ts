@@ -1,0 +1,70 @@
+import type { ModelFit, ModelFrame, NestedComparison, TermEstimate } from '../../engine';
+
+/** "Steep time (h)" → name "Steep time", unit "h". */
+export function splitUnit(label: string): { name: string; unit: string | undefined } {
+  const m = /^(.*?)\s*\(([^()]+)\)\s*$/.exec(label);
+  return m ? { name: m[1], unit: m[2] } : { name: label, unit: undefined };
+}
+
+/** Three significant digits, never in exponent form for ordinary magnitudes. */
+export function readable(value: number): string {
+  if (value === 0) return '0';
+  const magnitude = Math.abs(value);
+  if (magnitude >= 1e6 || magnitude < 1e-4) return value.toExponential(2);
+  return String(Number(value.toPrecision(3)));
+}
+
+function signed(value: number): string {
+  return value > 0 ? `+${readable(value)}` : readable(value);
+}
+
+export function pValueText(p: number): string {
+  if (!Number.isFinite(p)) return 'p not defined';
+  return p < 0.0001 ? 'p < 0.0001' : `p = ${p.toPrecision(2)}`;
+}
+
+function responseAmount(amount: string, responseUnit: string | undefined): string {
+  if (responseUnit === '%') return `${amount} points`;
+  return responseUnit === undefined ? amount : `${amount} ${responseUnit}`;
+}
+
+/** One plain-language sentence per term, with its interval and verdict. */
+export function termSentence(term: TermEstimate, frame: ModelFrame, level: number): string {
+  const response = splitUnit(frame.responseName);
+  const ci = `${Math.round(level * 100)}% CI ${readable(term.ciLow)} to ${readable(term.ciHigh)}`;
+  const verdict = term.ciLow > 0 || term.ciHigh < 0 ? 'Clear of zero.' : 'Could be zero.';
+  if (term.aliased) return `${term.name}: cannot be estimated, because it is a combination of other columns.`;
+  if (term.name === 'Intercept') {
+    return `Intercept: the model's ${response.name.toLowerCase()} when every numeric predictor is 0 (at the reference levels) is ${responseAmount(readable(term.estimate), response.unit)} (${ci}); often outside the data, so rarely meaningful on its own.`;
+  }
+  const category = frame.columns.find((c) => c.kind === 'categorical' && term.name.startsWith(`${c.name}: `));
+  if (category !== undefined && category.kind === 'categorical') {
+    const levelName = term.name.slice(category.name.length + 2);
+    const against = category.reference === undefined ? 'zero' : category.reference;
+    const direction = term.estimate >= 0 ? 'higher' : 'lower';
+    return `${category.name} ${levelName} vs ${against}: ${response.name.toLowerCase()} is ${direction} by ${responseAmount(readable(Math.abs(term.estimate)), response.unit)} (${ci}). ${verdict}`;
+  }
+  const predictor = splitUnit(term.name);
+  const step = predictor.unit === undefined ? 'each extra unit' : `each extra ${unitWord(predictor.unit)}`;
+  return `${predictor.name}: ${step} changes ${response.name.toLowerCase()} by ${responseAmount(signed(term.estimate), response.unit)} (${ci}). ${verdict}`;
+}
+
+const UNIT_WORDS: Record<string, string> = { h: 'hour', min: 'minute', s: 'second', days: 'day', d: 'day' };
+function unitWord(unit: string): string {
+  return UNIT_WORDS[unit] ?? unit;
+}
+
+export function fitSentence(fit: ModelFit, frame: ModelFrame): string {
+  const response = splitUnit(frame.responseName);
+  const skipped = frame.skipped.length > 0 ? ` (${frame.skipped.length} skipped)` : '';
+  const sigma = `typical scatter σ̂ = ${responseAmount(readable(fit.sigma), response.unit)}`;
+  return `Fitted on ${fit.n} rows${skipped}: R² = ${readable(fit.rSquared)}, adjusted ${readable(fit.adjustedRSquared)}; ${sigma}. All slopes zero? F = ${readable(fit.fStatistic)}, ${pValueText(fit.fPValue)}.`;
+}
+
+export function nestedSentence(result: NestedComparison, addedNames: readonly string[], level: number): string {
+  const what = addedNames.join(', ');
+  const numbers = `F = ${readable(result.f)} on ${result.dfNumerator} and ${Number.isFinite(result.dfDenominator) ? result.dfDenominator : '∞'} df, ${pValueText(result.pValue)}; critical F at ${Math.round(level * 100)}% is ${readable(result.fCritical)}`;
+  return result.addedHelp
+    ? `${what} earns its place: ${numbers}. The added terms help.`
+    : `${what} does not earn its place: ${numbers}. Keep the smaller model.`;
+}

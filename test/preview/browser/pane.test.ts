@@ -1,0 +1,136 @@
+/**
+ * The guided pane end to end, in the preview workbook in Chromium: pick the demo ranges through
+ * the UI, read and fit, write the live report, edit data, write a second report, freeze a copy.
+ * Expected numbers come from the engine run here in Node on the same cells (the engine itself is
+ * checked against outside sources in test/engine).
+ */
+import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { buildModelFrame, fitModel } from '../../../src/engine';
+import { BATCH_HEADERS, generateBatchLog } from '../../../src/preview/demo/batchLog';
+import { type BrowserSession, chromiumAvailable, openPage, screenshot } from '../../support/browser';
+
+const available = chromiumAvailable();
+
+function engineFit(rows: (string | number)[][]) {
+  const grid = [BATCH_HEADERS, ...rows];
+  const frame = buildModelFrame({ y: grid.map((r) => [r[1]]), x: [grid.map((r) => r.slice(2))], intercept: true });
+  return fitModel(frame.data);
+}
+
+describe.skipIf(!available)('guided pane in the preview workbook', () => {
+  let session: BrowserSession;
+  const origin = inject('previewOrigin');
+
+  const page = () => session.page;
+  const goTo = async (address: string) => {
+    const box = page().getByLabel('Selected range (type an address and press Enter to select it)');
+    await box.fill(address);
+    await box.press('Enter');
+  };
+  const sheetSnapshot = (sheet: string) =>
+    page().evaluate(
+      (name) =>
+        Excel.run(async (context) => {
+          const used = context.workbook.worksheets.getItem(name).getUsedRange(true);
+          used.load('formulas, values, address');
+          await context.sync();
+          return { address: used.address, formulas: used.formulas as unknown[][], values: used.values as unknown[][] };
+        }),
+      sheet,
+    );
+  const sheetNames = () =>
+    page().evaluate(() =>
+      Excel.run(async (context) => {
+        const sheets = context.workbook.worksheets;
+        sheets.load('items/name');
+        await context.sync();
+        return sheets.items.map((s) => s.name);
+      }),
+    );
+
+  beforeAll(async () => {
+    session = await openPage(`${origin}/preview.html`);
+    await page().waitForFunction(() => document.querySelector('[data-cell="A3"]')?.textContent === 'Intercept');
+  });
+  afterAll(async () => {
+    await session?.close();
+  });
+
+  it('takes the demo ranges from the selection and reads them', async () => {
+    await goTo('Batches!B1:B61');
+    await page().getByRole('button', { name: 'Use selection for Response (one column)' }).click();
+    await expect.poll(() => page().locator('#response').inputValue()).toBe('Batches!B1:B61');
+    await goTo('Batches!C1:G61');
+    await page().getByRole('button', { name: 'Use selection for Predictors' }).click();
+    await goTo("'Planned batches'!B1:F6");
+    await page().getByRole('button', { name: 'Use selection for New rows (optional)' }).click();
+    await page().getByRole('button', { name: 'Read data and fit' }).click();
+    await expect.poll(() => page().locator('.data-summary').innerText()).toContain('Rows used: 60');
+    expect(await page().locator('.data-summary').innerText()).toContain('Categorical: Origin (3 levels, compared with Alta Verde)');
+  });
+
+  it('shows one card per term and the nested verdict for bean age', async () => {
+    await page().getByLabel('Bean age (days)').check();
+    const cards = page().locator('.cards li');
+    await expect.poll(() => cards.count()).toBe(7);
+    expect(await cards.nth(1).innerText()).toMatch(/^Steep time: each extra hour changes extraction yield by \+0\.439 points \(95% CI 0\.418 to 0\.46\)\. Clear of zero\.$/);
+    expect(await page().locator('.verdict').innerText()).toContain('Bean age (days) does not earn its place');
+    await screenshot(page(), 'pane-results');
+  });
+
+  let firstReport: Awaited<ReturnType<typeof sheetSnapshot>>;
+
+  it('writes a live report of PLUMB formulas over the data, with the engine’s values', async () => {
+    await page().getByRole('button', { name: 'Write report' }).click();
+    await expect.poll(() => page().locator('.done').innerText()).toContain('Plumbline report');
+    expect(await sheetNames()).toContain('Plumbline report');
+    firstReport = await sheetSnapshot('Plumbline report');
+    const flat = firstReport.formulas.flat().filter((f): f is string => typeof f === 'string' && f.startsWith('=PLUMB.'));
+    expect(flat).toContain('=PLUMB.TERMS(Batches!$B$1:$B$61, Batches!$C$1:$G$61, $B$5, $B$6, $B$7)');
+    expect(flat).toContain('=PLUMB.NESTEDF(Batches!$B$1:$B$61, Batches!$C$1:$F$61, Batches!$G$1:$G$61, $B$5, $B$6, $B$7)');
+    expect(flat.some((f) => f.startsWith("=PLUMB.PREDICT(Batches!$B$1:$B$61, Batches!$C$1:$G$61, 'Planned batches'!$B$1:$F$6"))).toBe(true);
+    const fit = engineFit(generateBatchLog());
+    const termsRow = firstReport.values.findIndex((r) => r[0] === 'Term');
+    fit.terms.forEach((t, i) => expect(firstReport.values[termsRow + 1 + i][1]).toBe(t.estimate));
+    expect(await page().locator('[data-chart="ObservedVsFitted"] circle').count()).toBe(60);
+    expect(await page().locator('[data-chart="ResidualsVsFitted"] circle').count()).toBe(60);
+    await screenshot(page(), 'report');
+    await page().locator('.grid-scroller').evaluate((el) => {
+      el.scrollLeft = 760;
+    });
+    await screenshot(page(), 'report-charts');
+  });
+
+  it('recalculates the report when a data cell changes', async () => {
+    await goTo('Batches!B2');
+    await page().fill('#formula-input', '23');
+    await page().press('#formula-input', 'Enter');
+    const rows = generateBatchLog();
+    rows[0][1] = 23;
+    const fit = engineFit(rows);
+    const after = await sheetSnapshot('Plumbline report');
+    const termsRow = after.values.findIndex((r) => r[0] === 'Term');
+    expect(after.values[termsRow + 1][1]).toBe(fit.terms[0].estimate);
+    expect(after.values[termsRow + 1][1]).not.toBe(firstReport.values[termsRow + 1][1]);
+    firstReport = after;
+  });
+
+  it('writes a second report on a new sheet and leaves the first untouched', async () => {
+    await page().getByRole('button', { name: 'Write report' }).click();
+    await expect.poll(() => page().locator('.done').innerText()).toContain('Plumbline report 2');
+    expect(await sheetSnapshot('Plumbline report')).toEqual(firstReport);
+  });
+
+  it('freezes the active report into a values-only copy', async () => {
+    await page().getByRole('button', { name: 'Freeze a copy' }).click();
+    await expect.poll(() => page().locator('.done').innerText()).toContain('Values-only copy');
+    const names = await sheetNames();
+    const frozen = names.find((n) => n.startsWith('Plumbline report 2 values'));
+    expect(frozen).toBeDefined();
+    const copy = await sheetSnapshot(frozen as string);
+    const formulas = copy.formulas.flat().filter((f) => typeof f === 'string' && f.startsWith('='));
+    expect(formulas).toEqual([]);
+    expect(String(copy.values[0][0])).toContain('values only');
+    expect(copy.values.flat()).toContain('Term');
+  });
+});

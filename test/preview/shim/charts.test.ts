@@ -1,0 +1,370 @@
+/**
+ * Excel.ChartCollection, Chart and ChartSeries as the Excel JavaScript API reference describes
+ * them (Microsoft Learn: Excel.ChartCollection.add, Excel.Chart.setPosition, Excel.ChartSeries
+ * setXAxisValues/setValues, and "Work with charts using the Excel JavaScript API"), written
+ * against @types/office-js so tsc checks the calls match the real declarations.
+ */
+import { beforeEach, describe, expect, it } from 'vitest';
+import type { PreviewWorkbook } from '../../../src/preview/workbook/workbook';
+import { freshWorkbook, NOT_LOADED, officeError, thrownOfficeError } from './harness';
+
+let model: PreviewWorkbook;
+
+beforeEach(() => {
+  model = freshWorkbook();
+  model.addSheet('Data');
+  model.setInputs('Data', 0, 0, [
+    ['Steep (h)', 'Yield (%)', 'Grind'],
+    [12, 17.5, 800],
+    [18, 19.1, 900],
+    [24, 21.4, 1000],
+  ]);
+});
+
+const dataSheet = (context: Excel.RequestContext) => context.workbook.worksheets.getItem('Data');
+
+/** Adds a scatter chart of A1:B4 and returns the chart's name. */
+async function addChart(address = 'A1:B4', seriesBy?: Excel.ChartSeriesBy): Promise<string> {
+  return Excel.run(async (context) => {
+    const sheet = dataSheet(context);
+    const chart = sheet.charts.add(Excel.ChartType.xyscatter, sheet.getRange(address), seriesBy);
+    chart.load('name');
+    await context.sync();
+    return chart.name;
+  });
+}
+
+const only = () => {
+  const charts = model.charts('Data');
+  expect(charts).toHaveLength(1);
+  return charts[0];
+};
+
+describe('charts.add', () => {
+  it('makes a scatter chart with X from the first column, Y from the second and the header as the series name', async () => {
+    const name = await addChart();
+    expect(name).toBe('Chart 1');
+    const chart = only();
+    expect(chart.type).toBe('XYScatter');
+    expect(chart.series).toEqual([
+      {
+        name: { sheet: 'Data', top: 0, left: 1, bottom: 0, right: 1 },
+        x: { sheet: 'Data', top: 1, left: 0, bottom: 3, right: 0 },
+        y: { sheet: 'Data', top: 1, left: 1, bottom: 3, right: 1 },
+      },
+    ]);
+    await Excel.run(async (context) => {
+      const loaded = dataSheet(context).charts.getItem('Chart 1');
+      loaded.load('chartType');
+      loaded.title.load('text');
+      const series = loaded.series.getItemAt(0).load('name');
+      await context.sync();
+      expect(loaded.chartType).toBe('XYScatter');
+      // Excel titles a one-series chart with the series name until the title is set.
+      expect(loaded.title.text).toBe('Yield (%)');
+      expect(series.name).toBe('Yield (%)');
+    });
+  });
+
+  it('makes one series per further column, sharing the X column, named SeriesN without a header', async () => {
+    model.setInputs('Data', 0, 0, [[1, 2, 3]]);
+    await addChart('A1:C4', Excel.ChartSeriesBy.columns);
+    const { series } = only();
+    expect(series.map((s) => s.name)).toEqual(['Series1', 'Series2']);
+    expect(series.map((s) => s.x)).toEqual([
+      { sheet: 'Data', top: 0, left: 0, bottom: 3, right: 0 },
+      { sheet: 'Data', top: 0, left: 0, bottom: 3, right: 0 },
+    ]);
+    expect(series[1].y).toEqual({ sheet: 'Data', top: 0, left: 2, bottom: 3, right: 2 });
+    await Excel.run(async (context) => {
+      const title = dataSheet(context).charts.getItem('Chart 1').title.load('text');
+      await context.sync();
+      expect(title.text).toBe('Chart Title');
+    });
+  });
+
+  it('numbers new charts on and sizes them 360 by 216 points', async () => {
+    await addChart();
+    await addChart();
+    await Excel.run(async (context) => {
+      const charts = dataSheet(context).charts.load('items/name, items/width, items/height');
+      await context.sync();
+      expect(charts.items.map((c) => [c.name, c.width, c.height])).toEqual([
+        ['Chart 1', 360, 216],
+        ['Chart 2', 360, 216],
+      ]);
+    });
+  });
+
+  it.each([['Line'], ['ColumnClustered'], ['Pie']])('rejects chart type %s with InvalidArgument and adds nothing', async (type) => {
+    const error = await officeError(
+      Excel.run(async (context) => {
+        const sheet = dataSheet(context);
+        sheet.charts.add(type as Excel.ChartType, sheet.getRange('A1:B4'));
+        await context.sync();
+      }),
+    );
+    expect(error.code).toBe('InvalidArgument');
+    expect(error.debugInfo.errorLocation).toBe('ChartCollection.add');
+    expect(model.charts('Data')).toEqual([]);
+  });
+
+  it('rejects an unknown seriesBy', async () => {
+    const error = await officeError(
+      Excel.run(async (context) => {
+        const sheet = dataSheet(context);
+        sheet.charts.add('XYScatter', sheet.getRange('A1:B4'), 'Diagonal' as Excel.ChartSeriesBy);
+        await context.sync();
+      }),
+    );
+    expect(error.code).toBe('InvalidArgument');
+  });
+});
+
+describe('reading chart properties', () => {
+  it('throws PropertyNotLoaded before load and sync, as every proxy does', async () => {
+    await addChart();
+    await Excel.run(async (context) => {
+      const chart = dataSheet(context).charts.getItem('Chart 1');
+      await context.sync();
+      const error = thrownOfficeError(() => chart.title.text);
+      expect(error.code).toBe('PropertyNotLoaded');
+      expect(error.message).toBe(NOT_LOADED('text'));
+      chart.title.load('text');
+      expect(thrownOfficeError(() => chart.title.text).code).toBe('PropertyNotLoaded');
+      await context.sync();
+      expect(chart.title.text).toBe('Yield (%)');
+    });
+  });
+
+  it('loads navigation paths from the chart', async () => {
+    await addChart();
+    await Excel.run(async (context) => {
+      const chart = dataSheet(context).charts.getItem('Chart 1');
+      chart.load('title/text, axes/valueAxis/title/text, worksheet/name, series/items/name');
+      await context.sync();
+      expect(chart.title.text).toBe('Yield (%)');
+      expect(chart.axes.valueAxis.title.text).toBe('');
+      expect(chart.worksheet.name).toBe('Data');
+      expect(chart.series.items.map((s) => s.name)).toEqual(['Yield (%)']);
+    });
+  });
+
+  it('reads the series name live from its header cell', async () => {
+    await addChart();
+    model.setInputs('Data', 0, 1, [['Extraction yield']]);
+    await Excel.run(async (context) => {
+      const series = dataSheet(context).charts.getItem('Chart 1').series.getItemAt(0).load('name');
+      await context.sync();
+      expect(series.name).toBe('Extraction yield');
+    });
+  });
+});
+
+describe('titles', () => {
+  it('writes the chart title and both axis titles; the category axis is X', async () => {
+    await addChart();
+    await Excel.run(async (context) => {
+      const chart = dataSheet(context).charts.getItem('Chart 1');
+      chart.title.text = 'Yield against steep time';
+      chart.axes.categoryAxis.title.text = 'Steep time (h)';
+      chart.axes.valueAxis.title.text = 'Yield (%)';
+      await context.sync();
+    });
+    const chart = only();
+    expect(chart.title).toBe('Yield against steep time');
+    expect(chart.axisTitles).toEqual({ category: 'Steep time (h)', value: 'Yield (%)' });
+  });
+});
+
+describe('series', () => {
+  it('setXAxisValues and setValues point the series at other cells, keeping its name', async () => {
+    await addChart();
+    await Excel.run(async (context) => {
+      const sheet = dataSheet(context);
+      const series = sheet.charts.getItem('Chart 1').series.getItemAt(0);
+      series.setXAxisValues(sheet.getRange('C2:C4'));
+      series.setValues(sheet.getRange('A2:A4'));
+      await context.sync();
+    });
+    expect(only().series[0]).toEqual({
+      name: { sheet: 'Data', top: 0, left: 1, bottom: 0, right: 1 },
+      x: { sheet: 'Data', top: 1, left: 2, bottom: 3, right: 2 },
+      y: { sheet: 'Data', top: 1, left: 0, bottom: 3, right: 0 },
+    });
+  });
+
+  it('rejects a two-dimensional range for values', async () => {
+    await addChart();
+    const error = await officeError(
+      Excel.run(async (context) => {
+        const sheet = dataSheet(context);
+        sheet.charts.getItem('Chart 1').series.getItemAt(0).setValues(sheet.getRange('A2:B4'));
+        await context.sync();
+      }),
+    );
+    expect(error.code).toBe('InvalidArgument');
+    expect(error.debugInfo.errorLocation).toBe('ChartSeries.setValues');
+  });
+
+  it('renames a series to literal text, adds and deletes series, and counts them', async () => {
+    await addChart();
+    await Excel.run(async (context) => {
+      const sheet = dataSheet(context);
+      const chart = sheet.charts.getItem('Chart 1');
+      chart.series.getItemAt(0).name = 'Logged batches';
+      const added = chart.series.add('Planned');
+      added.setXAxisValues(sheet.getRange('A2:A3'));
+      added.setValues(sheet.getRange('C2:C3'));
+      const count = chart.series.getCount();
+      await context.sync();
+      expect(count.value).toBe(2);
+      chart.series.getItemAt(0).delete();
+      chart.series.load('count');
+      await context.sync();
+      expect(chart.series.count).toBe(1);
+    });
+    expect(only().series).toEqual([
+      { name: 'Planned', x: { sheet: 'Data', top: 1, left: 0, bottom: 2, right: 0 }, y: { sheet: 'Data', top: 1, left: 2, bottom: 2, right: 2 } },
+    ]);
+  });
+
+  it('reports an index past the last series as ItemNotFound', async () => {
+    await addChart();
+    const error = await officeError(
+      Excel.run(async (context) => {
+        dataSheet(context).charts.getItem('Chart 1').series.getItemAt(1).load('name');
+        await context.sync();
+      }),
+    );
+    expect(error.code).toBe('ItemNotFound');
+  });
+});
+
+describe('position', () => {
+  it('setPosition covers the start cell to the end cell, in points', async () => {
+    await addChart();
+    await Excel.run(async (context) => {
+      const sheet = dataSheet(context);
+      const chart = sheet.charts.getItem('Chart 1');
+      chart.setPosition('E2', sheet.getRange('J12'));
+      chart.load('left, top, width, height');
+      await context.sync();
+      // Columns are 78 points wide and rows 18 points high until changed.
+      expect([chart.left, chart.top, chart.width, chart.height]).toEqual([4 * 78, 18, 6 * 78, 11 * 18]);
+    });
+  });
+
+  it('setPosition without an end cell moves the chart and keeps its size', async () => {
+    await addChart();
+    await Excel.run(async (context) => {
+      const chart = dataSheet(context).charts.getItem('Chart 1');
+      chart.setPosition('B3');
+      await context.sync();
+    });
+    expect(only().bounds).toEqual({ left: 78, top: 36, width: 360, height: 216 });
+  });
+
+  it('rejects a start cell on another sheet', async () => {
+    await addChart();
+    const error = await officeError(
+      Excel.run(async (context) => {
+        dataSheet(context).charts.getItem('Chart 1').setPosition('Sheet1!A1');
+        await context.sync();
+      }),
+    );
+    expect(error.code).toBe('InvalidArgument');
+  });
+
+  it('moves with the cells under it when a column to its left widens', async () => {
+    await addChart();
+    await Excel.run(async (context) => {
+      const sheet = dataSheet(context);
+      sheet.charts.getItem('Chart 1').setPosition('C1', 'F10');
+      sheet.getRange('A1').format.columnWidth = 100;
+      const chart = sheet.charts.getItem('Chart 1').load('left, width');
+      await context.sync();
+      expect([chart.left, chart.width]).toEqual([100 + 78, 4 * 78]);
+    });
+  });
+
+  it('sets top, left, width and height, refusing negative sizes', async () => {
+    await addChart();
+    await Excel.run(async (context) => {
+      const chart = dataSheet(context).charts.getItem('Chart 1');
+      chart.left = 39;
+      chart.top = 9;
+      chart.width = 300;
+      chart.height = 180;
+      await context.sync();
+    });
+    expect(only().bounds).toEqual({ left: 39, top: 9, width: 300, height: 180 });
+    const error = await officeError(
+      Excel.run(async (context) => {
+        dataSheet(context).charts.getItem('Chart 1').width = -1;
+        await context.sync();
+      }),
+    );
+    expect(error.code).toBe('InvalidArgument');
+    expect(error.debugInfo.errorLocation).toBe('Chart.width');
+  });
+});
+
+describe('the collection', () => {
+  it('finds charts by name without regard to case, and reports a missing one', async () => {
+    await addChart();
+    await Excel.run(async (context) => {
+      const charts = dataSheet(context).charts;
+      const found = charts.getItem('CHART 1').load('name');
+      const missing = charts.getItemOrNullObject('Chart 9');
+      const count = charts.getCount();
+      await context.sync();
+      expect(found.name).toBe('Chart 1');
+      expect(missing.isNullObject).toBe(true);
+      expect(count.value).toBe(1);
+    });
+    const error = await officeError(
+      Excel.run(async (context) => {
+        dataSheet(context).charts.getItem('Chart 9').load('name');
+        await context.sync();
+      }),
+    );
+    expect(error.code).toBe('ItemNotFound');
+  });
+
+  it('renames a chart, after which its new name finds it', async () => {
+    await addChart();
+    await Excel.run(async (context) => {
+      dataSheet(context).charts.getItem('Chart 1').name = 'Yield by steep';
+      await context.sync();
+      const renamed = dataSheet(context).charts.getItem('Yield by steep').load('id');
+      await context.sync();
+      expect(renamed.id).toBe(only().id);
+    });
+  });
+
+  it('deletes a chart; a proxy to it then reports ItemNotFound, and the next chart is not renumbered down', async () => {
+    await addChart();
+    const error = await officeError(
+      Excel.run(async (context) => {
+        const chart = dataSheet(context).charts.getItem('Chart 1');
+        chart.delete();
+        await context.sync();
+        expect(model.charts('Data')).toEqual([]);
+        chart.load('name');
+        await context.sync();
+      }),
+    );
+    expect(error.code).toBe('ItemNotFound');
+    expect(await addChart()).toBe('Chart 2');
+  });
+
+  it('keeps charts to their own sheet', async () => {
+    await addChart();
+    await Excel.run(async (context) => {
+      const other = context.workbook.worksheets.getItem('Sheet1').charts.load('count');
+      await context.sync();
+      expect(other.count).toBe(0);
+    });
+  });
+});

@@ -1,0 +1,32 @@
+/** The pane's address checks, each message worked out by hand. */
+import { describe, expect, it } from 'vitest';
+import { EMPTY_CHOICES, resolveRanges } from '../../../src/taskpane/model/choices';
+
+const base = { ...EMPTY_CHOICES, response: 'Batches!$B$1:$B$61', predictors: 'Batches!$C$1:$E$61,Batches!$G$1:$G$61' };
+
+describe('resolveRanges', () => {
+  it('splits several predictor areas into their columns, in order', () => {
+    const { ranges, problems } = resolveRanges(base);
+    expect(problems).toEqual([]);
+    expect(ranges?.predictorColumns.map((c) => c.left)).toEqual([2, 3, 4, 6]);
+    expect(ranges?.response).toEqual({ sheet: 'Batches', top: 0, left: 1, bottom: 60, right: 1 });
+  });
+
+  it('asks for missing ranges and names the field', () => {
+    const { problems } = resolveRanges(EMPTY_CHOICES);
+    expect(problems.map((p) => p.field)).toEqual(['response', 'predictors']);
+    expect(problems[0].message).toContain('Use selection');
+  });
+
+  it('rejects predictors whose rows differ from the response, a two-column response and bad settings', () => {
+    expect(resolveRanges({ ...base, predictors: 'Batches!C1:E50' }).problems[0]).toMatchObject({ field: 'predictors' });
+    expect(resolveRanges({ ...base, response: 'Batches!A1:B61' }).problems[0]).toMatchObject({ field: 'response', message: 'The response must be a single column.' });
+    expect(resolveRanges({ ...base, knownSigma: '-2' }).problems[0]).toMatchObject({ field: 'knownSigma' });
+    expect(resolveRanges({ ...base, level: 95 }).problems[0]).toMatchObject({ field: 'level' });
+    expect(resolveRanges({ ...base, newRows: "'Planned batches'!B2:C6" }).problems[0]).toMatchObject({ field: 'newRows', message: 'New rows need 4 columns, one per predictor, in the same order.' });
+  });
+
+  it('requires the sheet in every address', () => {
+    expect(resolveRanges({ ...base, response: 'B1:B61' }).problems[0].message).toContain('with its sheet');
+  });
+});
