@@ -152,7 +152,9 @@ export class PreviewWorkbook implements WorkbookModel {
           sheet.formulas.delete(k);
           this.formulasReading(old.area).forEach((f) => dirty.add(f));
         }
-        if (typeof input === 'string' && input.startsWith('=') && input.length > 1) {
+        // As in Excel, a cell formatted as text ("@") keeps what is entered as text, even "=…".
+        const asText = sheet.formats.get(k)?.trim() === '@';
+        if (typeof input === 'string' && input.startsWith('=') && input.length > 1 && !asText) {
           const formula = this.newFormula(sheet, input, top + i, left + j);
           sheet.formulas.set(k, formula);
           dirty.add(formula);

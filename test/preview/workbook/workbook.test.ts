@@ -109,3 +109,12 @@ describe('preview workbook', () => {
     expect(wb.usedExtent('Data')).toEqual({ rows: 3, columns: 4 });
   });
 });
+
+describe('text-formatted cells', () => {
+  it('keep an entry that starts with "=" as text, as Excel does', () => {
+    const wb = createWorkbook('Data');
+    wb.setNumberFormats('Data', 0, 0, [['@']]);
+    wb.setInputs('Data', 0, 0, [['=PLUMB.ANY(A2)']]);
+    expect(wb.valueAt({ sheet: 'Data', row: 0, column: 0 })).toBe('=PLUMB.ANY(A2)');
+  });
+});
