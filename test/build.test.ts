@@ -11,6 +11,7 @@ import { ORIGIN, ROOT, loadManifest, urlsIn } from "./support/manifest";
 // Every PLUMB cell function spills a grid, so each result is a matrix in functions.json.
 const EXPECTED_FUNCTIONS: ReadonlyArray<{ id: string; dimensionality: string }> = [
   "TERMS", "ESTIMATES", "STDERRORS", "INTERVALS", "COVARIANCE", "FITSTATS", "NESTEDF", "PREDICT", "RESIDUALS",
+  "COLLINEARITY", "CHECKS", "COMPARE",
 ].map((id) => ({ id, dimensionality: "matrix" }));
 
 const OFFICE_JS = "https://appsforoffice.microsoft.com/lib/1/hosted/office.js";

@@ -4,6 +4,7 @@ import { buildDesign } from './fit/design';
 import { type LeastSquaresSolution, solveLeastSquares } from './fit/leastSquares';
 import { covarianceMatrix, standardErrors } from './infer/covariance';
 import { fitSummary } from './infer/fitSummary';
+import { robustCovariance } from './infer/robustCovariance';
 import { type CoefficientReference, coefficientReference } from './infer/referenceDistribution';
 import { termTable } from './infer/termTable';
 import { resolveSettings } from './settings';
@@ -13,8 +14,9 @@ import type { FitSettings, ModelData, ModelFit, ResolvedSettings } from './types
 export interface SolvedModel {
   fit: ModelFit;
   solution: LeastSquaresSolution;
-  /** σ used for inference: the known σ, or σ̂. */
+  /** σ used for classical inference (predictions, tests): the known σ, or σ̂. */
   inferenceSigma: number;
+  /** The classical reference (z when σ is known), which predictions use whatever the covariance setting. */
   reference: CoefficientReference;
 }
 
@@ -70,21 +72,26 @@ function solveUncached(data: ModelData, resolved: ResolvedSettings): SolvedModel
   const sigmaHat = solution.yScale * Math.sqrt(solution.scaledRss / residualDf);
   const inferenceSigma = resolved.knownSigma ?? sigmaHat;
   const reference = coefficientReference(residualDf, resolved.knownSigma !== undefined);
-  const errors = standardErrors(solution, inferenceSigma);
+  // A robust covariance is estimated from the residuals, not from σ, so its statistics are t on
+  // the residual df (the usual practice) even when σ is known.
+  const robust = resolved.covariance === 'classical' ? undefined : robustCovariance(solution, resolved.covariance);
+  const termReference = robust === undefined ? reference : coefficientReference(residualDf, false);
+  const errors = robust?.standardErrors ?? standardErrors(solution, inferenceSigma);
   const summary = fitSummary(solution, resolved.knownSigma);
 
   const fit: ModelFit = {
-    terms: termTable(design.names, solution.coefficients, errors, reference, resolved.level),
+    terms: termTable(design.names, solution.coefficients, errors, termReference, resolved.level, robust?.leverageOne),
     n,
     parameters: q,
     rank,
     residualDf,
     sigma: sigmaHat,
     ...summary,
-    covariance: covarianceMatrix(solution, inferenceSigma),
+    covariance: robust?.covariance ?? covarianceMatrix(solution, inferenceSigma),
+    covarianceKind: resolved.covariance,
     fitted: Array.from(solution.fitted),
     residuals: Array.from(solution.residuals),
-    statisticKind: reference.kind,
+    statisticKind: termReference.kind,
     settings: resolved,
     perfectFit: solution.perfectFit,
   };

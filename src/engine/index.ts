@@ -4,6 +4,7 @@
 export { fitModel } from './fitModel';
 export { compareNested } from './compareNested';
 export { predict } from './predict';
+export { compareCandidates, type CandidateResult } from './infer/modelComparison';
 export {
   residualDiagnostics,
   maxCooksDistance,
@@ -15,6 +16,7 @@ export {
 } from './infer/influence';
 export { EngineError, type EngineErrorCode } from './errors';
 export type {
+  CovarianceKind,
   FitSettings,
   ModelData,
   ModelFit,
@@ -30,3 +32,9 @@ export { buildModelFrame, type FrameInput, type ModelFrame, type SkippedRow } fr
 export { codeRow, type SourceColumn } from './design/categorical';
 export { classifyCell, describeCell, type Cell, type CellGrid, type CellValue, type CellErrorValue } from './design/cells';
 export { INTERCEPT_NAME } from './fit/design';
+export { collinearity, type Collinearity, type CollinearityReason, type TermCollinearity } from './infer/collinearity';
+export { assumptionChecks, type AssumptionChecks } from './infer/assumptionChecks';
+export { COLLINEARITY_REASON_TEXT, conditionReading } from './infer/checkReadings';
+export type { DurbinWatson, DurbinWatsonReason } from './infer/durbinWatson';
+export type { BreuschPagan, BreuschPaganReason } from './infer/breuschPagan';
+export type { JarqueBera } from './infer/jarqueBera';

@@ -8,6 +8,13 @@ export interface ModelData {
   weights?: number[];
 }
 
+/**
+ * How the coefficients' covariance is estimated: classical σ²(XᵀWX)⁻¹, or a
+ * heteroscedasticity-consistent sandwich (HC0: White 1980; HC1: HC0·n/(n − p); HC3: MacKinnon &
+ * White 1985). See infer/robustCovariance.ts for weights, known σ and leverage-one rows.
+ */
+export type CovarianceKind = 'classical' | 'HC0' | 'HC1' | 'HC3';
+
 export interface FitSettings {
   /** Fit an intercept (default true). */
   intercept?: boolean;
@@ -18,12 +25,18 @@ export interface FitSettings {
    * distribution and σ itself instead of σ̂.
    */
   knownSigma?: number;
+  /**
+   * Covariance of the estimates behind every term's SE, statistic, p-value and interval (default
+   * 'classical'). A robust kind ignores a known σ for these; F, the nested F and predictions stay classical.
+   */
+  covariance?: CovarianceKind;
 }
 
 export interface ResolvedSettings {
   intercept: boolean;
   level: number;
   knownSigma: number | undefined;
+  covariance: CovarianceKind;
 }
 
 export interface TermEstimate {
@@ -40,6 +53,11 @@ export interface TermEstimate {
   cvPercent: number;
   /** The column is a linear combination of earlier ones, so this term cannot be estimated. */
   aliased: boolean;
+  /**
+   * Set when the standard error (and so the statistic, p and interval) is NaN for a reason other
+   * than aliasing: 'leverage-one' means a row with leverage 1 determines this term, which HC3 cannot scale.
+   */
+  undefinedBecause?: 'leverage-one';
 }
 
 export interface ModelFit {
@@ -65,13 +83,15 @@ export interface ModelFit {
   fDf: [number, number];
   /** q×q covariance of the estimates, rows in term order; NaN rows and columns for aliased terms. */
   covariance: number[][];
+  /** Which covariance `covariance` and the terms' SEs are. */
+  covarianceKind: CovarianceKind;
   logLikelihood: number;
   aic: number;
   bic: number;
   fitted: number[];
   /** y − fitted, unweighted. */
   residuals: number[];
-  /** Which distribution the statistics refer to. */
+  /** Which distribution the terms' statistics refer to (always t with a robust covariance). */
   statisticKind: 't' | 'z';
   settings: ResolvedSettings;
   /** True when the residuals are zero to the precision of the data: σ̂ and the SEs are then 0. */

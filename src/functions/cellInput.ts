@@ -3,7 +3,7 @@
  * engine's neutral cell values and settings. This is the only module that accepts `unknown`
  * cells from the host.
  */
-import { type CellGrid, type CellValue, EngineError, type FitSettings } from '../engine';
+import { type CellGrid, type CellValue, type CovarianceKind, EngineError, type FitSettings } from '../engine';
 
 /** A range argument as Excel passes it: row-major, blanks as "", null or 0, errors as objects. */
 export type RangeArgument = unknown[][];
@@ -35,10 +35,10 @@ function isUnset(value: unknown): boolean {
 
 /**
  * The shared settings, in the same order at the end of every PLUMB function:
- * level, intercept, known_sigma, weights. An unset level or known σ (omitted, blank, or 0 as a
- * blank reference arrives in desktop Excel) means the default.
+ * level, intercept, known_sigma, weights, robust. An unset level, known σ or robust (omitted,
+ * blank, or 0 as a blank reference arrives in desktop Excel) means the default.
  */
-export function parseSettings(levelArg: unknown, interceptArg: unknown, sigmaArg: unknown): FitSettings {
+export function parseSettings(levelArg: unknown, interceptArg: unknown, sigmaArg: unknown, robustArg?: unknown): FitSettings {
   const level = scalar(levelArg);
   const intercept = scalar(interceptArg);
   const sigma = scalar(sigmaArg);
@@ -60,5 +60,29 @@ export function parseSettings(levelArg: unknown, interceptArg: unknown, sigmaArg
     }
     settings.knownSigma = sigma;
   }
+  const covariance = parseRobust(scalar(robustArg));
+  if (covariance !== undefined) settings.covariance = covariance;
   return settings;
+}
+
+const COVARIANCE_NAMES = new Map<string, CovarianceKind>([
+  ['classical', 'classical'],
+  ['hc0', 'HC0'],
+  ['hc1', 'HC1'],
+  ['hc3', 'HC3'],
+]);
+
+/**
+ * TRUE or 1 asks for the robust default, HC3: of the three it behaves best in small samples
+ * (Long & Ervin 2000), and with it a single switch cell is enough for most workbooks.
+ */
+function parseRobust(robust: unknown): CovarianceKind | undefined {
+  if (isUnset(robust) || robust === false || robust === 0) return undefined;
+  if (robust === true || robust === 1) return 'HC3';
+  const named = typeof robust === 'string' ? COVARIANCE_NAMES.get(robust.trim().toLowerCase()) : undefined;
+  if (named !== undefined) return named;
+  throw new EngineError(
+    'bad-setting',
+    `robust must be FALSE (classical standard errors), TRUE (HC3), or one of the texts "HC0", "HC1", "HC3", "classical"; got ${String(robust)}.`,
+  );
 }

@@ -4,16 +4,18 @@
  * module; failures become #VALUE! with a message (cellError). The metadata plugin turns the JSDoc
  * below into functions.json and writes the CustomFunctions.associate calls.
  *
- * Shared settings, always the last four arguments and in this order: level, intercept,
- * known_sigma, weights.
+ * Shared settings, always the last five arguments and in this order: level, intercept,
+ * known_sigma, weights, robust.
  */
-import { compareNested, fitModel, predict as predictRows, residualDiagnostics } from '../engine';
+import { compareCandidates, compareNested, fitModel, predict as predictRows, residualDiagnostics } from '../engine';
 import { guarded } from './cellError';
 import type { RangeArgument } from './cellInput';
 import { toCellGrid } from './cellInput';
+import { readCandidates } from './candidates';
 import { readModel, type ModelRequest } from './modelRequest';
 import { readNewRows } from './newRows';
 import { covarianceGrid, estimatesGrid, intervalsGrid, standardErrorsGrid } from './grids/coefficientGrids';
+import { compareGrid } from './grids/compareGrid';
 import { fitStatsGrid } from './grids/fitStatsGrid';
 import { nestedGrid } from './grids/nestedGrid';
 import { predictGrid } from './grids/predictGrid';
@@ -22,12 +24,21 @@ import { termsGrid } from './grids/termsGrid';
 
 /* eslint-disable @typescript-eslint/no-explicit-any -- ranges arrive from Excel as any[][] */
 
-function request(known_y: any[][], known_x: any[][], level: any, intercept: any, known_sigma: any, weights: any): ModelRequest {
+function request(
+  known_y: any[][],
+  known_x: any[][],
+  level: any,
+  intercept: any,
+  known_sigma: any,
+  weights: any,
+  robust?: any,
+): ModelRequest {
   return readModel(known_y as RangeArgument, [{ range: known_x as RangeArgument, argument: 'known_x' }], {
     level,
     intercept,
     knownSigma: known_sigma,
     weights: weights as RangeArgument | null,
+    robust,
   });
 }
 
@@ -44,10 +55,11 @@ function fitOf(r: ModelRequest) {
  * @param [intercept] TRUE (default) fits an intercept; FALSE forces the model through zero.
  * @param [known_sigma] The noise standard deviation if known from outside the data. Default: estimated.
  * @param [weights] Optional column of positive case weights, same rows as known_y.
+ * @param [robust] FALSE (default) for classical standard errors; TRUE for heteroscedasticity-consistent HC3, or the text "HC0", "HC1", "HC3" or "classical".
  * @returns A table with a header row and one row per term.
  */
-export function terms(known_y: any[][], known_x: any[][], level?: any, intercept?: any, known_sigma?: any, weights?: any[][]): any[][] {
-  return guarded(() => termsGrid(fitOf(request(known_y, known_x, level, intercept, known_sigma, weights))));
+export function terms(known_y: any[][], known_x: any[][], level?: any, intercept?: any, known_sigma?: any, weights?: any[][], robust?: any): any[][] {
+  return guarded(() => termsGrid(fitOf(request(known_y, known_x, level, intercept, known_sigma, weights, robust))));
 }
 
 /**
@@ -59,10 +71,11 @@ export function terms(known_y: any[][], known_x: any[][], level?: any, intercept
  * @param [intercept] TRUE (default) fits an intercept; FALSE forces the model through zero.
  * @param [known_sigma] The noise standard deviation if known. Default: estimated.
  * @param [weights] Optional column of positive case weights, same rows as known_y.
+ * @param [robust] Accepted as in every PLUMB function; the estimates do not depend on it.
  * @returns One column of numbers.
  */
-export function estimates(known_y: any[][], known_x: any[][], level?: any, intercept?: any, known_sigma?: any, weights?: any[][]): any[][] {
-  return guarded(() => estimatesGrid(fitOf(request(known_y, known_x, level, intercept, known_sigma, weights))));
+export function estimates(known_y: any[][], known_x: any[][], level?: any, intercept?: any, known_sigma?: any, weights?: any[][], robust?: any): any[][] {
+  return guarded(() => estimatesGrid(fitOf(request(known_y, known_x, level, intercept, known_sigma, weights, robust))));
 }
 
 /**
@@ -74,10 +87,11 @@ export function estimates(known_y: any[][], known_x: any[][], level?: any, inter
  * @param [intercept] TRUE (default) fits an intercept; FALSE forces the model through zero.
  * @param [known_sigma] The noise standard deviation if known. Default: estimated.
  * @param [weights] Optional column of positive case weights, same rows as known_y.
+ * @param [robust] FALSE (default) for classical standard errors; TRUE for heteroscedasticity-consistent HC3, or the text "HC0", "HC1", "HC3" or "classical".
  * @returns One column of standard errors.
  */
-export function stdErrors(known_y: any[][], known_x: any[][], level?: any, intercept?: any, known_sigma?: any, weights?: any[][]): any[][] {
-  return guarded(() => standardErrorsGrid(fitOf(request(known_y, known_x, level, intercept, known_sigma, weights))));
+export function stdErrors(known_y: any[][], known_x: any[][], level?: any, intercept?: any, known_sigma?: any, weights?: any[][], robust?: any): any[][] {
+  return guarded(() => standardErrorsGrid(fitOf(request(known_y, known_x, level, intercept, known_sigma, weights, robust))));
 }
 
 /**
@@ -89,10 +103,11 @@ export function stdErrors(known_y: any[][], known_x: any[][], level?: any, inter
  * @param [intercept] TRUE (default) fits an intercept; FALSE forces the model through zero.
  * @param [known_sigma] The noise standard deviation if known. Default: estimated.
  * @param [weights] Optional column of positive case weights, same rows as known_y.
+ * @param [robust] FALSE (default) for classical standard errors; TRUE for heteroscedasticity-consistent HC3, or the text "HC0", "HC1", "HC3" or "classical".
  * @returns Two columns: low and high.
  */
-export function intervals(known_y: any[][], known_x: any[][], level?: any, intercept?: any, known_sigma?: any, weights?: any[][]): any[][] {
-  return guarded(() => intervalsGrid(fitOf(request(known_y, known_x, level, intercept, known_sigma, weights))));
+export function intervals(known_y: any[][], known_x: any[][], level?: any, intercept?: any, known_sigma?: any, weights?: any[][], robust?: any): any[][] {
+  return guarded(() => intervalsGrid(fitOf(request(known_y, known_x, level, intercept, known_sigma, weights, robust))));
 }
 
 /**
@@ -104,10 +119,11 @@ export function intervals(known_y: any[][], known_x: any[][], level?: any, inter
  * @param [intercept] TRUE (default) fits an intercept; FALSE forces the model through zero.
  * @param [known_sigma] The noise standard deviation if known. Default: estimated.
  * @param [weights] Optional column of positive case weights, same rows as known_y.
+ * @param [robust] FALSE (default) for classical standard errors; TRUE for heteroscedasticity-consistent HC3, or the text "HC0", "HC1", "HC3" or "classical".
  * @returns A square matrix, one row and column per term.
  */
-export function covariance(known_y: any[][], known_x: any[][], level?: any, intercept?: any, known_sigma?: any, weights?: any[][]): any[][] {
-  return guarded(() => covarianceGrid(fitOf(request(known_y, known_x, level, intercept, known_sigma, weights))));
+export function covariance(known_y: any[][], known_x: any[][], level?: any, intercept?: any, known_sigma?: any, weights?: any[][], robust?: any): any[][] {
+  return guarded(() => covarianceGrid(fitOf(request(known_y, known_x, level, intercept, known_sigma, weights, robust))));
 }
 
 /**
@@ -119,11 +135,12 @@ export function covariance(known_y: any[][], known_x: any[][], level?: any, inte
  * @param [intercept] TRUE (default) fits an intercept; FALSE forces the model through zero (R² is then uncentered).
  * @param [known_sigma] The noise standard deviation if known. Default: estimated.
  * @param [weights] Optional column of positive case weights, same rows as known_y.
+ * @param [robust] Accepted as in every PLUMB function; these statistics, the F test included, stay classical.
  * @returns Two columns: label and value.
  */
-export function fitStats(known_y: any[][], known_x: any[][], level?: any, intercept?: any, known_sigma?: any, weights?: any[][]): any[][] {
+export function fitStats(known_y: any[][], known_x: any[][], level?: any, intercept?: any, known_sigma?: any, weights?: any[][], robust?: any): any[][] {
   return guarded(() => {
-    const r = request(known_y, known_x, level, intercept, known_sigma, weights);
+    const r = request(known_y, known_x, level, intercept, known_sigma, weights, robust);
     return fitStatsGrid(fitOf(r), r.frame);
   });
 }
@@ -138,6 +155,7 @@ export function fitStats(known_y: any[][], known_x: any[][], level?: any, interc
  * @param [intercept] TRUE (default) fits an intercept in both models; FALSE leaves it out of both.
  * @param [known_sigma] The noise standard deviation if known. Default: estimated from the larger model.
  * @param [weights] Optional column of positive case weights, same rows as known_y.
+ * @param [robust] Accepted as in every PLUMB function; the nested F test stays classical.
  * @returns Two columns: label and value, ending with a reading.
  */
 export function nestedF(
@@ -148,6 +166,7 @@ export function nestedF(
   intercept?: any,
   known_sigma?: any,
   weights?: any[][],
+  robust?: any,
 ): any[][] {
   return guarded(() => {
     const r = readModel(
@@ -156,7 +175,7 @@ export function nestedF(
         { range: base_x as RangeArgument, argument: 'base_x' },
         { range: added_x as RangeArgument, argument: 'added_x' },
       ],
-      { level, intercept, knownSigma: known_sigma, weights: weights as RangeArgument | null },
+      { level, intercept, knownSigma: known_sigma, weights: weights as RangeArgument | null, robust },
     );
     const { x, y, weights: w } = r.frame.data;
     const inBase = r.frame.termBlocks.map((b) => b === 0);
@@ -183,6 +202,7 @@ export function nestedF(
  * @param [intercept] TRUE (default) fits an intercept; FALSE forces the model through zero.
  * @param [known_sigma] The noise standard deviation if known. Default: estimated.
  * @param [weights] Optional column of positive case weights, same rows as known_y. New rows have weight 1.
+ * @param [robust] Accepted as in every PLUMB function; both intervals use the classical covariance.
  * @returns One row per new row: prediction, mean low and high, new low and high.
  */
 export function predict(
@@ -193,9 +213,10 @@ export function predict(
   intercept?: any,
   known_sigma?: any,
   weights?: any[][],
+  robust?: any,
 ): any[][] {
   return guarded(() => {
-    const r = request(known_y, known_x, level, intercept, known_sigma, weights);
+    const r = request(known_y, known_x, level, intercept, known_sigma, weights, robust);
     const { rows } = readNewRows(toCellGrid(new_x as RangeArgument, 'new_x'), r.frame);
     const complete = rows.filter((row): row is number[] => row !== undefined);
     const predicted = complete.length > 0 ? predictRows(r.frame.data, complete, r.settings) : [];
@@ -216,11 +237,91 @@ export function predict(
  * @param [intercept] TRUE (default) fits an intercept; FALSE forces the model through zero.
  * @param [known_sigma] The noise standard deviation if known; used for the standardized residual and Cook's distance. Default: estimated.
  * @param [weights] Optional column of positive case weights, same rows as known_y.
+ * @param [robust] Accepted as in every PLUMB function; it does not change these diagnostics.
  * @returns A table with a header row and one row per row used, numbered by its position in known_y.
  */
-export function residuals(known_y: any[][], known_x: any[][], level?: any, intercept?: any, known_sigma?: any, weights?: any[][]): any[][] {
+export function residuals(known_y: any[][], known_x: any[][], level?: any, intercept?: any, known_sigma?: any, weights?: any[][], robust?: any): any[][] {
   return guarded(() => {
-    const r = request(known_y, known_x, level, intercept, known_sigma, weights);
+    const r = request(known_y, known_x, level, intercept, known_sigma, weights, robust);
     return residualsGrid(residualDiagnostics(r.frame.data, r.settings), r.frame);
+  });
+}
+
+/**
+ * Which subset of predictors to keep: fits every candidate on the same rows and ranks them by BIC, with residual df, sigma-hat, adjusted R², AIC and ΔBIC.
+ * @customfunction COMPARE
+ * @param known_y Responses: one column, with an optional text header.
+ * @param known_x Every predictor any candidate may use: one or more columns with the same rows. Text columns are categorical.
+ * @param candidates One row per candidate model and one 1/0 (or TRUE/FALSE) cell per column of known_x: 1 includes that column.
+ * @param [level] Confidence level, accepted as in every PLUMB function; it does not change this comparison. Default 0.95.
+ * @param [intercept] TRUE (default) fits an intercept in every candidate; FALSE leaves it out of all.
+ * @param [known_sigma] The noise standard deviation if known; the likelihoods then use it. Default: estimated.
+ * @param [weights] Optional column of positive case weights, same rows as known_y.
+ * @param [robust] Accepted as in every PLUMB function; AIC and BIC do not depend on it.
+ * @returns A table with a header row and one row per candidate, best (smallest BIC) first.
+ */
+export function compare(
+  known_y: any[][],
+  known_x: any[][],
+  candidates: any[][],
+  level?: any,
+  intercept?: any,
+  known_sigma?: any,
+  weights?: any[][],
+  robust?: any,
+): any[][] {
+  return guarded(() => {
+    const r = request(known_y, known_x, level, intercept, known_sigma, weights, robust);
+    const choices = readCandidates(toCellGrid(candidates as RangeArgument, 'candidates'), r.frame);
+    const results = compareCandidates(
+      r.frame.data,
+      choices.map((c) => c.terms),
+      r.settings,
+    );
+    return compareGrid(results, choices, r.frame);
+  });
+}
+
+// Imports of the checks below sit with them so that this block can be appended on its own.
+import { assumptionChecks, collinearity as collinearityOf } from '../engine';
+import { readPredictors } from './modelRequest';
+import { checksGrid } from './grids/checksGrid';
+import { collinearityGrid } from './grids/collinearityGrid';
+
+/**
+ * How far each predictor is explained by the others: VIF and tolerance for every term, and the condition number of the design.
+ * @customfunction COLLINEARITY
+ * @param known_x Predictors: one or more columns, with an optional header row (a first row of text in every column). Text columns are categorical.
+ * @param [level] Confidence level, accepted as in every PLUMB function; it does not change these numbers. Default 0.95.
+ * @param [intercept] TRUE (default): VIFs from regressions with an intercept, and the intercept column in the condition number; FALSE leaves it out of both.
+ * @param [known_sigma] Accepted as in every PLUMB function; collinearity does not depend on it.
+ * @param [weights] Optional column of positive case weights, same rows as known_x.
+ * @param [robust] Accepted as in every PLUMB function; collinearity does not depend on it.
+ * @returns A table with a header row, one row per term, and a last row with the condition number and its reading.
+ */
+export function collinearity(known_x: any[][], level?: any, intercept?: any, known_sigma?: any, weights?: any[][], robust?: any): any[][] {
+  return guarded(() => {
+    const r = readPredictors(known_x as RangeArgument, { level, intercept, knownSigma: known_sigma, weights: weights as RangeArgument | null, robust });
+    const { x, names, weights: w } = r.frame.data;
+    return collinearityGrid(collinearityOf(x, names, w, r.settings));
+  });
+}
+
+/**
+ * Are the model's assumptions plausible? Durbin–Watson for autocorrelation, Breusch–Pagan for uneven spread, Jarque–Bera for normality, plus influential rows and collinearity, each with a reading.
+ * @customfunction CHECKS
+ * @param known_y Responses: one column, with an optional text header. Row order matters for Durbin–Watson.
+ * @param known_x Predictors: one or more columns with the same rows. Text columns are categorical.
+ * @param [level] A check reports a problem when its p-value is below 1 − level. Default 0.95.
+ * @param [intercept] TRUE (default) fits an intercept; FALSE forces the model through zero.
+ * @param [known_sigma] The noise standard deviation if known; used for Cook's distance only. Default: estimated.
+ * @param [weights] Optional column of positive case weights, same rows as known_y; the checks use the weighted residuals.
+ * @param [robust] Accepted as in every PLUMB function; the checks do not depend on it (uneven spread is a reason to turn it on elsewhere).
+ * @returns Two columns: label and value, ending with an overall reading.
+ */
+export function checks(known_y: any[][], known_x: any[][], level?: any, intercept?: any, known_sigma?: any, weights?: any[][], robust?: any): any[][] {
+  return guarded(() => {
+    const r = request(known_y, known_x, level, intercept, known_sigma, weights, robust);
+    return checksGrid(assumptionChecks(r.frame.data, r.settings), r.frame);
   });
 }

@@ -1,4 +1,4 @@
-import { buildModelFrame, type FitSettings, type ModelFrame } from '../engine';
+import { buildModelFrame, classifyCell, EngineError, type FitSettings, type ModelFrame } from '../engine';
 import { parseSettings, type RangeArgument, toCellGrid } from './cellInput';
 
 /** What every PLUMB function reads first: its ranges as a model frame, and the shared settings. */
@@ -12,10 +12,11 @@ export interface SettingArguments {
   intercept: unknown;
   knownSigma: unknown;
   weights: RangeArgument | null | undefined;
+  robust?: unknown;
 }
 
 export function readModel(knownY: RangeArgument, xBlocks: { range: RangeArgument; argument: string }[], s: SettingArguments): ModelRequest {
-  const settings = parseSettings(s.level, s.intercept, s.knownSigma);
+  const settings = parseSettings(s.level, s.intercept, s.knownSigma, s.robust);
   const weights = s.weights === null || s.weights === undefined ? undefined : toCellGrid(s.weights, 'weights');
   const frame = buildModelFrame({
     y: toCellGrid(knownY, 'known_y'),
@@ -25,4 +26,23 @@ export function readModel(knownY: RangeArgument, xBlocks: { range: RangeArgument
     intercept: settings.intercept ?? true,
   });
   return { frame, settings };
+}
+
+/**
+ * For functions that take predictors only (PLUMB.COLLINEARITY): known_x read through readModel
+ * with a stand-in response of zeros, so headers, blanks, categorical coding and weights behave
+ * exactly as in every other function. Without a known_y to tell, row 1 is a header when every
+ * cell in it is text (a text header on every column is what the other functions require too).
+ * The zeros' values never reach a result: callers use only the frame's x, names and weights.
+ */
+export function readPredictors(knownX: RangeArgument, s: SettingArguments): ModelRequest {
+  const x = toCellGrid(knownX, 'known_x');
+  if (x.length === 0 || x[0].length === 0) throw new EngineError('no-rows', 'known_x is empty: select the predictor columns.');
+  const weightRows = s.weights === null || s.weights === undefined ? 0 : toCellGrid(s.weights, 'weights').length;
+  if (weightRows > 0 && weightRows !== x.length) {
+    throw new EngineError('shape', `known_x has ${x.length} rows but weights has ${weightRows}; select the same rows for both.`);
+  }
+  const hasHeader = x.length > 1 && x[0].every((cell) => classifyCell(cell).kind === 'text');
+  const standIn = x.map((_, i): unknown[] => [hasHeader && i === 0 ? 'y' : 0]);
+  return readModel(standIn, [{ range: knownX, argument: 'known_x' }], s);
 }

@@ -30,8 +30,11 @@ const DATA_ARGUMENTS: Record<string, string[]> = {
   NESTEDF: ['known_y', 'base_x', 'added_x'],
   PREDICT: ['known_y', 'known_x', 'new_x'],
   RESIDUALS: ['known_y', 'known_x'],
+  COLLINEARITY: ['known_x'],
+  CHECKS: ['known_y', 'known_x'],
+  COMPARE: ['known_y', 'known_x', 'candidates'],
 };
-const SETTINGS = ['level', 'intercept', 'known_sigma', 'weights'];
+const SETTINGS = ['level', 'intercept', 'known_sigma', 'weights', 'robust'];
 
 let functions: FunctionMetadata[];
 
@@ -42,11 +45,11 @@ beforeAll(async () => {
 });
 
 describe('generated function metadata', () => {
-  it('lists exactly the nine PLUMB functions', () => {
+  it('lists exactly the twelve PLUMB functions', () => {
     expect(functions.map((f) => f.id).sort()).toEqual(Object.keys(DATA_ARGUMENTS).sort());
   });
 
-  it.each(Object.entries(DATA_ARGUMENTS))('%s: data ranges, then level, intercept, known_sigma, weights', (id, data) => {
+  it.each(Object.entries(DATA_ARGUMENTS))('%s: data ranges, then level, intercept, known_sigma, weights, robust', (id, data) => {
     const fn = functions.find((f) => f.id === id)!;
     expect(fn.description?.length ?? 0).toBeGreaterThan(30);
     expect(fn.parameters.map((p) => p.name)).toEqual([...data, ...SETTINGS]);
@@ -55,9 +58,10 @@ describe('generated function metadata', () => {
       expect(p.dimensionality).toBe('matrix');
       expect(p.optional ?? false).toBe(false);
     }
-    const [level, intercept, sigma, weights] = fn.parameters.slice(data.length);
-    for (const p of [level, intercept, sigma, weights]) expect(p.optional).toBe(true);
+    const [level, intercept, sigma, weights, robust] = fn.parameters.slice(data.length);
+    for (const p of [level, intercept, sigma, weights, robust]) expect(p.optional).toBe(true);
     expect(level.dimensionality ?? 'scalar').toBe('scalar');
+    expect(robust.dimensionality ?? 'scalar').toBe('scalar');
     expect(weights.dimensionality).toBe('matrix');
     expect(fn.result.dimensionality).toBe('matrix');
   });

@@ -1,11 +1,23 @@
 /**
- * The shared settings scheme: the same four trailing arguments, in the same order, in every
+ * The shared settings scheme: the same five trailing arguments, in the same order, in every
  * function. Expected values come from the engine tested elsewhere, plus identities that are
  * common practice (no source): a wider level widens intervals, equal weights change nothing.
  */
 import { describe, expect, it } from 'vitest';
 import { fitModel } from '../../src/engine';
-import { estimates, fitStats, intervals, nestedF, predict, terms } from '../../src/functions/functions';
+import {
+  compare,
+  covariance,
+  estimates,
+  fitStats,
+  intervals,
+  nestedF,
+  predict,
+  residuals,
+  stdErrors,
+  terms,
+} from '../../src/functions/functions';
+import { thrownBy } from '../support/cells';
 import { randomProblem } from '../support/random';
 
 // Excel passes an omitted optional argument as null, which the declared TypeScript types
@@ -61,5 +73,39 @@ describe('settings', () => {
     expect(Math.abs((nested.F as number) - t * t)).toBeLessThan(1e-9 * t * t);
     const [row] = predict(yCells, x, [[1, 1, 1]], null, null, null, w);
     expect(row[0]).toBeCloseTo(weighted.terms.reduce((s, term) => s + term.estimate, 0), 10);
+  });
+});
+
+describe('robust, the fifth setting, in the same place in every function', () => {
+  const xBase = x.map((r) => r.slice(0, 2));
+  const xAdded = x.map((r) => [r[2]]);
+  // Every function, called with only robust set (after four unset settings): the data arguments
+  // differ, the settings tail does not.
+  const calls: Record<string, (robust: unknown) => unknown[][]> = {
+    TERMS: (r) => terms(yCells, x, null, null, null, OMITTED, r),
+    ESTIMATES: (r) => estimates(yCells, x, null, null, null, OMITTED, r),
+    STDERRORS: (r) => stdErrors(yCells, x, null, null, null, OMITTED, r),
+    INTERVALS: (r) => intervals(yCells, x, null, null, null, OMITTED, r),
+    COVARIANCE: (r) => covariance(yCells, x, null, null, null, OMITTED, r),
+    FITSTATS: (r) => fitStats(yCells, x, null, null, null, OMITTED, r),
+    NESTEDF: (r) => nestedF(yCells, xBase, xAdded, null, null, null, OMITTED, r),
+    PREDICT: (r) => predict(yCells, x, [[0, 0, 0]], null, null, null, OMITTED, r),
+    RESIDUALS: (r) => residuals(yCells, x, null, null, null, OMITTED, r),
+    COMPARE: (r) => compare(yCells, x, [[1, 1, 1], [1, 0, 0]], null, null, null, OMITTED, r),
+  };
+  const honouring = new Set(['TERMS', 'STDERRORS', 'INTERVALS', 'COVARIANCE']);
+
+  it.each(Object.keys(calls))('%s reads robust as its fifth setting', (id) => {
+    const call = calls[id];
+    expect(thrownBy(() => call('HC2')).message).toMatch(/^robust must be FALSE/);
+    expect(call(false)).toEqual(call(null));
+    if (honouring.has(id)) expect(call(true)).not.toEqual(call(false));
+    else expect(call(true)).toEqual(call(false));
+  });
+
+  it('robust TRUE in TERMS, STDERRORS and INTERVALS gives the engine’s HC3 numbers', () => {
+    const engine = fitModel({ y, x }, { covariance: 'HC3' });
+    expect(stdErrors(yCells, x, null, null, null, OMITTED, true).map((r) => r[0])).toEqual(engine.terms.map((t) => t.standardError));
+    expect(terms(yCells, x, null, null, null, OMITTED, true).slice(1).map((r) => r[5])).toEqual(engine.terms.map((t) => t.ciLow));
   });
 });

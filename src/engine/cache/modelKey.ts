@@ -1,3 +1,4 @@
+import { COVARIANCE_KINDS } from '../settings';
 import type { FitSettings, ModelData } from '../types';
 
 /**
@@ -17,14 +18,16 @@ export function modelKey(data: ModelData, settings: FitSettings | undefined, tag
   const n = data.y.length;
   const p = data.x[0]?.length ?? 0;
   const hasWeights = data.weights !== undefined;
-  const numbers = new Float64Array(6 + n * (1 + p + (hasWeights ? 1 : 0)));
+  const numbers = new Float64Array(7 + n * (1 + p + (hasWeights ? 1 : 0)));
   numbers[0] = n;
   numbers[1] = p;
   numbers[2] = settings?.intercept === false ? 0 : 1;
   numbers[3] = settings?.level ?? 0.95;
   numbers[4] = settings?.knownSigma ?? -1;
   numbers[5] = hasWeights ? 1 : 0;
-  let at = 6;
+  // A robust fit of the same data is a different result (other SEs, covariance, reference), so the kind is part of the key.
+  numbers[6] = COVARIANCE_KINDS.indexOf(settings?.covariance ?? 'classical');
+  let at = 7;
   for (let i = 0; i < n; i++) numbers[at++] = data.y[i];
   for (let i = 0; i < n; i++) for (let j = 0; j < p; j++) numbers[at++] = data.x[i]?.[j] ?? Number.NaN;
   if (data.weights !== undefined) for (let i = 0; i < n; i++) numbers[at++] = data.weights[i] ?? Number.NaN;

@@ -4,6 +4,7 @@ import type { CoefficientReference } from './referenceDistribution';
 /**
  * One row per term. With SE = 0 (a perfect fit) the statistic is ±∞ and p is 0, as NIST
  * certifies for Wampler1; an estimate of exactly 0 then has no sign and its statistic is NaN.
+ * A term marked in `leverageOne` has a NaN SE (see robustCovariance) and says why.
  */
 export function termTable(
   names: readonly string[],
@@ -11,6 +12,7 @@ export function termTable(
   standardErrors: readonly number[],
   reference: CoefficientReference,
   level: number,
+  leverageOne: readonly boolean[] = [],
 ): TermEstimate[] {
   const multiplier = reference.multiplier(level);
   return names.map((name, j) => {
@@ -31,6 +33,7 @@ export function termTable(
     }
     const statistic = estimate / standardError;
     const halfWidth = multiplier * standardError;
+    const because = leverageOne[j] === true ? { undefinedBecause: 'leverage-one' as const } : {};
     return {
       name,
       estimate,
@@ -41,6 +44,7 @@ export function termTable(
       ciHigh: estimate + halfWidth,
       cvPercent: (100 * standardError) / Math.abs(estimate),
       aliased: false,
+      ...because,
     };
   });
 }

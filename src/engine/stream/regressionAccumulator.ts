@@ -1,0 +1,114 @@
+import { EngineError } from '../errors';
+import { foldBlock } from './triangularUpdate';
+
+/**
+ * Rows in blocks, as a sheet is read: x column-major (rows × predictors), y, and optional
+ * weights. The accumulator may overwrite the arrays it is given.
+ */
+export interface RowBlock {
+  rows: number;
+  x: Float64Array;
+  y: Float64Array;
+  weights?: Float64Array;
+}
+
+/** What a pass over all rows leaves behind: everything the fit needs, in O(q²) memory. */
+export interface AccumulatedRows {
+  /** Upper-triangular R of [1 | X | y] (√w-weighted), row-major size × size, size = q + 1. */
+  r: Float64Array;
+  size: number;
+  n: number;
+  intercept: boolean;
+  weightSum: number;
+  /** Σ log wᵢ, for the Gaussian log-likelihood of a weighted model. */
+  logWeightSum: number;
+  /** Weighted mean of y and Σ w(y − ȳ)², merged block by block (Chan, Golub & LeVeque 1979). */
+  yMean: number;
+  ySquaredDeviations: number;
+  weighted: boolean;
+}
+
+/**
+ * Least squares for data too large to hold twice: each block of rows is folded into the R
+ * factor of [1 | X | y] by Householder reflections (TSQR), so memory beyond the current block
+ * is O(q²) whatever the number of rows.
+ */
+export class RegressionAccumulator {
+  private readonly size: number;
+  private readonly r: Float64Array;
+  private n = 0;
+  private weightSum = 0;
+  private logWeightSum = 0;
+  private yMean = 0;
+  private ySquaredDeviations = 0;
+  private readonly weighted: boolean;
+  private work = new Float64Array(0);
+
+  constructor(
+    private readonly predictors: number,
+    private readonly intercept: boolean,
+    weighted = false,
+  ) {
+    this.size = predictors + (intercept ? 1 : 0) + 1;
+    this.r = new Float64Array(this.size * this.size);
+    this.weighted = weighted;
+  }
+
+  addBlock(block: RowBlock): void {
+    const { rows, x, y, weights } = block;
+    if (rows === 0) return;
+    if (x.length !== rows * this.predictors || y.length !== rows) {
+      throw new EngineError('shape', `A block of ${rows} rows needs ${rows * this.predictors} x values and ${rows} y values.`);
+    }
+    if (this.weighted !== (weights !== undefined)) throw new EngineError('shape', 'Either every block has weights or none has.');
+    const size = this.size;
+    if (this.work.length < rows * size) this.work = new Float64Array(rows * size);
+    const work = this.work.subarray(0, rows * size);
+    const offset = this.intercept ? 1 : 0;
+    let blockWeight = 0;
+    let blockMean = 0;
+    for (let i = 0; i < rows; i++) {
+      const w = weights === undefined ? 1 : weights[i];
+      if (!(w > 0 && Number.isFinite(w)) || !Number.isFinite(y[i])) {
+        throw new EngineError(w > 0 ? 'non-finite' : 'bad-weight', `Row ${this.n + i + 1} has a weight or response that is not a positive finite number.`);
+      }
+      const root = Math.sqrt(w);
+      if (this.intercept) work[i] = root;
+      work[(size - 1) * rows + i] = y[i] * root;
+      blockWeight += w;
+      blockMean += w * y[i];
+      if (weights !== undefined) this.logWeightSum += Math.log(w);
+    }
+    for (let j = 0; j < this.predictors; j++) {
+      for (let i = 0; i < rows; i++) {
+        const v = x[j * rows + i];
+        if (!Number.isFinite(v)) throw new EngineError('non-finite', `Row ${this.n + i + 1}, predictor ${j + 1} is ${v}; it must be a finite number.`);
+        work[(j + offset) * rows + i] = v * (weights === undefined ? 1 : Math.sqrt(weights[i]));
+      }
+    }
+    blockMean /= blockWeight;
+    let blockDeviations = 0;
+    for (let i = 0; i < rows; i++) blockDeviations += (weights === undefined ? 1 : weights[i]) * (y[i] - blockMean) ** 2;
+    const total = this.weightSum + blockWeight;
+    const delta = blockMean - this.yMean;
+    this.ySquaredDeviations += blockDeviations + (delta * delta * this.weightSum * blockWeight) / total;
+    this.yMean += (delta * blockWeight) / total;
+    this.weightSum = total;
+    this.n += rows;
+    foldBlock(this.r, size, work, rows);
+  }
+
+  result(): AccumulatedRows {
+    return {
+      r: Float64Array.from(this.r),
+      size: this.size,
+      n: this.n,
+      intercept: this.intercept,
+      weightSum: this.weightSum,
+      logWeightSum: this.logWeightSum,
+      yMean: this.yMean,
+      ySquaredDeviations: this.ySquaredDeviations,
+      weighted: this.weighted,
+    };
+  }
+}

@@ -1,0 +1,43 @@
+import { type CellGrid, classifyCell, describeCell, EngineError, type ModelFrame } from '../engine';
+
+/**
+ * The candidates grid: one row per candidate model, one 0/1 (or FALSE/TRUE) cell per source
+ * column of known_x, so a categorical column is switched on or off with all its indicators.
+ * A blank is not read as 0: a half-filled grid is more likely a mistake than a choice.
+ */
+export interface CandidateChoice {
+  /** Columns of known_x included, ascending. */
+  sources: number[];
+  /** The columns of the frame's design (frame.data.x) those bring in. */
+  terms: number[];
+}
+
+export function readCandidates(grid: CellGrid, frame: ModelFrame): CandidateChoice[] {
+  const width = frame.columns.length;
+  if (grid.length === 0 || grid.every((row) => row.length === 0)) {
+    throw new EngineError('shape', `candidates is empty: give one row per candidate model, with a 1 or 0 for each of the ${width} columns of known_x.`);
+  }
+  return grid.map((row, i) => {
+    if (row.length !== width) {
+      throw new EngineError(
+        'shape',
+        `candidates has ${row.length} columns but known_x has ${width}: give one 1/0 column per column of known_x, ` +
+          'in the same order (a text column counts once, whatever its number of levels).',
+      );
+    }
+    const included = row.map((value, j) => {
+      const cell = classifyCell(value);
+      if (cell.kind === 'number' && (cell.value === 0 || cell.value === 1)) return cell.value === 1;
+      if (cell.kind === 'boolean') return cell.value;
+      throw new EngineError(
+        'bad-value',
+        `candidates row ${i + 1}, column ${j + 1} ("${frame.columns[j].name}") holds ${describeCell(cell)}: ` +
+          'use 1 or TRUE to include that column of known_x, 0 or FALSE to leave it out.',
+      );
+    });
+    return {
+      sources: included.flatMap((on, j) => (on ? [j] : [])),
+      terms: frame.termColumns.flatMap((source, term) => (included[source] ? [term] : [])),
+    };
+  });
+}

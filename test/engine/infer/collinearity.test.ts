@@ -1,0 +1,226 @@
+/**
+ * VIF, tolerance and the condition number. Sources: an independent oracle built with ml-matrix
+ * (npm, general-purpose linear algebra): each VIF from the auxiliary regression actually run with
+ * ml-matrix's QR solve, 1/(1 − R²) from its residuals; the condition number from ml-matrix's SVD
+ * of the unit-scaled design. Textbook closed forms: with two predictors of correlation r both
+ * VIFs are 1/(1 − r²); orthogonal columns of equal norm have every singular value equal; the
+ * singular values of a 2×2 matrix have product |det| and squares summing to its Frobenius norm².
+ */
+import { Matrix, QrDecomposition, SingularValueDecomposition } from 'ml-matrix';
+import { describe, expect, it } from 'vitest';
+import { collinearity } from '../../../src/engine';
+import { singularValues } from '../../../src/engine/linalg/jacobiSvd';
+import { gaussian, mulberry32 } from '../../support/random';
+
+/** Predictors with built-in correlation (x2 leans on x1, x4 on x1 and x3) so that VIFs are well above 1. */
+function correlatedPredictors(seed: number, n: number): number[][] {
+  const normal = gaussian(mulberry32(seed));
+  return Array.from({ length: n }, () => {
+    const a = normal();
+    const c = normal();
+    return [3 + a, 0.8 * a + 0.6 * normal(), c, 0.5 * a - 0.7 * c + 0.4 * normal()];
+  });
+}
+
+function positiveWeights(seed: number, n: number): number[] {
+  const uniform = mulberry32(seed);
+  return Array.from({ length: n }, () => 0.2 + 3 * uniform());
+}
+
+/** VIF_j by running the auxiliary regression with ml-matrix, as the definition says. */
+function referenceVif(x: number[][], j: number, intercept: boolean, w = x.map(() => 1)): number {
+  const root = w.map(Math.sqrt);
+  const target = x.map((row, i) => row[j] * root[i]);
+  const others = x.map((row, i) => [...(intercept ? [1] : []), ...row.filter((_, k) => k !== j)].map((v) => v * root[i]));
+  const b = new QrDecomposition(new Matrix(others)).solve(Matrix.columnVector(target));
+  const fitted = new Matrix(others).mmul(b).getColumn(0);
+  const rss = target.reduce((s, v, i) => s + (v - fitted[i]) ** 2, 0);
+  const wsum = w.reduce((s, v) => s + v, 0);
+  const mean = x.reduce((s, row, i) => s + w[i] * row[j], 0) / wsum;
+  const tss = intercept ? x.reduce((s, row, i) => s + w[i] * (row[j] - mean) ** 2, 0) : target.reduce((s, v) => s + v * v, 0);
+  return tss / rss;
+}
+
+function referenceCondition(x: number[][], intercept: boolean, w = x.map(() => 1)): { kappa: number; values: number[] } {
+  const design = new Matrix(x.map((row, i) => [...(intercept ? [1] : []), ...row].map((v) => v * Math.sqrt(w[i]))));
+  for (let j = 0; j < design.columns; j++) {
+    const norm = design.getColumnVector(j).norm();
+    for (let i = 0; i < design.rows; i++) design.set(i, j, design.get(i, j) / norm);
+  }
+  const values = [...new SingularValueDecomposition(design, { computeLeftSingularVectors: false, computeRightSingularVectors: false }).diagonal];
+  values.sort((a, b) => b - a);
+  return { kappa: values[0] / values[values.length - 1], values };
+}
+
+function expectRelative(actual: number, expected: number, tol = 1e-9): void {
+  expect(Math.abs(actual - expected)).toBeLessThanOrEqual(tol * Math.abs(expected));
+}
+
+describe('collinearity: VIF and tolerance', () => {
+  it('agrees with the auxiliary regressions run by ml-matrix, with an intercept', () => {
+    const x = correlatedPredictors(1, 40);
+    const result = collinearity(x, ['a', 'b', 'c', 'd']);
+    expect(result.terms.map((t) => t.name)).toEqual(['a', 'b', 'c', 'd']);
+    result.terms.forEach((t, j) => {
+      expectRelative(t.vif, referenceVif(x, j, true));
+      expectRelative(t.tolerance, 1 / referenceVif(x, j, true));
+      expect(t.undefinedBecause).toBeUndefined();
+    });
+    // The built-in correlation must show, or the comparison above would be a weak one.
+    expect(Math.max(...result.terms.map((t) => t.vif))).toBeGreaterThan(2);
+  });
+
+  it('weighted: the auxiliary regressions are weighted and centered on the weighted mean', () => {
+    const x = correlatedPredictors(2, 30);
+    const w = positiveWeights(3, 30);
+    const result = collinearity(x, undefined, w);
+    result.terms.forEach((t, j) => expectRelative(t.vif, referenceVif(x, j, true, w)));
+    const unweighted = collinearity(x);
+    expect(Math.abs(result.terms[1].vif - unweighted.terms[1].vif)).toBeGreaterThan(1e-3);
+  });
+
+  it('without an intercept the auxiliary regressions have none either, and R² is uncentered', () => {
+    const x = correlatedPredictors(4, 25);
+    const result = collinearity(x, undefined, undefined, { intercept: false });
+    result.terms.forEach((t, j) => expectRelative(t.vif, referenceVif(x, j, false)));
+  });
+
+  it('two predictors with correlation r: both VIFs are 1/(1 − r²)', () => {
+    const x = correlatedPredictors(5, 50).map((row) => [row[0], row[1]]);
+    const mean = (j: number) => x.reduce((s, r) => s + r[j], 0) / x.length;
+    const [m0, m1] = [mean(0), mean(1)];
+    const sxy = x.reduce((s, r) => s + (r[0] - m0) * (r[1] - m1), 0);
+    const sxx = x.reduce((s, r) => s + (r[0] - m0) ** 2, 0);
+    const syy = x.reduce((s, r) => s + (r[1] - m1) ** 2, 0);
+    const r2 = (sxy * sxy) / (sxx * syy);
+    for (const t of collinearity(x).terms) expectRelative(t.vif, 1 / (1 - r2));
+  });
+
+  it('a single predictor has VIF exactly 1, with or without an intercept', () => {
+    const x = correlatedPredictors(6, 10).map((row) => [row[0]]);
+    for (const intercept of [true, false]) {
+      const [term] = collinearity(x, undefined, undefined, { intercept }).terms;
+      expect(term).toEqual({ name: 'x1', vif: 1, tolerance: 1, undefinedBecause: undefined });
+    }
+  });
+
+  it('an exact combination: every column in it has VIF ∞ and tolerance 0, the others are still exact', () => {
+    const base = correlatedPredictors(7, 30);
+    const x = base.map((r) => [r[0], r[2], r[0] - 2 * r[2], r[3]]);
+    const result = collinearity(x);
+    expect(result.terms.slice(0, 3).map((t) => [t.vif, t.tolerance, t.undefinedBecause])).toEqual([
+      [Infinity, 0, 'collinear'],
+      [Infinity, 0, 'collinear'],
+      [Infinity, 0, 'collinear'],
+    ]);
+    // x4 regressed on x1, x2 (x3 adds nothing to their span).
+    expectRelative(result.terms[3].vif, referenceVif(base.map((r) => [r[0], r[2], r[3]]), 2, true));
+    expect(result.conditionNumber).toBe(Infinity);
+  });
+
+  it('a constant column is collinear with the intercept; without an intercept only an all-zero column is', () => {
+    const base = correlatedPredictors(8, 20);
+    const x = base.map((r) => [r[0], 5, r[2]]);
+    const withIntercept = collinearity(x);
+    expect(withIntercept.terms[1]).toMatchObject({ vif: Infinity, tolerance: 0, undefinedBecause: 'constant' });
+    // The constant adds nothing beyond the intercept, so x1's VIF is that of x1 on x3 alone.
+    expectRelative(withIntercept.terms[0].vif, referenceVif(base.map((r) => [r[0], r[2]]), 0, true));
+    const noIntercept = collinearity(x, undefined, undefined, { intercept: false });
+    expect(noIntercept.terms[1].undefinedBecause).toBeUndefined();
+    expectRelative(noIntercept.terms[1].vif, referenceVif(x, 1, false));
+    const zero = collinearity(base.map((r) => [r[0], 0]), undefined, undefined, { intercept: false });
+    expect(zero.terms[1]).toMatchObject({ vif: Infinity, undefinedBecause: 'constant' });
+  });
+
+  it('a full set of category indicators without an intercept is not reported as collinear', () => {
+    // Indicators for levels A, B, C sum to the column of ones the model leaves out.
+    const levels = [0, 1, 2, 0, 1, 2, 0, 0, 1, 2, 1, 2];
+    const normal = gaussian(mulberry32(9));
+    const x = levels.map((l) => [l === 0 ? 1 : 0, l === 1 ? 1 : 0, l === 2 ? 1 : 0, normal()]);
+    const result = collinearity(x, undefined, undefined, { intercept: false });
+    result.terms.forEach((t, j) => expectRelative(t.vif, referenceVif(x, j, false)));
+    expect(result.conditionNumber).toBeLessThan(Infinity);
+  });
+
+  it('does not change when a column is multiplied by 1e200', () => {
+    const x = correlatedPredictors(10, 30);
+    const scaled = x.map((r) => [r[0] * 1e200, r[1], r[2], r[3]]);
+    const a = collinearity(x);
+    const b = collinearity(scaled);
+    a.terms.forEach((t, j) => expectRelative(b.terms[j].vif, t.vif, 1e-12));
+    expectRelative(b.conditionNumber, a.conditionNumber, 1e-12);
+  });
+});
+
+describe('collinearity: condition number', () => {
+  it('matches ml-matrix singular values of the unit-scaled design with the intercept column', () => {
+    const x = correlatedPredictors(11, 40);
+    const result = collinearity(x);
+    const reference = referenceCondition(x, true);
+    expectRelative(result.conditionNumber, reference.kappa);
+    result.singularValues.forEach((s, k) => expectRelative(s, reference.values[k]));
+  });
+
+  it('weighted and without an intercept, likewise', () => {
+    const x = correlatedPredictors(12, 30);
+    const w = positiveWeights(13, 30);
+    expectRelative(collinearity(x, undefined, w).conditionNumber, referenceCondition(x, true, w).kappa);
+    expectRelative(collinearity(x, undefined, undefined, { intercept: false }).conditionNumber, referenceCondition(x, false).kappa);
+  });
+
+  it('is 1 for orthogonal columns of equal norm (a 2² factorial with intercept), whose VIFs are 1', () => {
+    const x = [
+      [1, 1],
+      [-1, 1],
+      [1, -1],
+      [-1, -1],
+      [1, 1],
+      [-1, 1],
+      [1, -1],
+      [-1, -1],
+    ];
+    const result = collinearity(x);
+    expect(Math.abs(result.conditionNumber - 1)).toBeLessThan(1e-14);
+    for (const t of result.terms) expect(Math.abs(t.vif - 1)).toBeLessThan(1e-14);
+  });
+
+  it('grows with near-collinearity: a nearly repeated column gives a large number that ml-matrix confirms', () => {
+    const base = correlatedPredictors(14, 30);
+    const normal = gaussian(mulberry32(15));
+    const x = base.map((r) => [r[0], r[0] + 1e-4 * normal(), r[2]]);
+    const result = collinearity(x);
+    expect(result.conditionNumber).toBeGreaterThan(1e3);
+    expectRelative(result.conditionNumber, referenceCondition(x, true).kappa, 1e-6);
+  });
+});
+
+describe('singularValues (one-sided Jacobi)', () => {
+  it('2×2 closed form: σ₁σ₂ = |det| and σ₁² + σ₂² = ‖A‖²_F', () => {
+    const a = Float64Array.from([3, 7, 0, 0.002]);
+    const [s1, s2] = singularValues(a, 2, 2);
+    expectRelative(s1 * s2, 3 * 0.002, 1e-14);
+    expectRelative(s1 * s1 + s2 * s2, 9 + 49 + 0.002 ** 2, 1e-14);
+    expect(s1).toBeGreaterThan(s2);
+  });
+
+  it('matches ml-matrix on random square matrices up to 8×8', () => {
+    const normal = gaussian(mulberry32(16));
+    for (const q of [1, 3, 5, 8]) {
+      const rows = Array.from({ length: q }, () => Array.from({ length: q }, () => normal()));
+      const ours = singularValues(Float64Array.from(rows.flat()), q, q);
+      const theirs = [...new SingularValueDecomposition(new Matrix(rows)).diagonal].sort((x, y) => y - x);
+      // ml-matrix is accurate to ~ε·σ_max, so compare relative to the largest value.
+      ours.forEach((s, k) => expect(Math.abs(s - theirs[k])).toBeLessThanOrEqual(1e-12 * theirs[0]));
+    }
+  });
+
+  it('keeps a tiny singular value of a graded triangular matrix to high relative accuracy', () => {
+    // diag(1, 1e-8) times a rotation has singular values exactly 1 and 1e-8.
+    const c = Math.cos(0.3);
+    const s = Math.sin(0.3);
+    const a = Float64Array.from([c, -s, 1e-8 * s, 1e-8 * c]);
+    const [big, small] = singularValues(a, 2, 2);
+    expectRelative(big, 1, 1e-14);
+    expectRelative(small, 1e-8, 1e-12);
+  });
+});

@@ -1,0 +1,168 @@
+/**
+ * PLUMB.COLLINEARITY and PLUMB.CHECKS through the any[][] interface Excel uses. The numbers are
+ * checked against independent oracles in test/engine/infer/collinearity.test.ts and
+ * assumptionChecks.test.ts; here the concern is what a user reads: labels, term names, row numbers
+ * that lead back to the data, blanks that come with their reason, and no NaN or ±∞ in any cell.
+ */
+import { describe, expect, it } from 'vitest';
+import { assumptionChecks, collinearity as engineCollinearity } from '../../src/engine';
+import { checks, collinearity } from '../../src/functions/functions';
+import { column, columns, thrownBy } from '../support/cells';
+import { randomProblem } from '../support/random';
+
+const CHECK_LABELS = [
+  'Durbin–Watson',
+  'DW expected d',
+  'DW p-value (ρ > 0)',
+  'DW reading',
+  'Breusch–Pagan LM',
+  'BP df',
+  'BP p-value',
+  'BP reading',
+  'Jarque–Bera',
+  'JB p-value',
+  'JB reading',
+  "Largest Cook's distance",
+  'at row',
+  'High-leverage rows',
+  'Largest VIF',
+  'for term',
+  'Overall reading',
+];
+
+function expectOnlyFiniteNumbersOrText(grid: unknown[][], width: number): void {
+  for (const row of grid) {
+    expect(row).toHaveLength(width);
+    for (const cell of row) expect(typeof cell === 'string' || (typeof cell === 'number' && Number.isFinite(cell))).toBe(true);
+  }
+}
+
+function valueOf(grid: unknown[][], label: string): unknown {
+  const row = grid.find((r) => r[0] === label);
+  if (row === undefined) throw new Error(`no row labelled ${label}`);
+  return row[1];
+}
+
+describe('PLUMB.COLLINEARITY', () => {
+  it('one row per term, categorical indicators included, then the condition number with its reading', () => {
+    const x = [
+      ['Dose', 'Batch', 'Temp'],
+      [1, 'A', 20.1],
+      [2, 'B', 22.4],
+      [1.5, 'C', 19.8],
+      [3, 'A', 25.0],
+      [2.5, 'B', 23.1],
+      [3.5, 'C', 27.2],
+      [1.2, 'A', 18.9],
+      [2.2, 'B', 21.7],
+    ];
+    const grid = collinearity(x);
+    expect(grid[0]).toEqual(['Term', 'VIF', 'Tolerance']);
+    expect(grid.slice(1, -1).map((r) => r[0])).toEqual(['Dose', 'Batch: B', 'Batch: C', 'Temp']);
+    grid.slice(1, -1).forEach((r) => expect((r[1] as number) * (r[2] as number)).toBeCloseTo(1, 12));
+    const last = grid[grid.length - 1];
+    expect(last[0]).toBe('Condition number');
+    expect(last[1]).toBeGreaterThan(1);
+    expect(typeof last[2]).toBe('string');
+    expectOnlyFiniteNumbersOrText(grid, 3);
+  });
+
+  it('matches the engine on the frame’s numbers, header or not, and honours intercept and weights', () => {
+    const { x } = randomProblem(71, 15, 3);
+    const w = x.map((_, i) => 1 + (i % 3));
+    const engine = engineCollinearity(x, undefined, w, { intercept: false });
+    const grid = collinearity(x, null, false, null, column(undefined, w));
+    expect(grid.slice(1, -1).map((r) => r[1])).toEqual(engine.terms.map((t) => t.vif));
+    expect(grid[grid.length - 1][1]).toBe(engine.conditionNumber);
+    const withHeader = collinearity(columns(['a', 'b', 'c'], x), null, false, null, column('w', w));
+    expect(withHeader.slice(1, -1).map((r) => r[0])).toEqual(['a', 'b', 'c']);
+    expect(withHeader.slice(1, -1).map((r) => r[1])).toEqual(engine.terms.map((t) => t.vif));
+  });
+
+  it('a perfectly collinear set: VIFs blank with the reason, condition number blank with "infinite"', () => {
+    const { x } = randomProblem(72, 12, 2);
+    const grid = collinearity(columns(['a', 'b', 'a+b'], x.map((r) => [r[0], r[1], r[0] + r[1]])));
+    for (const row of grid.slice(1, -1)) {
+      expect(row[1]).toBe('');
+      expect(row[2]).toBe('perfectly collinear: an exact combination of the other terms');
+    }
+    expect(grid[grid.length - 1]).toEqual(['Condition number', '', 'infinite: some terms are exact combinations of others']);
+    expectOnlyFiniteNumbersOrText(grid, 3);
+  });
+
+  it('a single predictor has VIF 1; a blank row is skipped as everywhere else', () => {
+    const grid = collinearity([['Dose'], [1], [2], [null], [4]]);
+    expect(grid[1]).toEqual(['Dose', 1, 1]);
+  });
+
+  it('fails like every PLUMB function: #VALUE! with the message', () => {
+    const empty = thrownBy(() => collinearity([]));
+    expect(empty.code).toBe('#VALUE!');
+    expect(empty.message).toMatch(/known_x is empty/);
+    const mismatch = thrownBy(() => collinearity([[1], [2], [3]], null, null, null, [[1], [2]]));
+    expect(mismatch.message).toBe('known_x has 3 rows but weights has 2; select the same rows for both.');
+  });
+});
+
+describe('PLUMB.CHECKS', () => {
+  it('label and value rows, the numbers those of the engine', () => {
+    const { y, x } = randomProblem(81, 30, 2);
+    const grid = checks(column(undefined, y), x);
+    expect(grid.map((r) => r[0])).toEqual(CHECK_LABELS);
+    const engine = assumptionChecks({ y, x });
+    expect(valueOf(grid, 'Durbin–Watson')).toBe(engine.durbinWatson.statistic);
+    expect(valueOf(grid, 'DW p-value (ρ > 0)')).toBe(engine.durbinWatson.pPositive);
+    expect(valueOf(grid, 'Breusch–Pagan LM')).toBe(engine.breuschPagan.statistic);
+    expect(valueOf(grid, 'BP df')).toBe(2);
+    expect(valueOf(grid, 'Jarque–Bera')).toBe(engine.jarqueBera.statistic);
+    expect(valueOf(grid, 'JB reading')).toBe(engine.jarqueBera.reading);
+    expect(valueOf(grid, 'Largest VIF')).toBe(engine.largestVif);
+    expect(valueOf(grid, 'Overall reading')).toBe(engine.overall);
+    expectOnlyFiniteNumbersOrText(grid, 2);
+  });
+
+  it("'at row' is the row's place in the input range: the header is row 1 and skipped rows count", () => {
+    const { y, x } = randomProblem(82, 20, 1);
+    const planted = [...y];
+    planted[9] += 12;
+    const yCells = column('Yield', planted.map((v, i) => (i === 2 ? null : v)));
+    const grid = checks(yCells, columns(['Dose'], x));
+    // Data index 9 is the 9th row used (index 2 is skipped) and sits in range row 11 under the header.
+    expect(valueOf(grid, 'at row')).toBe(11);
+    expect(valueOf(grid, 'for term')).toBe('Dose');
+  });
+
+  it('an exact fit: statistics blank, and every blank has a reading beside it', () => {
+    const x = [[1], [2], [3], [4], [6]];
+    const grid = checks(column(undefined, x.map(([v]) => 2 + 0.5 * v)), x);
+    for (const label of ['Durbin–Watson', 'Breusch–Pagan LM', 'Jarque–Bera', 'JB p-value', "Largest Cook's distance"]) {
+      expect(valueOf(grid, label)).toBe('');
+    }
+    expect(valueOf(grid, 'DW reading')).toMatch(/^exact fit/);
+    expect(valueOf(grid, 'at row')).toBe('none: exact fit, every residual is 0');
+    expect(valueOf(grid, 'Overall reading')).toMatch(/^exact fit/);
+    expectOnlyFiniteNumbersOrText(grid, 2);
+  });
+
+  it('a collinear term: Largest VIF blank, the term and the reason beside it', () => {
+    const { y, x } = randomProblem(83, 15, 2);
+    const grid = checks(column('y', y), columns(['a', 'b', 'c'], x.map((r) => [r[0], r[1], 2 * r[0]])));
+    expect(valueOf(grid, 'Largest VIF')).toBe('');
+    expect(valueOf(grid, 'for term')).toBe('a (perfectly collinear: an exact combination of the other terms)');
+    expectOnlyFiniteNumbersOrText(grid, 2);
+  });
+
+  it('level moves the line between a concern and none', () => {
+    const { y, x } = randomProblem(84, 30, 1);
+    const strict = checks(column(undefined, y), x, 0.5);
+    const lenient = checks(column(undefined, y), x, 0.999999);
+    expect(valueOf(lenient, 'Overall reading')).toBe('nothing stands out at the 99.9999% level');
+    expect(valueOf(strict, 'Overall reading')).toMatch(/^worth a look: /);
+  });
+
+  it('fails like every PLUMB function: #VALUE! with the message', () => {
+    const error = thrownBy(() => checks([[1], [2]], [[1], [2]]));
+    expect(error.code).toBe('#VALUE!');
+    expect(error.message).toMatch(/more rows than parameters/);
+  });
+});
