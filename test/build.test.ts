@@ -10,7 +10,7 @@ import { ORIGIN, ROOT, loadManifest, urlsIn } from "./support/manifest";
 
 // Every PLUMB cell function spills a grid, so each result is a matrix in functions.json.
 const EXPECTED_FUNCTIONS: ReadonlyArray<{ id: string; dimensionality: string }> = [
-  "TERMS", "ESTIMATES", "STDERRORS", "INTERVALS", "COVARIANCE", "FITSTATS", "NESTEDF", "PREDICT", "RESIDUALS",
+  "TERMS", "ESTIMATES", "STDERRORS", "INTERVALS", "COVARIANCE", "FITSTATS", "NESTEDF", "PREDICT", "RESIDUALS", "QQPOINTS",
   "COLLINEARITY", "CHECKS", "COMPARE",
 ].map((id) => ({ id, dimensionality: "matrix" }));
 

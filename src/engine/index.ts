@@ -38,3 +38,4 @@ export { COLLINEARITY_REASON_TEXT, conditionReading } from './infer/checkReading
 export type { DurbinWatson, DurbinWatsonReason } from './infer/durbinWatson';
 export type { BreuschPagan, BreuschPaganReason } from './infer/breuschPagan';
 export type { JarqueBera } from './infer/jarqueBera';
+export { normalScores, type NormalScorePoint } from './infer/normalScores';

@@ -325,3 +325,25 @@ export function checks(known_y: any[][], known_x: any[][], level?: any, intercep
     return checksGrid(assumptionChecks(r.frame.data, r.settings), r.frame);
   });
 }
+
+import { normalScores } from '../engine';
+import { qqGrid } from './grids/qqGrid';
+
+/**
+ * Points for a normal Q–Q plot: the studentized residuals, sorted, against standard normal quantiles (Blom positions).
+ * @customfunction QQPOINTS
+ * @param known_y Responses: one column, with an optional text header.
+ * @param known_x Predictors: one or more columns with the same rows. Text columns are categorical.
+ * @param [level] Accepted as in every PLUMB function; it does not change these points.
+ * @param [intercept] TRUE (default) fits an intercept; FALSE forces the model through zero.
+ * @param [known_sigma] The noise standard deviation if known. Default: estimated.
+ * @param [weights] Optional column of positive case weights, same rows as known_y.
+ * @param [robust] Accepted as in every PLUMB function; it does not change these points.
+ * @returns Three columns: normal quantile, studentized residual, and the row in the input range; roughly a straight line when the residuals are normal.
+ */
+export function qqPoints(known_y: any[][], known_x: any[][], level?: any, intercept?: any, known_sigma?: any, weights?: any[][], robust?: any): any[][] {
+  return guarded(() => {
+    const r = request(known_y, known_x, level, intercept, known_sigma, weights, robust);
+    return qqGrid(normalScores(residualDiagnostics(r.frame.data, r.settings)), r.frame);
+  });
+}

@@ -139,6 +139,15 @@ export function App() {
           <input id="known-sigma" type="text" inputMode="decimal" value={choices.knownSigma} onChange={(e) => update({ knownSigma: (e.currentTarget as HTMLInputElement).value })} />
           {problemFor('knownSigma') && <p class="problem" role="alert">{problemFor('knownSigma')}</p>}
         </div>
+        <div class="field">
+          <label for="robust">Standard errors</label>
+          <select id="robust" value={choices.robust} onChange={(e) => update({ robust: (e.currentTarget as HTMLSelectElement).value as PaneChoices['robust'] })}>
+            <option value="classical">Classical (constant spread)</option>
+            <option value="HC3">Robust HC3 (recommended when spread varies)</option>
+            <option value="HC1">Robust HC1</option>
+            <option value="HC0">Robust HC0</option>
+          </select>
+        </div>
         <RangeField id="weights" label="Weights (optional)" hint="A column of positive weights with the response's rows." value={choices.weights} problem={problemFor('weights')} onChange={(weights) => update({ weights })} onUseSelection={useSelection('weights')} />
       </section>
 
@@ -171,7 +180,11 @@ export function App() {
 
       <section aria-labelledby="results-heading" aria-live="polite">
         <h2 id="results-heading">Results</h2>
-        {typeof analysis === 'object' ? <ResultCards analysis={analysis} level={choices.level} /> : <p class="hint">Results appear here once the data are read.</p>}
+        {typeof analysis === 'object' ? (
+          <ResultCards analysis={analysis} level={choices.level} onUseRobust={choices.robust === 'classical' ? () => update({ robust: 'HC3' }) : undefined} />
+        ) : (
+          <p class="hint">Results appear here once the data are read.</p>
+        )}
       </section>
 
       <section aria-labelledby="report-heading">

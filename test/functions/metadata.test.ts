@@ -30,6 +30,7 @@ const DATA_ARGUMENTS: Record<string, string[]> = {
   NESTEDF: ['known_y', 'base_x', 'added_x'],
   PREDICT: ['known_y', 'known_x', 'new_x'],
   RESIDUALS: ['known_y', 'known_x'],
+  QQPOINTS: ['known_y', 'known_x'],
   COLLINEARITY: ['known_x'],
   CHECKS: ['known_y', 'known_x'],
   COMPARE: ['known_y', 'known_x', 'candidates'],
@@ -45,7 +46,7 @@ beforeAll(async () => {
 });
 
 describe('generated function metadata', () => {
-  it('lists exactly the twelve PLUMB functions', () => {
+  it('lists exactly the thirteen PLUMB functions', () => {
     expect(functions.map((f) => f.id).sort()).toEqual(Object.keys(DATA_ARGUMENTS).sort());
   });
 

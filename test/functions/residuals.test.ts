@@ -109,3 +109,19 @@ describe('PLUMB.RESIDUALS', () => {
     expect(error.message).toMatch(/more rows than parameters/);
   });
 });
+
+describe('PLUMB.QQPOINTS', () => {
+  it('lists the finite studentized residuals sorted, with Blom normal quantiles and their rows', async () => {
+    const { qqPoints, residuals } = await import('../../src/functions/functions');
+    const y = [['y'], [1.2], [2.1], [2.8], [4.4], [4.9], [6.3], [6.8]];
+    const x = [['t'], [1], [2], [3], [4], [5], [6], [7]];
+    const points = qqPoints(y, x);
+    expect(points[0]).toEqual(['Normal quantile', 'Studentized residual', 'Row']);
+    const table = residuals(y, x);
+    const studentized = table.slice(1).map((r) => r[4] as number).sort((a, b) => a - b);
+    expect(points.slice(1).map((r) => r[1])).toEqual(studentized);
+    // Blom position for the middle of 7 points is exactly 1/2, whose normal quantile is 0.
+    expect(points[4][0]).toBe(0);
+    expect(points.slice(1).map((r) => r[2]).sort()).toEqual([2, 3, 4, 5, 6, 7, 8]);
+  });
+});

@@ -37,7 +37,7 @@ export function trueYield(steep: number, grind: number, temp: number, origin: (t
   return 19 + 0.42 * (steep - 18) - 0.004 * (grind - 900) + 0.08 * (temp - 12) + 0.003 * (age - 20) + ORIGIN_EFFECT[origin];
 }
 
-export function generateBatchLog(seed = 20261202, rows = 60): BatchRow[] {
+export function generateBatchLog(seed = 20261204, rows = 60): BatchRow[] {
   const uniform = mulberry32(seed);
   const normal = (): number => Math.sqrt(-2 * Math.log(Math.max(uniform(), 1e-12))) * Math.cos(2 * Math.PI * uniform());
   return Array.from({ length: rows }, (_, i): BatchRow => {

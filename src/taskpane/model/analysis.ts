@@ -1,4 +1,6 @@
 import {
+  type AssumptionChecks,
+  assumptionChecks,
   buildModelFrame,
   type CellGrid,
   compareNested,
@@ -29,11 +31,17 @@ export interface PaneAnalysis {
   addedNames: string[];
   settings: FitSettings;
   warnings: string[];
+  checks: AssumptionChecks | undefined;
 }
 
 export function settingsOf(choices: PaneChoices): FitSettings {
   const sigma = Number(choices.knownSigma);
-  return { level: choices.level, intercept: choices.intercept, knownSigma: choices.knownSigma.trim() !== '' && sigma > 0 ? sigma : undefined };
+  return {
+    level: choices.level,
+    intercept: choices.intercept,
+    knownSigma: choices.knownSigma.trim() !== '' && sigma > 0 ? sigma : undefined,
+    covariance: choices.robust,
+  };
 }
 
 function message(error: unknown): string {
@@ -75,9 +83,19 @@ export function analyze(data: ReadData, choices: PaneChoices): PaneAnalysis {
       nestedError = message(error);
     }
   }
+  let checks: AssumptionChecks | undefined;
+  if (fit !== undefined) {
+    try {
+      checks = assumptionChecks(frame.data, settings);
+    } catch {
+      // The checks need what the fit needed; when they cannot run, the fit's own message stands.
+      checks = undefined;
+    }
+  }
   return {
     frame,
     fit,
+    checks,
     fitError,
     nested,
     nestedError,

@@ -1,4 +1,5 @@
 import { columnsOf, parseRange, type RangeRef, splitAreas } from '../../addressing/a1';
+import type { CovarianceKind } from '../../engine';
 
 /** What the user has chosen in the pane, as addresses: the pane's whole input. */
 export interface PaneChoices {
@@ -13,6 +14,7 @@ export interface PaneChoices {
   intercept: boolean;
   /** Empty when σ is to be estimated. */
   knownSigma: string;
+  robust: CovarianceKind;
 }
 
 export const EMPTY_CHOICES: PaneChoices = {
@@ -24,6 +26,7 @@ export const EMPTY_CHOICES: PaneChoices = {
   level: 0.95,
   intercept: true,
   knownSigma: '',
+  robust: 'classical',
 };
 
 /** A field's problem, shown beside it. */

@@ -36,10 +36,10 @@ export interface ReportPlan {
 export const REPORT_TITLE_PREFIX = 'Plumbline report';
 /** p-values: four decimals, and "<0.0001" rather than a row of zeros. */
 export const P_VALUE_FORMAT = '[<0.0001]"<0.0001";0.0000';
-export const SETTINGS_CELLS = { level: '$B$5', intercept: '$B$6', knownSigma: '$B$7' } as const;
+export const SETTINGS_CELLS = { level: '$B$5', intercept: '$B$6', knownSigma: '$B$7', robust: '$B$8' } as const;
 
 const CHART_DATA_COLUMN = 19; // T: observed, then U..Y: fitted rows from PREDICT
-const RESIDUALS_COLUMN = 26; // AA..AI
+const QQ_COLUMN = 26; // AA..AC: the normal Q–Q points
 const GATHER_COLUMN = 36; // AK..: predictor columns gathered when they are not one block
 
 interface Layout {
@@ -114,8 +114,9 @@ export function planReport({ sheetName, ranges, choices, analysis, writtenAt }: 
 
   const { frame, fit } = analysis;
   const l = layout(sheetName, ranges, choices.added);
-  const weights = ranges.weights === undefined ? '' : `, ${formatAbsolute(ranges.weights)}`;
-  const settings = `${SETTINGS_CELLS.level}, ${SETTINGS_CELLS.intercept}, ${SETTINGS_CELLS.knownSigma}${weights}`;
+  // Weights sit between σ and the robust option; without them the argument is left empty.
+  const weights = ranges.weights === undefined ? '' : formatAbsolute(ranges.weights);
+  const settings = `${SETTINGS_CELLS.level}, ${SETTINGS_CELLS.intercept}, ${SETTINGS_CELLS.knownSigma}, ${weights}, ${SETTINGS_CELLS.robust}`;
   const predictorText = sameBlock(ranges.predictorColumns)
     ? formatAbsolute({ ...ranges.predictorColumns[0], right: ranges.predictorColumns[ranges.predictorColumns.length - 1].right })
     : ranges.predictorColumns.map(formatAbsolute).join(', ');
@@ -131,16 +132,18 @@ export function planReport({ sheetName, ranges, choices, analysis, writtenAt }: 
   cells.push({ row: 5, column: 1, kind: 'value', value: choices.intercept });
   label(6, 0, 'Known sigma (empty: estimated)');
   cells.push({ row: 6, column: 1, kind: 'value', value: analysis.settings.knownSigma ?? '' });
-  label(7, 0, 'Weights');
-  label(7, 1, ranges.weights === undefined ? 'none' : formatAbsolute(ranges.weights));
+  label(7, 0, 'Standard errors (classical, HC3, HC1 or HC0)');
+  label(7, 1, choices.robust);
+  label(8, 0, 'Weights');
+  label(8, 1, ranges.weights === undefined ? 'none' : formatAbsolute(ranges.weights));
 
-  label(9, 0, 'The model', true);
+  label(10, 0, 'The model', true);
   const terms = frame.termNames.filter((t) => t !== 'Intercept');
   const equation = [choices.intercept ? 'b0' : undefined, ...terms.map((t, j) => `b${j + 1}·[${t}]`)].filter((s) => s !== undefined).join(' + ');
-  label(10, 0, `[${frame.responseName}] = ${equation} + error`);
-  label(11, 0, 'The b values are the Estimates in the next table, in the same order.');
+  label(11, 0, `[${frame.responseName}] = ${equation} + error`);
+  label(12, 0, 'The b values are the Estimates in the next table, in the same order.');
 
-  let row = 13;
+  let row = 14;
   const termRows = frame.termNames.length;
   label(row, 0, 'Which terms matter?', true);
   label(row, 1, 'A term is clear of zero when its interval excludes 0; roughly, when |estimate| > 2 × std error.');
@@ -177,37 +180,57 @@ export function planReport({ sheetName, ranges, choices, analysis, writtenAt }: 
     row += newRows.bottom - newRows.top + 5;
   }
 
+  const dataRows = ranges.response.bottom - ranges.response.top + 1;
+  const first = frame.hasHeader ? 1 : 0;
+  const usedRows = dataRows - first;
+
+  label(row, 0, 'Can these numbers be trusted?', true);
+  label(row, 1, 'Each check is read at 1 − level. The charts on the right show the same residuals.');
+  cells.push({ row: row + 1, column: 0, kind: 'formula', formula: `=PLUMB.CHECKS(${l.y}, ${l.x}, ${settings})` });
+  row += 22;
+
   label(row, 0, 'Cautions', true);
   [
     'These are associations in the data, not proof of cause: a clear-of-zero term does not show that changing it will change the response.',
     'Predictions outside the range of the data are extrapolations and can be badly wrong, however narrow the intervals look.',
-    'Standard errors, intervals and p-values assume independent errors with constant variance, roughly normal, and no single row steering the fit: check the residual chart before relying on them.',
+    'Standard errors, intervals and p-values assume independent errors with constant variance, roughly normal, and no single row steering the fit: read the checks and the charts before relying on them.',
   ].forEach((text, i) => label(row + 1 + i, 0, text));
+  row += 5;
 
-  const dataRows = ranges.response.bottom - ranges.response.top + 1;
-  const first = frame.hasHeader ? 1 : 0;
+  label(row, 0, 'Every row used, with its residual and flags (high leverage: h > 2p/n; outlier: |studentized| > 3; influential: Cook > 4/n)', true);
+  const residualsTop = row + 1;
+  cells.push({ row: residualsTop, column: 0, kind: 'formula', formula: `=PLUMB.RESIDUALS(${l.y}, ${l.x}, ${settings})` });
+  const residualColumn = (offset: number) => block(residualsTop + 1, offset, usedRows, 1);
+
   const chartTop = 3;
   label(chartTop - 1, CHART_DATA_COLUMN, 'Chart data (live): observed and fitted for every data row');
   cells.push({ row: chartTop, column: CHART_DATA_COLUMN, kind: 'formula', formula: `=${l.y}` });
   cells.push({ row: chartTop, column: CHART_DATA_COLUMN + 1, kind: 'formula', formula: `=PLUMB.PREDICT(${l.y}, ${l.x}, ${l.x}, ${settings})` });
-  const observed = block(chartTop + first, CHART_DATA_COLUMN, dataRows - first, 1);
-  const fitted = block(chartTop + first, CHART_DATA_COLUMN + 1, dataRows - first, 1);
-  const response = splitUnit(frame.responseName).name;
-  charts.push({ name: 'ObservedVsFitted', title: `Observed vs fitted ${response.toLowerCase()}`, x: fitted, y: observed, xTitle: 'Fitted', yTitle: 'Observed', topLeft: cellAddress(3, 10), bottomRight: cellAddress(20, 17) });
+  label(chartTop - 1, QQ_COLUMN, 'Normal Q–Q points (live)');
+  cells.push({ row: chartTop, column: QQ_COLUMN, kind: 'formula', formula: `=PLUMB.QQPOINTS(${l.y}, ${l.x}, ${settings})` });
 
-  label(chartTop - 1, RESIDUALS_COLUMN, 'Residuals of the rows used (live)');
-  cells.push({ row: chartTop, column: RESIDUALS_COLUMN, kind: 'formula', formula: `=PLUMB.RESIDUALS(${l.y}, ${l.x}, ${settings})` });
-  const residualRows = dataRows - first;
+  const response = splitUnit(frame.responseName).name.toLowerCase();
+  const place = (index: number) => ({ topLeft: cellAddress(3 + index * 19, 10), bottomRight: cellAddress(20 + index * 19, 17) });
   charts.push({
-    name: 'ResidualsVsFitted',
-    title: 'Residuals vs fitted: look for curves, funnels and lone points',
-    x: block(chartTop + 1, RESIDUALS_COLUMN + 1, residualRows, 1),
-    y: block(chartTop + 1, RESIDUALS_COLUMN + 2, residualRows, 1),
+    name: 'ObservedVsFitted',
+    title: `Observed vs fitted ${response}`,
+    x: block(chartTop + first, CHART_DATA_COLUMN + 1, usedRows, 1),
+    y: block(chartTop + first, CHART_DATA_COLUMN, usedRows, 1),
     xTitle: 'Fitted',
-    yTitle: 'Residual',
-    topLeft: cellAddress(22, 10),
-    bottomRight: cellAddress(39, 17),
+    yTitle: 'Observed',
+    ...place(0),
   });
+  charts.push({ name: 'ResidualsVsFitted', title: 'Residuals vs fitted: look for curves, funnels and lone points', x: residualColumn(1), y: residualColumn(2), xTitle: 'Fitted', yTitle: 'Residual', ...place(1) });
+  charts.push({
+    name: 'NormalQQ',
+    title: 'Normal Q–Q of studentized residuals: a straight line means roughly normal',
+    x: block(chartTop + 1, QQ_COLUMN, usedRows, 1),
+    y: block(chartTop + 1, QQ_COLUMN + 1, usedRows, 1),
+    xTitle: 'Normal quantile',
+    yTitle: 'Studentized residual',
+    ...place(2),
+  });
+  charts.push({ name: 'CooksDistance', title: "Cook's distance by row: tall points steer the fit", x: residualColumn(0), y: residualColumn(6), xTitle: 'Row', yTitle: "Cook's distance", ...place(3) });
 
   for (const g of l.gathered) {
     cells.push({ row: 0, column: g.column, kind: 'formula', formula: `=${formatAbsolute(g.source)}` });

@@ -1,8 +1,16 @@
 import type { PaneAnalysis } from '../model/analysis';
+import { checkWarnings } from '../model/checkWarnings';
 import { fitSentence, nestedSentence, termSentence } from '../model/sentences';
 
-/** The results in words, one card per term, with the fit and the nested verdict. */
-export function ResultCards({ analysis, level }: { analysis: PaneAnalysis; level: number }) {
+interface ResultCardsProps {
+  analysis: PaneAnalysis;
+  level: number;
+  /** Present when robust standard errors are not in use yet: switches them on. */
+  onUseRobust: (() => void) | undefined;
+}
+
+/** The results in words: checks that failed first, then the fit, the nested verdict and one card per term. */
+export function ResultCards({ analysis, level, onUseRobust }: ResultCardsProps) {
   const { fit, frame } = analysis;
   if (fit === undefined) {
     return (
@@ -11,8 +19,24 @@ export function ResultCards({ analysis, level }: { analysis: PaneAnalysis; level
       </p>
     );
   }
+  const warnings = analysis.checks === undefined ? [] : checkWarnings(analysis.checks, frame.usedRows);
   return (
     <div class="results">
+      {warnings.length > 0 && (
+        <ul class="cards check-warnings" aria-label="Checks that failed">
+          {warnings.map((w) => (
+            <li key={w.text} class="card warning">
+              {w.text}
+              {w.suggestsRobust && onUseRobust && (
+                <button type="button" class="inline-action" onClick={onUseRobust}>
+                  Use robust (HC3) standard errors
+                </button>
+              )}
+            </li>
+          ))}
+        </ul>
+      )}
+      {fit.covarianceKind !== 'classical' && <p class="card">Standard errors and intervals below are robust ({fit.covarianceKind}).</p>}
       <p class="card summary">{fitSentence(fit, frame)}</p>
       {analysis.nested && <p class={`card verdict ${analysis.nested.addedHelp ? 'helps' : 'keep'}`}>{nestedSentence(analysis.nested, analysis.addedNames, level)}</p>}
       {analysis.nestedError && (

@@ -7,6 +7,7 @@
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { buildModelFrame, fitModel } from '../../../src/engine';
 import { BATCH_HEADERS, generateBatchLog } from '../../../src/preview/demo/batchLog';
+import { termSentence } from '../../../src/taskpane/model/sentences';
 import { type BrowserSession, chromiumAvailable, openPage, screenshot } from '../../support/browser';
 
 const available = chromiumAvailable();
@@ -71,9 +72,13 @@ describe.skipIf(!available)('guided pane in the preview workbook', () => {
 
   it('shows one card per term and the nested verdict for bean age', async () => {
     await page().getByLabel('Bean age (days)').check();
-    const cards = page().locator('.cards li');
+    const cards = page().locator('ul[aria-label="Terms"] li');
     await expect.poll(() => cards.count()).toBe(7);
-    expect(await cards.nth(1).innerText()).toMatch(/^Steep time: each extra hour changes extraction yield by \+0\.439 points \(95% CI 0\.418 to 0\.46\)\. Clear of zero\.$/);
+    const grid = [BATCH_HEADERS, ...generateBatchLog()];
+    const frame = buildModelFrame({ y: grid.map((r) => [r[1]]), x: [grid.map((r) => r.slice(2))], intercept: true });
+    const fit = fitModel(frame.data);
+    for (let i = 0; i < fit.terms.length; i++) expect(await cards.nth(i).innerText()).toBe(termSentence(fit.terms[i], frame, 0.95));
+    expect(await cards.nth(1).innerText()).toMatch(/^Steep time: each extra hour changes extraction yield by \+0\.\d+ points \(95% CI /);
     expect(await page().locator('.verdict').innerText()).toContain('Bean age (days) does not earn its place');
     await screenshot(page(), 'pane-results');
   });
@@ -86,14 +91,18 @@ describe.skipIf(!available)('guided pane in the preview workbook', () => {
     expect(await sheetNames()).toContain('Plumbline report');
     firstReport = await sheetSnapshot('Plumbline report');
     const flat = firstReport.formulas.flat().filter((f): f is string => typeof f === 'string' && f.startsWith('=PLUMB.'));
-    expect(flat).toContain('=PLUMB.TERMS(Batches!$B$1:$B$61, Batches!$C$1:$G$61, $B$5, $B$6, $B$7)');
-    expect(flat).toContain('=PLUMB.NESTEDF(Batches!$B$1:$B$61, Batches!$C$1:$F$61, Batches!$G$1:$G$61, $B$5, $B$6, $B$7)');
+    expect(flat).toContain('=PLUMB.TERMS(Batches!$B$1:$B$61, Batches!$C$1:$G$61, $B$5, $B$6, $B$7, , $B$8)');
+    expect(flat).toContain('=PLUMB.NESTEDF(Batches!$B$1:$B$61, Batches!$C$1:$F$61, Batches!$G$1:$G$61, $B$5, $B$6, $B$7, , $B$8)');
+    expect(flat).toContain('=PLUMB.CHECKS(Batches!$B$1:$B$61, Batches!$C$1:$G$61, $B$5, $B$6, $B$7, , $B$8)');
     expect(flat.some((f) => f.startsWith("=PLUMB.PREDICT(Batches!$B$1:$B$61, Batches!$C$1:$G$61, 'Planned batches'!$B$1:$F$6"))).toBe(true);
     const fit = engineFit(generateBatchLog());
     const termsRow = firstReport.values.findIndex((r) => r[0] === 'Term');
     fit.terms.forEach((t, i) => expect(firstReport.values[termsRow + 1 + i][1]).toBe(t.estimate));
     expect(await page().locator('[data-chart="ObservedVsFitted"] circle').count()).toBe(60);
-    expect(await page().locator('[data-chart="ResidualsVsFitted"] circle').count()).toBe(60);
+    for (const chart of ['ResidualsVsFitted', 'NormalQQ', 'CooksDistance']) {
+      expect(await page().locator(`[data-chart="${chart}"] circle`).count(), chart).toBe(60);
+    }
+    expect(firstReport.values.flat()).toContain('Durbin–Watson');
     await screenshot(page(), 'report');
     await page().locator('.grid-scroller').evaluate((el) => {
       el.scrollLeft = 760;
@@ -115,10 +124,14 @@ describe.skipIf(!available)('guided pane in the preview workbook', () => {
     firstReport = after;
   });
 
-  it('writes a second report on a new sheet and leaves the first untouched', async () => {
+  it('writes a second report, with robust standard errors, on a new sheet and leaves the first untouched', async () => {
+    await page().locator('#robust').selectOption('HC3');
+    await expect.poll(() => page().locator('.results').innerText()).toContain('robust (HC3)');
     await page().getByRole('button', { name: 'Write report' }).click();
     await expect.poll(() => page().locator('.done').innerText()).toContain('Plumbline report 2');
     expect(await sheetSnapshot('Plumbline report')).toEqual(firstReport);
+    const second = await sheetSnapshot('Plumbline report 2');
+    expect(second.values.flat()).toContain('Std error (HC3)');
   });
 
   it('freezes the active report into a values-only copy', async () => {

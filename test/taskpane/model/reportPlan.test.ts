@@ -27,11 +27,13 @@ const choices: PaneChoices = { ...EMPTY_CHOICES, response: 'Data!A1:A21', predic
 describe('planReport', () => {
   it('writes every PLUMB formula over absolute data ranges and the settings cells', () => {
     const formulas = plan(choices).cells.flatMap((c) => (c.kind === 'formula' ? [c.formula] : []));
-    const settings = `${SETTINGS_CELLS.level}, ${SETTINGS_CELLS.intercept}, ${SETTINGS_CELLS.knownSigma}`;
+    const settings = `${SETTINGS_CELLS.level}, ${SETTINGS_CELLS.intercept}, ${SETTINGS_CELLS.knownSigma}, , ${SETTINGS_CELLS.robust}`;
     expect(formulas).toContain(`=PLUMB.TERMS(Data!$A$1:$A$21, Data!$B$1:$D$21, ${settings})`);
     expect(formulas).toContain(`=PLUMB.FITSTATS(Data!$A$1:$A$21, Data!$B$1:$D$21, ${settings})`);
     expect(formulas).toContain(`=PLUMB.NESTEDF(Data!$A$1:$A$21, Data!$B$1:$C$21, Data!$D$1:$D$21, ${settings})`);
     expect(formulas).toContain(`=PLUMB.RESIDUALS(Data!$A$1:$A$21, Data!$B$1:$D$21, ${settings})`);
+    expect(formulas).toContain(`=PLUMB.CHECKS(Data!$A$1:$A$21, Data!$B$1:$D$21, ${settings})`);
+    expect(formulas).toContain(`=PLUMB.QQPOINTS(Data!$A$1:$A$21, Data!$B$1:$D$21, ${settings})`);
   });
 
   it('writes headers from the data only as text labels, never as formulas', () => {
@@ -44,12 +46,21 @@ describe('planReport', () => {
   });
 
   it('puts the settings block where the formulas look for it', () => {
-    const values = plan(choices).cells.filter((c) => c.kind === 'value');
-    expect(values).toEqual([
+    const p = plan({ ...choices, robust: 'HC3' });
+    expect(p.cells.filter((c) => c.kind === 'value')).toEqual([
       { row: 4, column: 1, kind: 'value', value: 0.95 },
       { row: 5, column: 1, kind: 'value', value: true },
       { row: 6, column: 1, kind: 'value', value: '' },
     ]);
+    expect(p.cells).toContainEqual({ row: 7, column: 1, kind: 'label', text: 'HC3', bold: false });
+  });
+
+  it('passes the weights column between σ and the robust cell when there is one', () => {
+    const { ranges } = resolveRanges({ ...choices, weights: 'Data!E1:E21' });
+    if (!ranges) throw new Error('bad test ranges');
+    const withWeights = planReport({ sheetName: 'R', ranges, choices, analysis: analyze({ ...data, weights: [['w'], ...y.map(() => [1])] }, choices), writtenAt: new Date() });
+    const terms = withWeights.cells.find((c) => c.kind === 'formula' && c.formula.startsWith('=PLUMB.TERMS'));
+    expect(terms).toMatchObject({ formula: '=PLUMB.TERMS(Data!$A$1:$A$21, Data!$B$1:$D$21, $B$5, $B$6, $B$7, Data!$E$1:$E$21, $B$8)' });
   });
 
   it('gathers the columns, base then added, when the added set is not at the right end', () => {
@@ -60,11 +71,16 @@ describe('planReport', () => {
     expect(nested).toMatchObject({ formula: expect.stringContaining('$AK$1:$AL$21, $AM$1:$AM$21') });
   });
 
-  it('binds the two charts to the report cells that the live formulas fill', () => {
-    const [observed, residuals] = plan(choices).charts;
+  it('binds the four charts to the report cells that the live formulas fill', () => {
+    const p = plan(choices);
+    const [observed, residuals, qq, cooks] = p.charts;
     expect(observed.x).toMatchObject({ sheet: 'Plumbline report', left: 20, right: 20, top: 4, bottom: 23 });
     expect(observed.y).toMatchObject({ left: 19, top: 4, bottom: 23 });
-    expect(residuals.x.left).toBe(27);
-    expect(residuals.y.left).toBe(28);
+    const residualTable = p.cells.find((c) => c.kind === 'formula' && c.formula.startsWith('=PLUMB.RESIDUALS'));
+    expect(residuals.x).toMatchObject({ left: 1, top: (residualTable?.row ?? -1) + 1, bottom: (residualTable?.row ?? -1) + 20 });
+    expect(residuals.y.left).toBe(2);
+    expect(cooks.x.left).toBe(0);
+    expect(cooks.y.left).toBe(6);
+    expect(qq.x).toMatchObject({ left: 26, top: 4, bottom: 23 });
   });
 });
