@@ -3,7 +3,7 @@ import { EngineError } from './errors';
 import { buildDesign } from './fit/design';
 import { type LeastSquaresSolution, solveLeastSquares } from './fit/leastSquares';
 import { covarianceMatrix, standardErrors } from './infer/covariance';
-import { fitSummary } from './infer/fitSummary';
+import { fitSummary, rowTotalsOf, type RowTotals } from './infer/fitSummary';
 import { robustCovariance } from './infer/robustCovariance';
 import { type CoefficientReference, coefficientReference } from './infer/referenceDistribution';
 import { termTable } from './infer/termTable';
@@ -55,10 +55,25 @@ function approximateBytes(model: SolvedModel): number {
 
 function solveUncached(data: ModelData, resolved: ResolvedSettings): SolvedModel {
   const design = buildDesign(data.y, data.x, resolved.intercept, data.names, data.weights);
-  const n = design.matrix.rows;
-  const q = design.matrix.cols;
-  if (q === 0) throw new EngineError('shape', 'The model has no terms: give at least one predictor or keep the intercept.');
+  if (design.matrix.cols === 0) throw new EngineError('shape', 'The model has no terms: give at least one predictor or keep the intercept.');
   const solution = solveLeastSquares(design);
+  return assembleFit(solution, resolved, rowTotalsOf(solution), Array.from(solution.fitted), Array.from(solution.residuals));
+}
+
+/**
+ * Inference from a factorization and the rows' totals: shared by the in-memory fit and the
+ * streamed one, whose factorization stands in for rows it no longer holds.
+ */
+export function assembleFit(
+  solution: LeastSquaresSolution,
+  resolved: ResolvedSettings,
+  totals: RowTotals,
+  fitted: number[],
+  residuals: number[],
+): SolvedModel {
+  const { design } = solution;
+  const n = totals.n;
+  const q = design.matrix.cols;
   const rank = solution.qr.accepted.length;
   const residualDf = n - rank;
   if (residualDf <= 0) {
@@ -77,7 +92,7 @@ function solveUncached(data: ModelData, resolved: ResolvedSettings): SolvedModel
   const robust = resolved.covariance === 'classical' ? undefined : robustCovariance(solution, resolved.covariance);
   const termReference = robust === undefined ? reference : coefficientReference(residualDf, false);
   const errors = robust?.standardErrors ?? standardErrors(solution, inferenceSigma);
-  const summary = fitSummary(solution, resolved.knownSigma);
+  const summary = fitSummary(solution, resolved.knownSigma, totals);
 
   const fit: ModelFit = {
     terms: termTable(design.names, solution.coefficients, errors, termReference, resolved.level, robust?.leverageOne),
@@ -89,8 +104,8 @@ function solveUncached(data: ModelData, resolved: ResolvedSettings): SolvedModel
     ...summary,
     covariance: robust?.covariance ?? covarianceMatrix(solution, inferenceSigma),
     covarianceKind: resolved.covariance,
-    fitted: Array.from(solution.fitted),
-    residuals: Array.from(solution.residuals),
+    fitted,
+    residuals,
     statisticKind: termReference.kind,
     settings: resolved,
     perfectFit: solution.perfectFit,

@@ -39,3 +39,6 @@ export type { DurbinWatson, DurbinWatsonReason } from './infer/durbinWatson';
 export type { BreuschPagan, BreuschPaganReason } from './infer/breuschPagan';
 export type { JarqueBera } from './infer/jarqueBera';
 export { normalScores, type NormalScorePoint } from './infer/normalScores';
+export { RegressionAccumulator, type RowBlock, type AccumulatedRows } from './stream/regressionAccumulator';
+export { fitAccumulated } from './stream/fitAccumulated';
+export { blockResiduals } from './stream/blockResiduals';

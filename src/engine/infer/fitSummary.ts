@@ -1,6 +1,19 @@
 import type { LeastSquaresSolution } from '../fit/leastSquares';
 import { fUpperTail } from './referenceDistribution';
 
+/**
+ * What goodness of fit needs to know about the rows themselves, beyond the factorization: taken
+ * from the design in memory, or accumulated block by block when rows are streamed.
+ */
+export interface RowTotals {
+  n: number;
+  hasIntercept: boolean;
+  /** Σw(y − ȳ_w)² with an intercept, Σwy² without, both divided by yScale². */
+  scaledTss: number;
+  /** Σ log wᵢ (0 without weights). */
+  logWeightSum: number;
+}
+
 export interface FitSummary {
   rss: number;
   rSquared: number;
@@ -20,13 +33,12 @@ export interface FitSummary {
  * The likelihood is Gaussian with var(yᵢ) = σ²/wᵢ; AIC and BIC count σ as a parameter unless
  * it is known.
  */
-export function fitSummary(solution: LeastSquaresSolution, knownSigma: number | undefined): FitSummary {
-  const { design, yScale, scaledRss } = solution;
-  const n = design.matrix.rows;
+export function fitSummary(solution: LeastSquaresSolution, knownSigma: number | undefined, totals: RowTotals): FitSummary {
+  const { yScale, scaledRss } = solution;
+  const { n, scaledTss } = totals;
   const rank = solution.qr.accepted.length;
-  const interceptDf = design.hasIntercept ? 1 : 0;
+  const interceptDf = totals.hasIntercept ? 1 : 0;
   const residualDf = n - rank;
-  const scaledTss = scaledTotalSumOfSquares(solution);
 
   const rSquared = scaledTss > 0 ? 1 - scaledRss / scaledTss : Number.NaN;
   const adjustedRSquared = 1 - ((1 - rSquared) * (n - interceptDf)) / residualDf;
@@ -38,8 +50,7 @@ export function fitSummary(solution: LeastSquaresSolution, knownSigma: number | 
   const fStatistic = modelDf > 0 ? scaledModelSs / modelDf / errorScale : Number.NaN;
   const fPValue = modelDf > 0 ? fUpperTail(fStatistic, modelDf, dfDenominator) : Number.NaN;
 
-  let logWeights = 0;
-  if (design.rootWeights !== undefined) for (const r of design.rootWeights) logWeights += 2 * Math.log(r);
+  const logWeights = totals.logWeightSum;
   const logLikelihood =
     knownSigma === undefined
       ? 0.5 * logWeights - (n / 2) * (Math.log(2 * Math.PI) + 2 * Math.log(yScale) + Math.log(scaledRss / n) + 1)
@@ -57,6 +68,14 @@ export function fitSummary(solution: LeastSquaresSolution, knownSigma: number | 
     aic: -2 * logLikelihood + 2 * k,
     bic: -2 * logLikelihood + Math.log(n) * k,
   };
+}
+
+/** The totals of the rows held in memory by an ordinary fit. */
+export function rowTotalsOf(solution: LeastSquaresSolution): RowTotals {
+  const { design } = solution;
+  let logWeightSum = 0;
+  if (design.rootWeights !== undefined) for (const r of design.rootWeights) logWeightSum += 2 * Math.log(r);
+  return { n: design.matrix.rows, hasIntercept: design.hasIntercept, scaledTss: scaledTotalSumOfSquares(solution), logWeightSum };
 }
 
 /** Σw(y − ȳ_w)² with an intercept, Σwy² without, both divided by yScale². */
