@@ -33,6 +33,9 @@ export interface AccumulatedRows {
  * factor of [1 | X | y] by Householder reflections (TSQR), so memory beyond the current block
  * is O(q²) whatever the number of rows.
  */
+/** Rows folded at a time: small enough that a chunk of [1 | X | y] stays in the processor's cache. */
+const CHUNK_ROWS = 256;
+
 export class RegressionAccumulator {
   private readonly size: number;
   private readonly r: Float64Array;
@@ -61,10 +64,13 @@ export class RegressionAccumulator {
       throw new EngineError('shape', `A block of ${rows} rows needs ${rows * this.predictors} x values and ${rows} y values.`);
     }
     if (this.weighted !== (weights !== undefined)) throw new EngineError('shape', 'Either every block has weights or none has.');
-    const size = this.size;
-    if (this.work.length < rows * size) this.work = new Float64Array(rows * size);
-    const work = this.work.subarray(0, rows * size);
-    const offset = this.intercept ? 1 : 0;
+    this.addMoments(block);
+    for (let start = 0; start < rows; start += CHUNK_ROWS) this.foldChunk(block, start, Math.min(CHUNK_ROWS, rows - start));
+    this.n += rows;
+  }
+
+  /** Weighted mean and squared deviations of y, merged with the running ones (Chan et al.). */
+  private addMoments({ rows, y, weights }: RowBlock): void {
     let blockWeight = 0;
     let blockMean = 0;
     for (let i = 0; i < rows; i++) {
@@ -72,19 +78,9 @@ export class RegressionAccumulator {
       if (!(w > 0 && Number.isFinite(w)) || !Number.isFinite(y[i])) {
         throw new EngineError(w > 0 ? 'non-finite' : 'bad-weight', `Row ${this.n + i + 1} has a weight or response that is not a positive finite number.`);
       }
-      const root = Math.sqrt(w);
-      if (this.intercept) work[i] = root;
-      work[(size - 1) * rows + i] = y[i] * root;
       blockWeight += w;
       blockMean += w * y[i];
       if (weights !== undefined) this.logWeightSum += Math.log(w);
-    }
-    for (let j = 0; j < this.predictors; j++) {
-      for (let i = 0; i < rows; i++) {
-        const v = x[j * rows + i];
-        if (!Number.isFinite(v)) throw new EngineError('non-finite', `Row ${this.n + i + 1}, predictor ${j + 1} is ${v}; it must be a finite number.`);
-        work[(j + offset) * rows + i] = v * (weights === undefined ? 1 : Math.sqrt(weights[i]));
-      }
     }
     blockMean /= blockWeight;
     let blockDeviations = 0;
@@ -94,8 +90,28 @@ export class RegressionAccumulator {
     this.ySquaredDeviations += blockDeviations + (delta * delta * this.weightSum * blockWeight) / total;
     this.yMean += (delta * blockWeight) / total;
     this.weightSum = total;
-    this.n += rows;
-    foldBlock(this.r, size, work, rows);
+  }
+
+  /** Copies rows [start, start + count) as √w-scaled columns of [1 | X | y] and folds them into R. */
+  private foldChunk({ rows, x, y, weights }: RowBlock, start: number, count: number): void {
+    const size = this.size;
+    const work = this.work.length >= count * size ? this.work.subarray(0, count * size) : (this.work = new Float64Array(count * size));
+    const offset = this.intercept ? 1 : 0;
+    for (let i = 0; i < count; i++) {
+      const root = weights === undefined ? 1 : Math.sqrt(weights[start + i]);
+      if (this.intercept) work[i] = root;
+      work[(size - 1) * count + i] = y[start + i] * root;
+    }
+    for (let j = 0; j < this.predictors; j++) {
+      const source = j * rows + start;
+      const target = (j + offset) * count;
+      for (let i = 0; i < count; i++) {
+        const v = x[source + i];
+        if (!Number.isFinite(v)) throw new EngineError('non-finite', `Row ${this.n + start + i + 1}, predictor ${j + 1} is ${v}; it must be a finite number.`);
+        work[target + i] = weights === undefined ? v : v * Math.sqrt(weights[start + i]);
+      }
+    }
+    foldBlock(this.r, size, work, count);
   }
 
   result(): AccumulatedRows {
