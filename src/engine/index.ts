@@ -42,3 +42,4 @@ export { normalScores, type NormalScorePoint } from './infer/normalScores';
 export { RegressionAccumulator, type RowBlock, type AccumulatedRows } from './stream/regressionAccumulator';
 export { fitAccumulated } from './stream/fitAccumulated';
 export { blockResiduals } from './stream/blockResiduals';
+export { fCriticalValue } from './infer/referenceDistribution';

@@ -14,13 +14,13 @@ import { toCellGrid } from './cellInput';
 import { readCandidates } from './candidates';
 import { readModel, type ModelRequest } from './modelRequest';
 import { readNewRows } from './newRows';
-import { covarianceGrid, estimatesGrid, intervalsGrid, standardErrorsGrid } from './grids/coefficientGrids';
-import { compareGrid } from './grids/compareGrid';
-import { fitStatsGrid } from './grids/fitStatsGrid';
-import { nestedGrid } from './grids/nestedGrid';
-import { predictGrid } from './grids/predictGrid';
-import { residualsGrid } from './grids/residualsGrid';
-import { termsGrid } from './grids/termsGrid';
+import { covarianceGrid, estimatesGrid, intervalsGrid, standardErrorsGrid } from '../cellGrids/coefficientGrids';
+import { compareGrid } from '../cellGrids/compareGrid';
+import { fitStatsGrid } from '../cellGrids/fitStatsGrid';
+import { nestedGrid } from '../cellGrids/nestedGrid';
+import { predictGrid } from '../cellGrids/predictGrid';
+import { residualsGrid } from '../cellGrids/residualsGrid';
+import { termsGrid } from '../cellGrids/termsGrid';
 
 /* eslint-disable @typescript-eslint/no-explicit-any -- ranges arrive from Excel as any[][] */
 
@@ -285,8 +285,8 @@ export function compare(
 // Imports of the checks below sit with them so that this block can be appended on its own.
 import { assumptionChecks, collinearity as collinearityOf } from '../engine';
 import { readPredictors } from './modelRequest';
-import { checksGrid } from './grids/checksGrid';
-import { collinearityGrid } from './grids/collinearityGrid';
+import { checksGrid } from '../cellGrids/checksGrid';
+import { collinearityGrid } from '../cellGrids/collinearityGrid';
 
 /**
  * How far each predictor is explained by the others: VIF and tolerance for every term, and the condition number of the design.
@@ -327,7 +327,7 @@ export function checks(known_y: any[][], known_x: any[][], level?: any, intercep
 }
 
 import { normalScores } from '../engine';
-import { qqGrid } from './grids/qqGrid';
+import { qqGrid } from '../cellGrids/qqGrid';
 
 /**
  * Points for a normal Q–Q plot: the studentized residuals, sorted, against standard normal quantiles (Blom positions).

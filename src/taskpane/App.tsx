@@ -1,15 +1,19 @@
-import { useMemo, useState } from 'preact/hooks';
+import { useMemo, useRef, useState } from 'preact/hooks';
 import { freezeActiveReport } from './excel/freezeCopy';
-import { readRanges } from './excel/readRanges';
+import { ReadCancelled } from './excel/readInBlocks';
 import { selectedAddress } from './excel/selection';
 import { writeReport } from './excel/writeReport';
-import { analyze, type ReadData } from './model/analysis';
+import { analyze } from './model/analysis';
 import { EMPTY_CHOICES, type FieldProblem, type PaneChoices, resolveRanges } from './model/choices';
-import { asCellGrid } from './model/readValues';
 import { planReport } from './model/reportPlan';
+import { analyzeStreamed } from './model/streamedAnalysis';
+import { type PaneData, readData } from './readData';
+import { refreshValuesReport, type SavedValuesReport, writeValuesReport } from './valuesReport';
 import { DataSummary } from './views/DataSummary';
 import { RangeField } from './views/RangeField';
+import { ReadProgress } from './views/ReadProgress';
 import { ResultCards } from './views/ResultCards';
+import { StreamedSummary } from './views/StreamedSummary';
 import { useOfficeTheme } from './views/useOfficeTheme';
 
 type Status = { kind: 'idle' } | { kind: 'busy'; what: string } | { kind: 'done'; message: string } | { kind: 'failed'; message: string };
@@ -23,15 +27,18 @@ export function App() {
   useOfficeTheme();
   const [choices, setChoices] = useState<PaneChoices>(EMPTY_CHOICES);
   const [problems, setProblems] = useState<FieldProblem[]>([]);
-  const [data, setData] = useState<ReadData | undefined>(undefined);
+  const [data, setData] = useState<PaneData | undefined>(undefined);
   const [status, setStatus] = useState<Status>({ kind: 'idle' });
+  const [reading, setReading] = useState<{ read: number; total: number } | undefined>(undefined);
+  const [saved, setSaved] = useState<SavedValuesReport | undefined>(undefined);
+  const cancel = useRef<AbortController | undefined>(undefined);
 
   const update = (patch: Partial<PaneChoices>) => setChoices((c) => ({ ...c, ...patch }));
   const problemFor = (field: keyof PaneChoices) => problems.find((p) => p.field === field)?.message;
   const analysis = useMemo(() => {
     if (data === undefined) return undefined;
     try {
-      return analyze(data, choices);
+      return data.kind === 'cells' ? analyze(data.data, choices) : analyzeStreamed(data.data, choices);
     } catch (error) {
       return failure(error);
     }
@@ -46,33 +53,59 @@ export function App() {
     }
   };
 
+  /** Runs a block read with the progress bar and Cancel; a cancelled read leaves nothing behind. */
+  const withReading = async (run: (progress: (read: number, total: number) => void, signal: AbortSignal) => Promise<void>) => {
+    const controller = new AbortController();
+    cancel.current = controller;
+    try {
+      await run((read, total) => setReading({ read, total }), controller.signal);
+    } catch (error) {
+      setStatus(error instanceof ReadCancelled ? { kind: 'failed', message: 'Reading cancelled' } : { kind: 'failed', message: failure(error) });
+    } finally {
+      cancel.current = undefined;
+      setReading(undefined);
+    }
+  };
+
   const readAndFit = async () => {
     const { ranges, problems: found } = resolveRanges(choices);
     setProblems(found);
     if (ranges === undefined) return;
-    const cellCount = (ranges.response.bottom - ranges.response.top + 1) * (ranges.predictorColumns.length + 1);
-    setStatus({ kind: 'busy', what: `Reading ${cellCount.toLocaleString('en-US')} cells…` });
-    try {
-      const toRead = [ranges.response, ...ranges.predictorColumns, ...(ranges.weights ? [ranges.weights] : [])];
-      const grids = (await readRanges(toRead)).map(asCellGrid);
-      setData({ response: grids[0], predictorColumns: grids.slice(1, 1 + ranges.predictorColumns.length), weights: ranges.weights ? grids[grids.length - 1] : undefined });
-      setStatus({ kind: 'idle' });
-    } catch (error) {
-      setStatus({ kind: 'failed', message: failure(error) });
-    }
+    setData(undefined);
+    setStatus({ kind: 'idle' });
+    await withReading(async (progress, signal) => {
+      setData(await readData(ranges, progress, signal));
+    });
   };
 
   const report = async () => {
     const { ranges, problems: found } = resolveRanges(choices);
     setProblems(found);
-    if (ranges === undefined || analysis === undefined || typeof analysis === 'string') return;
+    if (ranges === undefined || analysis === undefined || typeof analysis === 'string' || data === undefined) return;
     setStatus({ kind: 'busy', what: 'Writing the report…' });
     try {
+      if ('kind' in analysis && data.kind === 'streamed') {
+        const written = await writeValuesReport(ranges, choices, analysis, data.dataRows);
+        setSaved(written);
+        setStatus({ kind: 'done', message: `Report written to the new sheet "${written.sheetName}" as values: the data are too large for live formulas. Use Refresh after the data change.` });
+        return;
+      }
+      if ('kind' in analysis) return;
       const name = await writeReport((sheetName) => planReport({ sheetName, ranges, choices, analysis, writtenAt: new Date() }));
       setStatus({ kind: 'done', message: `Report written to the new sheet "${name}". Its formulas stay live: edit the data or its settings cells and it recalculates.` });
     } catch (error) {
       setStatus({ kind: 'failed', message: `No report was written: ${failure(error)}` });
     }
+  };
+
+  const refresh = async () => {
+    if (saved === undefined) return;
+    setStatus({ kind: 'idle' });
+    await withReading(async (progress, signal) => {
+      const updated = await refreshValuesReport(saved, progress, signal);
+      setSaved(updated);
+      setStatus({ kind: 'done', message: `Report "${updated.sheetName}" refreshed from the data.` });
+    });
   };
 
   const freeze = async () => {
@@ -85,10 +118,13 @@ export function App() {
     }
   };
 
-  const predictorNames = data?.predictorColumns.map((column, j) => {
-    const first = column[0]?.[0];
-    return typeof analysis === 'object' && analysis.frame.hasHeader && typeof first === 'string' ? first : `x${j + 1}`;
-  });
+  const predictorNames =
+    data?.kind === 'streamed'
+      ? data.data.header.predictorNames
+      : data?.data.predictorColumns.map((column, j) => {
+          const first = column[0]?.[0];
+          return typeof analysis === 'object' && 'frame' in analysis && analysis.frame.hasHeader && typeof first === 'string' ? first : `x${j + 1}`;
+        });
 
   return (
     <main class="pane">
@@ -106,9 +142,10 @@ export function App() {
           onUseSelection={useSelection('predictors')}
           onAddSelection={useSelection('predictors', true)}
         />
-        <button type="button" class="primary" onClick={readAndFit}>
+        <button type="button" class="primary" onClick={readAndFit} disabled={reading !== undefined}>
           Read data and fit
         </button>
+        {reading !== undefined && <ReadProgress read={reading.read} total={reading.total} onCancel={() => cancel.current?.abort()} />}
         {status.kind === 'busy' && (
           <div class="progress" role="status">
             <progress aria-label={status.what} />
@@ -120,7 +157,7 @@ export function App() {
             {analysis}
           </p>
         )}
-        {typeof analysis === 'object' && <DataSummary analysis={analysis} />}
+        {typeof analysis === 'object' && ('kind' in analysis ? data?.kind === 'streamed' && <StreamedSummary analysis={analysis} dataRows={data.dataRows} /> : <DataSummary analysis={analysis} />)}
       </section>
 
       <section aria-labelledby="settings-heading">
@@ -196,8 +233,15 @@ export function App() {
           <button type="button" onClick={freeze}>
             Freeze a copy
           </button>
+          {saved !== undefined && (
+            <button type="button" onClick={refresh} disabled={reading !== undefined} aria-label={`Refresh the values report "${saved.sheetName}"`}>
+              Refresh
+            </button>
+          )}
         </div>
-        <p class="hint">Write report adds a new sheet of live formulas. Freeze a copy turns the active report into plain values, for colleagues without Plumbline.</p>
+        <p class="hint">
+          Write report adds a new sheet of live formulas (for large data, of values, which Refresh re-reads and rewrites). Freeze a copy turns the active report into plain values, for colleagues without Plumbline.
+        </p>
         {status.kind === 'done' && (
           <p class="done" role="status">
             {status.message}

@@ -1,5 +1,5 @@
 import { cellAddress, formatRange } from '../../addressing/a1';
-import type { ReportPlan } from '../model/reportPlan';
+import type { ReportCell, ReportPlan } from '../model/reportPlan';
 import { uniqueSheetName } from './uniqueSheetName';
 
 export const REPORT_SHEET_BASE = 'Plumbline report';
@@ -18,24 +18,8 @@ export async function writeReport(plan: (sheetName: string) => ReportPlan): Prom
     const sheet = sheets.add(name);
     await context.sync();
     try {
-      const { cells, formats, charts } = plan(name);
-      for (const f of formats) {
-        const rows = f.range.bottom - f.range.top + 1;
-        const columns = f.range.right - f.range.left + 1;
-        sheet.getRange(formatRange(f.range, false)).numberFormat = Array.from({ length: rows }, () => Array.from({ length: columns }, () => f.numberFormat));
-      }
-      for (const cell of cells) {
-        const range = sheet.getRange(cellAddress(cell.row, cell.column));
-        if (cell.kind === 'label') {
-          range.numberFormat = [['@']];
-          range.values = [[cell.text]];
-          if (cell.bold) range.format.font.bold = true;
-        } else if (cell.kind === 'formula') {
-          range.formulas = [[cell.formula]];
-        } else {
-          range.values = [[cell.value]];
-        }
-      }
+      const { charts, ...rest } = plan(name);
+      writePlanCells(sheet, rest);
       for (const c of charts) {
         const chart = sheet.charts.add(Excel.ChartType.xyscatter, sheet.getRange(formatRange(c.y, false)), Excel.ChartSeriesBy.columns);
         chart.name = c.name;
@@ -58,4 +42,27 @@ export async function writeReport(plan: (sheetName: string) => ReportPlan): Prom
       throw error;
     }
   });
+}
+
+/** Number formats, then cells; a label gets the text format before its value so it stays text. */
+export function writePlanCells(sheet: Excel.Worksheet, { cells, formats }: Pick<ReportPlan, 'cells' | 'formats'>): void {
+  for (const f of formats) {
+    const rows = f.range.bottom - f.range.top + 1;
+    const columns = f.range.right - f.range.left + 1;
+    sheet.getRange(formatRange(f.range, false)).numberFormat = Array.from({ length: rows }, () => Array.from({ length: columns }, () => f.numberFormat));
+  }
+  for (const cell of cells) writeCell(sheet, cell);
+}
+
+function writeCell(sheet: Excel.Worksheet, cell: ReportCell): void {
+  const range = sheet.getRange(cellAddress(cell.row, cell.column));
+  if (cell.kind === 'label') {
+    range.numberFormat = [['@']];
+    range.values = [[cell.text]];
+    if (cell.bold) range.format.font.bold = true;
+  } else if (cell.kind === 'formula') {
+    range.formulas = [[cell.formula]];
+  } else {
+    range.values = [[cell.value]];
+  }
 }

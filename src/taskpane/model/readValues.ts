@@ -5,7 +5,11 @@ import type { CellGrid, CellValue } from '../../engine';
  * booleans; anything else is treated as blank.
  */
 export function asCellGrid(values: readonly (readonly unknown[])[]): CellGrid {
-  return values.map((row) => row.map((v): CellValue => (typeof v === 'number' || typeof v === 'string' || typeof v === 'boolean' ? v : null)));
+  return values.map((row) => row.map(asCellValue));
+}
+
+export function asCellValue(v: unknown): CellValue {
+  return typeof v === 'number' || typeof v === 'string' || typeof v === 'boolean' ? v : null;
 }
 
 /** Side-by-side concatenation of single-column grids into one grid. */

@@ -1,5 +1,12 @@
 import type { ModelFit, ModelFrame, NestedComparison, TermEstimate } from '../../engine';
 
+/** What the sentences need of the data: a ModelFrame, or its stand-in for a streamed fit. */
+export interface SentenceFrame {
+  responseName: string;
+  columns: ModelFrame['columns'];
+  skipped: { length: number };
+}
+
 /** "Steep time (h)" → name "Steep time", unit "h". */
 export function splitUnit(label: string): { name: string; unit: string | undefined } {
   const m = /^(.*?)\s*\(([^()]+)\)\s*$/.exec(label);
@@ -29,7 +36,7 @@ function responseAmount(amount: string, responseUnit: string | undefined): strin
 }
 
 /** One plain-language sentence per term, with its interval and verdict. */
-export function termSentence(term: TermEstimate, frame: ModelFrame, level: number): string {
+export function termSentence(term: TermEstimate, frame: SentenceFrame, level: number): string {
   const response = splitUnit(frame.responseName);
   const ci = `${Math.round(level * 100)}% CI ${readable(term.ciLow)} to ${readable(term.ciHigh)}`;
   const verdict = term.ciLow > 0 || term.ciHigh < 0 ? 'Clear of zero.' : 'Could be zero.';
@@ -54,11 +61,11 @@ function unitWord(unit: string): string {
   return UNIT_WORDS[unit] ?? unit;
 }
 
-export function fitSentence(fit: ModelFit, frame: ModelFrame): string {
+export function fitSentence(fit: ModelFit, frame: SentenceFrame): string {
   const response = splitUnit(frame.responseName);
-  const skipped = frame.skipped.length > 0 ? ` (${frame.skipped.length} skipped)` : '';
+  const skipped = frame.skipped.length > 0 ? ` (${frame.skipped.length.toLocaleString('en-US')} skipped)` : '';
   const sigma = `typical scatter σ̂ = ${responseAmount(readable(fit.sigma), response.unit)}`;
-  return `Fitted on ${fit.n} rows${skipped}: R² = ${readable(fit.rSquared)}, adjusted ${readable(fit.adjustedRSquared)}; ${sigma}. All slopes zero? F = ${readable(fit.fStatistic)}, ${pValueText(fit.fPValue)}.`;
+  return `Fitted on ${fit.n.toLocaleString('en-US')} rows${skipped}: R² = ${readable(fit.rSquared)}, adjusted ${readable(fit.adjustedRSquared)}; ${sigma}. All slopes zero? F = ${readable(fit.fStatistic)}, ${pValueText(fit.fPValue)}.`;
 }
 
 export function nestedSentence(result: NestedComparison, addedNames: readonly string[], level: number): string {

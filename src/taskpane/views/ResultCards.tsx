@@ -1,9 +1,10 @@
 import type { PaneAnalysis } from '../model/analysis';
 import { checkWarnings } from '../model/checkWarnings';
-import { fitSentence, nestedSentence, termSentence } from '../model/sentences';
+import { fitSentence, nestedSentence, type SentenceFrame, termSentence } from '../model/sentences';
+import type { StreamedAnalysis } from '../model/streamedAnalysis';
 
 interface ResultCardsProps {
-  analysis: PaneAnalysis;
+  analysis: PaneAnalysis | StreamedAnalysis;
   level: number;
   /** Present when robust standard errors are not in use yet: switches them on. */
   onUseRobust: (() => void) | undefined;
@@ -11,7 +12,9 @@ interface ResultCardsProps {
 
 /** The results in words: checks that failed first, then the fit, the nested verdict and one card per term. */
 export function ResultCards({ analysis, level, onUseRobust }: ResultCardsProps) {
-  const { fit, frame } = analysis;
+  const { fit } = analysis;
+  const frame: SentenceFrame =
+    'frame' in analysis ? analysis.frame : { responseName: analysis.header.responseName, columns: [], skipped: { length: analysis.skipped } };
   if (fit === undefined) {
     return (
       <p class="problem" role="alert">
@@ -19,7 +22,7 @@ export function ResultCards({ analysis, level, onUseRobust }: ResultCardsProps) 
       </p>
     );
   }
-  const warnings = analysis.checks === undefined ? [] : checkWarnings(analysis.checks, frame.usedRows);
+  const warnings = 'checks' in analysis && analysis.checks !== undefined ? checkWarnings(analysis.checks, analysis.frame.usedRows) : [];
   return (
     <div class="results">
       {warnings.length > 0 && (

@@ -1,4 +1,4 @@
-import type { DiagnosticFlag, ModelFrame, ResidualDiagnostics, RowDiagnostics, UndefinedReason } from '../../engine';
+import type { DiagnosticFlag, ModelFrame, ResidualDiagnostics, RowDiagnostics, UndefinedReason } from '../engine';
 import { finiteOrBlank, type Grid } from './gridCell';
 
 export const RESIDUALS_HEADER = [

@@ -1,4 +1,4 @@
-import { COLLINEARITY_REASON_TEXT, type Collinearity, conditionReading } from '../../engine';
+import { COLLINEARITY_REASON_TEXT, type Collinearity, conditionReading } from '../engine';
 import { finiteOrBlank, type Grid } from './gridCell';
 
 export const COLLINEARITY_HEADER = ['Term', 'VIF', 'Tolerance'];

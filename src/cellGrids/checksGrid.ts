@@ -1,4 +1,4 @@
-import type { AssumptionChecks, ModelFrame } from '../../engine';
+import type { AssumptionChecks, ModelFrame } from '../engine';
 import { finiteOrBlank, type Grid, type GridCell } from './gridCell';
 
 /** Two columns, label and value; every blank value has a reading or neighbour that says why. */

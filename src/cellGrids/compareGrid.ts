@@ -1,5 +1,4 @@
-import type { CandidateResult, ModelFrame } from '../../engine';
-import type { CandidateChoice } from '../candidates';
+import type { CandidateResult, ModelFrame } from '../engine';
 import { finiteOrBlank, type Grid } from './gridCell';
 
 export const COMPARE_HEADER = ['Candidate', 'Terms', 'Residual df', 'Sigma-hat', 'Adjusted R²', 'AIC', 'BIC', 'ΔBIC'];
@@ -8,7 +7,8 @@ export const COMPARE_HEADER = ['Candidate', 'Terms', 'Residual df', 'Sigma-hat',
  * One row per candidate, best BIC first. Candidate is the row's number in the candidates grid and
  * Terms names the source columns of known_x it includes, so every line traces back to its choice.
  */
-export function compareGrid(results: readonly CandidateResult[], choices: readonly CandidateChoice[], frame: ModelFrame): Grid {
+/** Each candidate's source columns of known_x, ascending. */
+export function compareGrid(results: readonly CandidateResult[], choices: readonly { sources: number[] }[], frame: ModelFrame): Grid {
   const rows = results.map((r) => [
     r.candidate + 1,
     termsText(choices[r.candidate].sources, frame),

@@ -1,4 +1,4 @@
-import type { ModelFrame, NormalScorePoint } from '../../engine';
+import type { ModelFrame, NormalScorePoint } from '../engine';
 import { finiteOrBlank, type Grid } from './gridCell';
 
 export const QQ_HEADER = ['Normal quantile', 'Studentized residual', 'Row'];

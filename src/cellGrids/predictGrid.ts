@@ -1,4 +1,4 @@
-import type { Prediction } from '../../engine';
+import type { Prediction } from '../engine';
 import { finiteOrBlank, type Grid } from './gridCell';
 
 export const PREDICT_HEADER = ['Prediction', 'Mean low', 'Mean high', 'New low', 'New high'];

@@ -1,4 +1,4 @@
-import type { ModelFit, ModelFrame } from '../../engine';
+import type { ModelFit, ModelFrame } from '../engine';
 import { finiteOrBlank, type Grid } from './gridCell';
 
 export const FIT_STATS_LABELS = [

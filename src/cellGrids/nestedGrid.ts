@@ -1,4 +1,4 @@
-import type { NestedComparison } from '../../engine';
+import type { NestedComparison } from '../engine';
 import { finiteOrBlank, type Grid } from './gridCell';
 
 export function nestedGrid(result: NestedComparison): Grid {

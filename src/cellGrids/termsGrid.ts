@@ -1,4 +1,4 @@
-import type { ModelFit, TermEstimate } from '../../engine';
+import type { ModelFit, TermEstimate } from '../engine';
 import { finiteOrBlank, type Grid } from './gridCell';
 
 export const TERMS_HEADER = ['Term', 'Estimate', 'Std error', 't', 'p-value', 'CI low', 'CI high', 'CV %', 'Reading'];

@@ -1,4 +1,4 @@
-import type { ModelFit } from '../../engine';
+import type { ModelFit } from '../engine';
 import { finiteOrBlank, type Grid } from './gridCell';
 
 /** One column of estimates in term order; aliased terms are "". */

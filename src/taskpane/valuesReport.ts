@@ -1,0 +1,50 @@
+import type { CellGrid } from '../engine';
+import { readRanges } from './excel/readRanges';
+import { rewriteReport } from './excel/rewriteReport';
+import { writeReport } from './excel/writeReport';
+import type { PaneChoices, ResolvedRanges } from './model/choices';
+import { asCellGrid } from './model/readValues';
+import type { ReportCell } from './model/reportPlan';
+import { analyzeStreamed, type StreamedAnalysis } from './model/streamedAnalysis';
+import { predictStreamed, type StreamedPredictions } from './model/streamedPredict';
+import { planValuesReport } from './model/valuesReportPlan';
+import { readData } from './readData';
+
+/** What Refresh needs to redo a values report: where it is, what it was made of, and what it wrote. */
+export interface SavedValuesReport {
+  sheetName: string;
+  ranges: ResolvedRanges;
+  choices: PaneChoices;
+  cells: ReportCell[];
+}
+
+/** New rows are few: read at once, their areas joined side by side. */
+async function newRowPredictions(ranges: ResolvedRanges, analysis: StreamedAnalysis): Promise<StreamedPredictions | undefined> {
+  if (ranges.newRows === undefined) return undefined;
+  const grids = (await readRanges(ranges.newRows)).map(asCellGrid);
+  const joined: CellGrid = grids[0].map((_, i) => grids.flatMap((g) => [...(g[i] ?? [])]));
+  return predictStreamed(joined, analysis);
+}
+
+export async function writeValuesReport(ranges: ResolvedRanges, choices: PaneChoices, analysis: StreamedAnalysis, dataRows: number): Promise<SavedValuesReport> {
+  const predictions = await newRowPredictions(ranges, analysis);
+  let cells: ReportCell[] = [];
+  const sheetName = await writeReport((name) => {
+    const plan = planValuesReport({ sheetName: name, ranges, choices, analysis, predictions, dataRows, writtenAt: new Date() });
+    cells = plan.cells;
+    return plan;
+  });
+  return { sheetName, ranges, choices, cells };
+}
+
+/** Re-reads the report's own ranges with its own choices and rewrites its cells in place. */
+export async function refreshValuesReport(saved: SavedValuesReport, progress: (read: number, total: number) => void, signal: AbortSignal): Promise<SavedValuesReport> {
+  const read = await readData(saved.ranges, progress, signal, true);
+  if (read.kind !== 'streamed') throw new Error('unreachable: a forced streamed read came back as cells');
+  const analysis = analyzeStreamed(read.data, saved.choices);
+  if (analysis.fit === undefined) throw new Error(analysis.fitError ?? 'The data no longer give a fit.');
+  const predictions = await newRowPredictions(saved.ranges, analysis);
+  const plan = planValuesReport({ sheetName: saved.sheetName, ranges: saved.ranges, choices: saved.choices, analysis, predictions, dataRows: read.dataRows, writtenAt: new Date() });
+  await rewriteReport(saved.sheetName, saved.cells, plan);
+  return { ...saved, cells: plan.cells };
+}

@@ -1,0 +1,180 @@
+/**
+ * Full-sheet scale in the preview workbook: a 200,000-row sheet, read by the pane in blocks with
+ * a progress bar, fitted by streaming, written as a values report, refreshed after an edit, and a
+ * cancelled read that leaves nothing behind. Expected numbers come from the engine's in-memory
+ * fit run here in Node on the same generated rows.
+ */
+import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { fitModel } from '../../../src/engine';
+import { type BrowserSession, chromiumAvailable, openPage } from '../../support/browser';
+
+const available = chromiumAvailable();
+const ROWS = 200_000;
+
+/**
+ * Row i of the data: three predictors and a response from an integer hash, so the page and Node
+ * produce the very same doubles. Self-contained, because it is also sent to the page.
+ */
+function generatedRow(i: number): [number, number, number, number] {
+  const unit = (k: number): number => {
+    let t = (Math.imul(i, 0x9e3779b1) ^ Math.imul(k + 1, 0x85ebca6b)) >>> 0;
+    t = Math.imul(t ^ (t >>> 15), t | 1);
+    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
+    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
+  };
+  const x1 = 10 * unit(0);
+  const x2 = 5 * unit(1) - 2;
+  const x3 = unit(2) + 0.5 * unit(3);
+  return [3 + 0.8 * x1 - 1.5 * x2 + 2 * x3 + (unit(4) - 0.5), x1, x2, x3];
+}
+
+function engineFit(edit?: { row: number; y: number }) {
+  const y: number[] = [];
+  const x: number[][] = [];
+  for (let i = 0; i < ROWS; i++) {
+    const [r, ...xs] = generatedRow(i);
+    y.push(edit?.row === i ? edit.y : r);
+    x.push(xs);
+  }
+  return fitModel({ y, x });
+}
+
+describe.skipIf(!available)('large data in the pane', () => {
+  let session: BrowserSession;
+  const origin = inject('previewOrigin');
+  const page = () => session.page;
+
+  const goTo = async (address: string) => {
+    const box = page().getByLabel('Selected range (type an address and press Enter to select it)');
+    await box.fill(address);
+    await box.press('Enter');
+  };
+  const sheetNames = () =>
+    page().evaluate(() =>
+      Excel.run(async (context) => {
+        const sheets = context.workbook.worksheets;
+        sheets.load('items/name');
+        await context.sync();
+        return sheets.items.map((s) => s.name);
+      }),
+    );
+  const reportValues = (sheet: string) =>
+    page().evaluate(
+      (name) =>
+        Excel.run(async (context) => {
+          const used = context.workbook.worksheets.getItem(name).getUsedRange(true);
+          used.load('values, formulas');
+          await context.sync();
+          return { values: used.values as unknown[][], formulas: used.formulas as unknown[][] };
+        }),
+      sheet,
+    );
+  const estimatesIn = (values: unknown[][]) => {
+    const header = values.findIndex((r) => r[0] === 'Term');
+    return values.slice(header + 1, header + 5).map((r) => [r[0], r[1]] as [unknown, unknown]);
+  };
+  const expectClose = (got: unknown, want: number) => {
+    expect(typeof got).toBe('number');
+    expect(Math.abs((got as number) - want)).toBeLessThanOrEqual(1e-9 * Math.abs(want));
+  };
+
+  beforeAll(async () => {
+    session = await openPage(`${origin}/preview.html`);
+    await page().waitForFunction(() => document.querySelector('[data-cell="A3"]')?.textContent === 'Intercept');
+    // The shim copes with 20,000 rows per write; each block is its own sync, as a real add-in would write.
+    await page().evaluate(
+      async ({ rows, source }) => {
+        const row = new Function(`return (${source})`)() as (i: number) => number[];
+        await Excel.run(async (context) => {
+          const sheet = context.workbook.worksheets.add('Big');
+          sheet.getRange('A1:D1').values = [['y', 'x1', 'x2', 'x3']];
+          await context.sync();
+          for (let start = 0; start < rows; start += 20_000) {
+            const block = Array.from({ length: 20_000 }, (_, k) => row(start + k));
+            sheet.getRange(`A${start + 2}:D${start + 20_001}`).values = block;
+            await context.sync();
+          }
+        });
+      },
+      { rows: ROWS, source: generatedRow.toString() },
+    );
+    await goTo(`Big!A1:A${ROWS + 1}`);
+    await page().getByRole('button', { name: 'Use selection for Response (one column)' }).click();
+    await goTo(`Big!B1:D${ROWS + 1}`);
+    await page().getByRole('button', { name: 'Use selection for Predictors' }).click();
+    await page().waitForFunction((wanted) => (document.querySelector('#predictors') as HTMLInputElement | null)?.value === wanted, `Big!B1:D${ROWS + 1}`);
+  });
+  afterAll(async () => {
+    await session?.close();
+  });
+
+  it('cancels a read from the progress bar, leaving no analysis and no new sheet', async () => {
+    const before = await sheetNames();
+    // Clicked from inside the page the moment the bar appears, so the read is stopped after its first block every time.
+    await page().evaluate(() => {
+      const observer = new MutationObserver(() => {
+        const cancel = [...document.querySelectorAll('button')].find((b) => b.textContent === 'Cancel');
+        if (cancel !== undefined) {
+          observer.disconnect();
+          cancel.click();
+        }
+      });
+      observer.observe(document.body, { childList: true, subtree: true });
+    });
+    await page().getByRole('button', { name: 'Read data and fit' }).click();
+    await expect.poll(() => page().locator('.problem[role="alert"]').allInnerTexts()).toContain('Reading cancelled');
+    expect(await page().locator('.data-summary').count()).toBe(0);
+    expect(await page().getByRole('button', { name: 'Write report' }).isDisabled()).toBe(true);
+    expect(await sheetNames()).toEqual(before);
+  });
+
+  it('reads in blocks with progress and fits the streamed rows', async () => {
+    await page().evaluate(() => {
+      const seen: { value: number; max: number }[] = [];
+      (window as unknown as { progressSeen: typeof seen }).progressSeen = seen;
+      new MutationObserver(() => {
+        const bar = document.querySelector('progress[aria-label="Rows read"]');
+        if (bar instanceof HTMLProgressElement) seen.push({ value: bar.value, max: bar.max });
+      }).observe(document.body, { childList: true, subtree: true, attributes: true, characterData: true });
+    });
+    await page().getByRole('button', { name: 'Read data and fit' }).click();
+    await expect.poll(() => page().locator('.data-summary').innerText(), { timeout: 40_000 }).toContain('Rows used: 200,000');
+    const seen = await page().evaluate(() => (window as unknown as { progressSeen: { value: number; max: number }[] }).progressSeen);
+    expect(seen.some((s) => s.max === ROWS + 1 && s.value > 0 && s.value < s.max)).toBe(true);
+    expect(await page().locator('progress[aria-label="Rows read"]').count()).toBe(0);
+    expect(await page().locator('.summary').innerText()).toContain('Fitted on 200,000 rows');
+  });
+
+  it('writes a values report whose estimates are the in-memory fit’s', async () => {
+    await page().getByRole('button', { name: 'Write report' }).click();
+    await expect.poll(() => page().locator('.done').innerText()).toContain('as values');
+    const report = await reportValues('Plumbline report');
+    expect(report.formulas.flat().filter((f) => typeof f === 'string' && f.startsWith('='))).toEqual([]);
+    expect(report.values.flat()).toContain(
+      'These results are values, not live formulas: the data (200,000 rows) exceed what a cell function can receive in one call (about 5 MB). Use Refresh in the Plumbline pane after the data change.',
+    );
+    const fit = engineFit();
+    const shown = estimatesIn(report.values);
+    fit.terms.forEach((t, i) => {
+      expect(shown[i][0]).toBe(t.name === 'Intercept' ? 'Intercept' : ['x1', 'x2', 'x3'][i - 1]);
+      expectClose(shown[i][1], t.estimate);
+    });
+  });
+
+  it('refreshes the values report in place after the data change', async () => {
+    await page().evaluate(() =>
+      Excel.run(async (context) => {
+        context.workbook.worksheets.getItem('Big').getRange('A2').values = [[1000]];
+        await context.sync();
+      }),
+    );
+    const namesBefore = await sheetNames();
+    await page().getByRole('button', { name: 'Refresh the values report "Plumbline report"' }).click();
+    await expect.poll(() => page().locator('.done').innerText(), { timeout: 40_000 }).toContain('refreshed');
+    expect(await sheetNames()).toEqual(namesBefore);
+    const fit = engineFit({ row: 0, y: 1000 });
+    const shown = estimatesIn((await reportValues('Plumbline report')).values);
+    fit.terms.forEach((t, i) => expectClose(shown[i][1], t.estimate));
+    expect(Math.abs((shown[0][1] as number) - engineFit().terms[0].estimate)).toBeGreaterThan(1e-6);
+  });
+});

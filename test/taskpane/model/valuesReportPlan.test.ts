@@ -1,0 +1,68 @@
+/**
+ * The values report of a streamed fit: values and text labels only (no formula could receive
+ * the data), the note that says why and how to refresh, the engine's numbers in the tables, the
+ * nested test and predictions when chosen, and what was left out said in words.
+ */
+import { describe, expect, it } from 'vitest';
+import { RegressionAccumulator } from '../../../src/engine';
+import { EMPTY_CHOICES, type PaneChoices, resolveRanges } from '../../../src/taskpane/model/choices';
+import { analyzeStreamed, type StreamedData } from '../../../src/taskpane/model/streamedAnalysis';
+import { predictStreamed } from '../../../src/taskpane/model/streamedPredict';
+import { LEFT_OUT_NOTE, planValuesReport, valuesNote } from '../../../src/taskpane/model/valuesReportPlan';
+import { randomProblem } from '../../support/random';
+
+const { y, x } = randomProblem(12, 300, 2);
+const accumulator = new RegressionAccumulator(2, true);
+accumulator.addBlock({ rows: 300, x: Float64Array.from([...x.map((r) => r[0]), ...x.map((r) => r[1])]), y: Float64Array.from(y) });
+const data: StreamedData = { header: { hasHeader: true, responseName: '=Yield', predictorNames: ['Temp', 'Time'] }, accumulated: accumulator.result(), skipped: 4, skippedExamples: [] };
+
+function plan(choices: PaneChoices) {
+  const { ranges } = resolveRanges(choices);
+  if (ranges === undefined) throw new Error('bad test ranges');
+  const analysis = analyzeStreamed(data, choices);
+  const predictions = ranges.newRows === undefined ? undefined : predictStreamed([[20, 3], [25, '']], analysis);
+  return { analysis, plan: planValuesReport({ sheetName: 'Plumbline report', ranges, choices, analysis, predictions, dataRows: 304, writtenAt: new Date('2026-12-02T10:00:00Z') }) };
+}
+
+const choices: PaneChoices = { ...EMPTY_CHOICES, response: 'Data!A1:A305', predictors: 'Data!B1:C305' };
+const textAt = (cells: ReturnType<typeof plan>['plan']['cells'], row: number, column: number) =>
+  cells.find((c) => c.row === row && c.column === column && c.kind === 'label')?.kind === 'label' ? (cells.find((c) => c.row === row && c.column === column) as { text: string }).text : undefined;
+
+describe('planValuesReport', () => {
+  it('writes no formula, and says why the results are values and how to refresh them', () => {
+    const { cells } = plan(choices).plan;
+    expect(cells.filter((c) => c.kind === 'formula')).toEqual([]);
+    expect(textAt(cells, 2, 0)).toBe(
+      'These results are values, not live formulas: the data (304 rows) exceed what a cell function can receive in one call (about 5 MB). Use Refresh in the Plumbline pane after the data change.',
+    );
+    expect(valuesNote(200000)).toContain('(200,000 rows)');
+    expect(cells.some((c) => c.kind === 'label' && c.text === LEFT_OUT_NOTE)).toBe(true);
+  });
+
+  it('writes the term table and fit statistics of the streamed fit as numbers', () => {
+    const { analysis, plan: p } = plan(choices);
+    const header = p.cells.find((c) => c.kind === 'label' && c.text === 'Term');
+    if (header === undefined || analysis.fit === undefined) throw new Error('no term table');
+    analysis.fit.terms.forEach((t, i) => {
+      expect(textAt(p.cells, header.row + 1 + i, 0)).toBe(t.name);
+      expect(p.cells.find((c) => c.row === header.row + 1 + i && c.column === 1)).toMatchObject({ kind: 'value', value: t.estimate });
+    });
+    const skipped = p.cells.find((c) => c.kind === 'label' && c.text === 'Rows skipped');
+    expect(p.cells.find((c) => c.row === skipped?.row && c.column === 1)).toMatchObject({ kind: 'value', value: 4 });
+  });
+
+  it('keeps a response name that looks like a formula as a text label', () => {
+    const { cells } = plan(choices).plan;
+    expect(textAt(cells, 0, 0)).toBe('Plumbline report: =Yield');
+  });
+
+  it('adds the nested test and the predictions when they are chosen, a blank new row left blank', () => {
+    const { analysis, plan: p } = plan({ ...choices, added: [1], newRows: 'New!A1:B2' });
+    const fRow = p.cells.find((c) => c.kind === 'label' && c.text === 'F')?.row;
+    expect(p.cells.find((c) => c.row === fRow && c.column === 1)).toMatchObject({ kind: 'value', value: analysis.nested?.f });
+    expect(p.cells.some((c) => c.kind === 'label' && c.text === 'Does Time add anything?')).toBe(true);
+    const predictionRow = p.cells.find((c) => c.kind === 'label' && c.text === 'Prediction')?.row ?? -1;
+    expect(p.cells.find((c) => c.row === predictionRow + 1 && c.column === 0)?.kind).toBe('value');
+    expect(textAt(p.cells, predictionRow + 2, 0)).toBe('');
+  });
+});
