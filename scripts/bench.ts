@@ -57,7 +57,7 @@ function main(): void {
   console.log(`Plumbline benchmark on ${describeMachine()}`);
   console.log('Fit with coefficients and standard errors; times are medians (ms); memory is peak growth over the input data (MB).\n');
   const header = ['n', 'p', 'streaming', 'in-memory', 'normal eq.', 'regr. pkg', 'pkg/stream', 'normal/stream', 'stream mem', 'input MB'];
-  console.log(header.map((h) => h.padStart(12)).join(''));
+  console.log(header.map((h) => h.padStart(14)).join(''));
   for (const n of SIZES) {
     for (const p of PREDICTORS) {
       const results = Object.fromEntries(METHODS.map((m) => [m, runCase(m, n, p)])) as Record<(typeof METHODS)[number], CaseResult>;
@@ -74,7 +74,7 @@ function main(): void {
         results.streaming.peakExtraMb.toFixed(0),
         results.streaming.inputMb.toFixed(0),
       ];
-      console.log(`${row.map((c) => String(c).padStart(12)).join('')}${agree ? '' : '   (streaming and in-memory disagree!)'}`);
+      console.log(`${row.map((c) => String(c).padStart(14)).join('')}${agree ? '' : '   (streaming and in-memory disagree!)'}`);
     }
   }
   console.log(`\nFits when a report of 12 formulas recalculates after one data cell changes: ${fitsPerEdit()}`);

@@ -14,7 +14,7 @@ const repeats = Number(repeatsText);
 const BLOCK_ROWS = 20_000;
 
 /** A seeded, well-conditioned design: y = 1 + Σ xⱼ·(j+1)/p + noise. */
-function generateColumns(): { x: Float64Array; y: Float64Array } {
+function generateColumns(n: number): { x: Float64Array; y: Float64Array } {
   let state = 12345;
   const uniform = () => {
     state = (Math.imul(state, 1103515245) + 12345) >>> 0;
@@ -34,7 +34,7 @@ function generateColumns(): { x: Float64Array; y: Float64Array } {
   return { x, y };
 }
 
-function rows(x: Float64Array): number[][] {
+function rows(x: Float64Array, n: number): number[][] {
   return Array.from({ length: n }, (_, i) => Array.from({ length: p }, (_, j) => x[j * n + i]));
 }
 
@@ -43,7 +43,7 @@ function residentKb(field: 'VmRSS' | 'VmHWM'): number {
   return Number(new RegExp(`${field}:\\s+(\\d+)`).exec(status)?.[1] ?? Number.NaN);
 }
 
-function runOnce(data: { x: Float64Array; y: Float64Array }, arrays: { x: number[][]; y: number[] } | undefined): number {
+function runOnce(data: { x: Float64Array; y: Float64Array }, arrays: { x: number[][]; y: number[] } | undefined, n: number): number {
   switch (method) {
     case 'engine': {
       modelCache.reset();
@@ -78,8 +78,11 @@ function runOnce(data: { x: Float64Array; y: Float64Array }, arrays: { x: number
   }
 }
 
-const data = generateColumns();
-const arrays = method === 'streaming' ? undefined : { x: rows(data.x), y: Array.from(data.y) };
+// One untimed run on a small problem first, so every method is timed with its code compiled.
+const warmUp = generateColumns(2000);
+runOnce(warmUp, method === 'streaming' ? undefined : { x: rows(warmUp.x, 2000), y: Array.from(warmUp.y) }, 2000);
+const data = generateColumns(n);
+const arrays = method === 'streaming' ? undefined : { x: rows(data.x, n), y: Array.from(data.y) };
 const inputBytes = method === 'streaming' ? data.x.byteLength + data.y.byteLength : (n * (p + 1) * 8);
 (globalThis as { gc?: () => void }).gc?.();
 const baselineKb = residentKb('VmRSS');
@@ -89,7 +92,7 @@ const times: number[] = [];
 let checksum = 0;
 for (let r = 0; r < repeats; r++) {
   const start = performance.now();
-  checksum = runOnce(data, arrays);
+  checksum = runOnce(data, arrays, n);
   times.push(performance.now() - start);
 }
 times.sort((a, b) => a - b);

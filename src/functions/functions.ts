@@ -7,12 +7,12 @@
  * Shared settings, always the last five arguments and in this order: level, intercept,
  * known_sigma, weights, robust.
  */
-import { compareCandidates, compareNested, fitModel, predict as predictRows, residualDiagnostics } from '../engine';
+import { compareCandidates, compareNested, fitModel, predict as predictRows, residualDiagnostics, assumptionChecks, collinearity as collinearityOf, normalScores } from '../engine';
 import { guarded } from './cellError';
 import type { RangeArgument } from './cellInput';
 import { toCellGrid } from './cellInput';
 import { readCandidates } from './candidates';
-import { readModel, type ModelRequest } from './modelRequest';
+import { readModel, type ModelRequest, readPredictors } from './modelRequest';
 import { readNewRows } from './newRows';
 import { covarianceGrid, estimatesGrid, intervalsGrid, standardErrorsGrid } from '../cellGrids/coefficientGrids';
 import { compareGrid } from '../cellGrids/compareGrid';
@@ -21,6 +21,9 @@ import { nestedGrid } from '../cellGrids/nestedGrid';
 import { predictGrid } from '../cellGrids/predictGrid';
 import { residualsGrid } from '../cellGrids/residualsGrid';
 import { termsGrid } from '../cellGrids/termsGrid';
+import { checksGrid } from '../cellGrids/checksGrid';
+import { collinearityGrid } from '../cellGrids/collinearityGrid';
+import { qqGrid } from '../cellGrids/qqGrid';
 
 /* eslint-disable @typescript-eslint/no-explicit-any -- ranges arrive from Excel as any[][] */
 
@@ -283,10 +286,6 @@ export function compare(
 }
 
 // Imports of the checks below sit with them so that this block can be appended on its own.
-import { assumptionChecks, collinearity as collinearityOf } from '../engine';
-import { readPredictors } from './modelRequest';
-import { checksGrid } from '../cellGrids/checksGrid';
-import { collinearityGrid } from '../cellGrids/collinearityGrid';
 
 /**
  * How far each predictor is explained by the others: VIF and tolerance for every term, and the condition number of the design.
@@ -325,9 +324,6 @@ export function checks(known_y: any[][], known_x: any[][], level?: any, intercep
     return checksGrid(assumptionChecks(r.frame.data, r.settings), r.frame);
   });
 }
-
-import { normalScores } from '../engine';
-import { qqGrid } from '../cellGrids/qqGrid';
 
 /**
  * Points for a normal Q–Q plot: the studentized residuals, sorted, against standard normal quantiles (Blom positions).

@@ -6,6 +6,7 @@
  */
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { fitModel } from '../../../src/engine';
+import { goTo as goToAddress, sheetNames as listSheets } from '../../support/previewPage';
 import { type BrowserSession, chromiumAvailable, openPage } from '../../support/browser';
 
 const available = chromiumAvailable();
@@ -44,20 +45,8 @@ describe.skipIf(!available)('large data in the pane', () => {
   const origin = inject('previewOrigin');
   const page = () => session.page;
 
-  const goTo = async (address: string) => {
-    const box = page().getByLabel('Selected range (type an address and press Enter to select it)');
-    await box.fill(address);
-    await box.press('Enter');
-  };
-  const sheetNames = () =>
-    page().evaluate(() =>
-      Excel.run(async (context) => {
-        const sheets = context.workbook.worksheets;
-        sheets.load('items/name');
-        await context.sync();
-        return sheets.items.map((s) => s.name);
-      }),
-    );
+  const goTo = (address: string) => goToAddress(page(), address);
+  const sheetNames = () => listSheets(page());
   const reportValues = (sheet: string) =>
     page().evaluate(
       (name) =>

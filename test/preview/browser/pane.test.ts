@@ -8,6 +8,7 @@ import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { buildModelFrame, fitModel } from '../../../src/engine';
 import { BATCH_HEADERS, generateBatchLog } from '../../../src/preview/demo/batchLog';
 import { termSentence } from '../../../src/taskpane/model/sentences';
+import { goTo as goToAddress, sheetNames as listSheets } from '../../support/previewPage';
 import { type BrowserSession, chromiumAvailable, openPage, screenshot } from '../../support/browser';
 
 const available = chromiumAvailable();
@@ -23,11 +24,7 @@ describe.skipIf(!available)('guided pane in the preview workbook', () => {
   const origin = inject('previewOrigin');
 
   const page = () => session.page;
-  const goTo = async (address: string) => {
-    const box = page().getByLabel('Selected range (type an address and press Enter to select it)');
-    await box.fill(address);
-    await box.press('Enter');
-  };
+  const goTo = (address: string) => goToAddress(page(), address);
   const sheetSnapshot = (sheet: string) =>
     page().evaluate(
       (name) =>
@@ -39,15 +36,7 @@ describe.skipIf(!available)('guided pane in the preview workbook', () => {
         }),
       sheet,
     );
-  const sheetNames = () =>
-    page().evaluate(() =>
-      Excel.run(async (context) => {
-        const sheets = context.workbook.worksheets;
-        sheets.load('items/name');
-        await context.sync();
-        return sheets.items.map((s) => s.name);
-      }),
-    );
+  const sheetNames = () => listSheets(page());
 
   beforeAll(async () => {
     session = await openPage(`${origin}/preview.html`);
