@@ -2,6 +2,7 @@ import type { CellGrid } from '../engine';
 import { readRanges } from './excel/readRanges';
 import { rewriteReport } from './excel/rewriteReport';
 import { writeReport } from './excel/writeReport';
+import { clearResidualTable, deleteSheet, writeResidualTable } from './excel/writeResidualTable';
 import type { PaneChoices, ResolvedRanges } from './model/choices';
 import { asCellGrid } from './model/readValues';
 import type { ReportCell } from './model/reportPlan';
@@ -16,7 +17,11 @@ export interface SavedValuesReport {
   ranges: ResolvedRanges;
   choices: PaneChoices;
   cells: ReportCell[];
+  /** Rows of the residual table beside the report, so a refresh can clear what it no longer needs. */
+  residualRows: number;
 }
+
+const noProgress = (): void => undefined;
 
 /** New rows are few: read at once, their areas joined side by side. */
 async function newRowPredictions(ranges: ResolvedRanges, analysis: StreamedAnalysis): Promise<StreamedPredictions | undefined> {
@@ -34,7 +39,14 @@ export async function writeValuesReport(ranges: ResolvedRanges, choices: PaneCho
     cells = plan.cells;
     return plan;
   });
-  return { sheetName, ranges, choices, cells };
+  try {
+    const residualRows = await writeResidualTable(sheetName, ranges, analysis, noProgress, new AbortController().signal);
+    return { sheetName, ranges, choices, cells, residualRows };
+  } catch (error) {
+    // No half-written report: the sheet this call added goes again.
+    await deleteSheet(sheetName);
+    throw error;
+  }
 }
 
 /** Re-reads the report's own ranges with its own choices and rewrites its cells in place. */
@@ -46,5 +58,7 @@ export async function refreshValuesReport(saved: SavedValuesReport, progress: (r
   const predictions = await newRowPredictions(saved.ranges, analysis);
   const plan = planValuesReport({ sheetName: saved.sheetName, ranges: saved.ranges, choices: saved.choices, analysis, predictions, dataRows: read.dataRows, writtenAt: new Date() });
   await rewriteReport(saved.sheetName, saved.cells, plan);
-  return { ...saved, cells: plan.cells };
+  await clearResidualTable(saved.sheetName, saved.residualRows);
+  const residualRows = await writeResidualTable(saved.sheetName, saved.ranges, analysis, progress, signal);
+  return { ...saved, cells: plan.cells, residualRows };
 }

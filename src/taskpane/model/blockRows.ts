@@ -24,6 +24,8 @@ export interface BlockHeader {
 
 export interface ConvertedBlock {
   block: RowBlock;
+  /** 1-based positions in the chosen ranges of the block's used rows, in order. */
+  usedRows: number[];
   /** Rows of this block left out for a blank or #N/A; the first few are kept as examples. */
   skipped: number;
   skippedExamples: SkippedRow[];
@@ -114,7 +116,11 @@ export function convertBlock(values: BlockValues, sources: BlockSources, header:
     used[i] = 1;
     rows++;
   }
-  return { block: fill(values, used, rows, p), skipped, skippedExamples };
+  const usedRows: number[] = [];
+  used.forEach((flag, i) => {
+    if (flag === 1) usedRows.push(offset + i + 1);
+  });
+  return { block: fill(values, used, rows, p), usedRows, skipped, skippedExamples };
 }
 
 function rejectBadCell({ cell, what, source }: Located, offset: number): void {

@@ -29,8 +29,8 @@ export function valuesNote(dataRows: number): string {
 }
 
 export const LEFT_OUT_NOTE =
-  'Left out for data this large: the per-row residuals and flags, the checks (Durbin–Watson, Breusch–Pagan, Jarque–Bera, leverage, Cook’s distance) and the charts. ' +
-  'Each needs every row in memory at once; fit a live report on a subset of the rows to see them.';
+  'The fitted value and residual of every row are in the table on the right, computed block by block. Left out for data this large: leverage and the flags, ' +
+  'the checks (Durbin–Watson, Breusch–Pagan, Jarque–Bera, Cook’s distance) and the charts, which need every row in memory at once; fit a live report on a subset of the rows to see them.';
 
 const fixed = (decimals: number): string => (decimals <= 0 ? '0' : `0.${'0'.repeat(decimals)}`);
 

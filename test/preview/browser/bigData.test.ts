@@ -51,7 +51,8 @@ describe.skipIf(!available)('large data in the pane', () => {
     page().evaluate(
       (name) =>
         Excel.run(async (context) => {
-          const used = context.workbook.worksheets.getItem(name).getUsedRange(true);
+          // The report's own tables sit in A1:J80; the 200,000-row residual table beside them is read apart.
+          const used = context.workbook.worksheets.getItem(name).getRange('A1:J80');
           used.load('values, formulas');
           await context.sync();
           return { values: used.values as unknown[][], formulas: used.formulas as unknown[][] };
@@ -148,6 +149,22 @@ describe.skipIf(!available)('large data in the pane', () => {
       expect(shown[i][0]).toBe(t.name === 'Intercept' ? 'Intercept' : ['x1', 'x2', 'x3'][i - 1]);
       expectClose(shown[i][1], t.estimate);
     });
+    // The residual table, written block by block beside the report (column K, header in row 5).
+    const table = await page().evaluate(() =>
+      Excel.run(async (context) => {
+        const range = context.workbook.worksheets.getItem('Plumbline report').getRange('K5:M200006');
+        range.load('values');
+        await context.sync();
+        return range.values as unknown[][];
+      }),
+    );
+    expect(table[0]).toEqual(['Row', 'Fitted', 'Residual']);
+    expect(table).toHaveLength(200_002);
+    expect(table[200_001]).toEqual(['', '', '']);
+    for (const i of [0, 1, 99_999, 199_999]) {
+      expect(table[i + 1][0]).toBe(i + 2);
+      expectClose(table[i + 1][2] as number, fit.residuals[i]);
+    }
   });
 
   it('refreshes the values report in place after the data change', async () => {

@@ -1,0 +1,53 @@
+/**
+ * The residual table of a values report, computed block by block in a second pass, against the
+ * in-memory fit's residuals on the same cells (seeded random data; the engine's residuals are
+ * checked against outside sources in test/engine), with an added set out of sheet order, no
+ * intercept, and a skipped row that must keep its place in the Row numbers.
+ */
+import { describe, expect, it } from 'vitest';
+import { fitModel, RegressionAccumulator } from '../../../src/engine';
+import { convertBlock, detectHeader } from '../../../src/taskpane/model/blockRows';
+import { EMPTY_CHOICES, type PaneChoices } from '../../../src/taskpane/model/choices';
+import { analyzeStreamed } from '../../../src/taskpane/model/streamedAnalysis';
+import { residualRows } from '../../../src/taskpane/model/streamedResiduals';
+import { randomProblem } from '../../support/random';
+
+const n = 300;
+const { y, x } = randomProblem(12, n, 3);
+const sheetRef = (left: number) => ({ sheet: 'Data', top: 0, left, bottom: n, right: left });
+const sources = { response: sheetRef(0), predictors: [sheetRef(1), sheetRef(2), sheetRef(3)], weights: undefined };
+// Row 6 of the data (sheet row 7) is blank in y and must be skipped, keeping the others' numbers.
+const column = (values: (number | string)[], name: string) => [[name], ...values.map((v) => [v])];
+const yCells = y.map((v, i) => (i === 5 ? '' : v));
+const values = { response: column(yCells, 'y'), predictors: [0, 1, 2].map((j) => column(x.map((r) => r[j]), ['a', 'b', 'c'][j])), weights: undefined };
+
+function blocks(size: number) {
+  const out = [];
+  for (let offset = 0; offset < n + 1; offset += size) {
+    const slice = (grid: unknown[][]) => grid.slice(offset, offset + size);
+    out.push({ offset, values: { response: slice(values.response), predictors: values.predictors.map(slice), weights: undefined } });
+  }
+  return out;
+}
+
+describe('residualRows', () => {
+  it.each<[string, PaneChoices]>([
+    ['default', EMPTY_CHOICES],
+    ['added set first in the sheet', { ...EMPTY_CHOICES, added: [0] }],
+    ['no intercept', { ...EMPTY_CHOICES, intercept: false }],
+  ])('matches the in-memory residuals row by row: %s', (_name, choices) => {
+    const header = detectHeader(values, sources, n + 1);
+    const accumulator = new RegressionAccumulator(3, true);
+    for (const b of blocks(64)) accumulator.addBlock(convertBlock(b.values, sources, header, b.offset).block);
+    const analysis = analyzeStreamed({ header, accumulated: accumulator.result(), skipped: 1, skippedExamples: [] }, choices);
+    const table = blocks(64).flatMap((b) => residualRows(convertBlock(b.values, sources, header, b.offset), analysis));
+    const keep = y.map((_, i) => i !== 5);
+    const memory = fitModel({ y: y.filter((_, i) => keep[i]), x: x.filter((_, i) => keep[i]) }, { intercept: choices.intercept });
+    expect(table).toHaveLength(n - 1);
+    expect(table.slice(4, 6).map((r) => r[0])).toEqual([6, 8]);
+    table.forEach(([, fitted, residual], i) => {
+      expect(Math.abs(fitted - memory.fitted[i])).toBeLessThanOrEqual(1e-9 * Math.max(1, Math.abs(memory.fitted[i])));
+      expect(Math.abs(residual - memory.residuals[i])).toBeLessThanOrEqual(1e-9 * memory.sigma);
+    });
+  });
+});
