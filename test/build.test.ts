@@ -137,3 +137,57 @@ describe("production build", () => {
     expect(readFileSync(join(outDir, "manifest.xml"), "utf8")).toBe(readFileSync(join(ROOT, "manifest.xml"), "utf8"));
   });
 });
+
+/** The page's Content-Security-Policy meta tag, as directive name → sources, and where it sits. */
+function pagePolicy(html: string): { directives: Map<string, string[]>; index: number } | undefined {
+  for (const tag of html.matchAll(/<meta\b([^>]*)>/gi)) {
+    if (!/\bhttp-equiv\s*=\s*["']?Content-Security-Policy\b/i.test(tag[1])) continue;
+    const content = /\bcontent\s*=\s*(?:"([^"]*)"|'([^']*)')/i.exec(tag[1]);
+    if (!content) return undefined;
+    const directives = new Map<string, string[]>();
+    for (const part of (content[1] ?? content[2]).split(";")) {
+      const [name, ...sources] = part.trim().split(/\s+/);
+      if (name) directives.set(name.toLowerCase(), sources);
+    }
+    return { directives, index: tag.index ?? -1 };
+  }
+  return undefined;
+}
+
+describe("Content-Security-Policy of the built pages", () => {
+  // The pane may load Office.js from Microsoft's CDN; the preview uses the shim and loads nothing external.
+  const PAGES = [
+    { page: "taskpane.html", scripts: ["'self'", "https://appsforoffice.microsoft.com"] },
+    { page: "preview.html", scripts: ["'self'"] },
+  ];
+
+  it.each(PAGES)("$page carries a policy before any script that keeps everything on its own origin", ({ page, scripts }) => {
+    const html = readFileSync(join(outDir, page), "utf8");
+    const policy = pagePolicy(html);
+    expect(policy, `${page} has no CSP meta tag`).toBeDefined();
+    if (!policy) return;
+    const { directives } = policy;
+    const firstScript = html.search(/<script\b/i);
+    expect(firstScript).toBeGreaterThan(policy.index);
+    expect(directives.get("default-src")).toEqual(["'self'"]);
+    expect(directives.get("script-src")).toEqual(scripts);
+    expect(directives.get("connect-src")).toEqual(["'self'"]);
+    expect(directives.get("object-src")).toEqual(["'none'"]);
+    expect(directives.get("base-uri")).toEqual(["'none'"]);
+    expect(directives.get("form-action")).toEqual(["'none'"]);
+    const style = directives.get("style-src") ?? [];
+    expect(style).toContain("'self'");
+    expect(style.filter((s) => s !== "'self'" && s !== "'unsafe-inline'")).toEqual([]);
+    // No wildcard, eval or scheme-wide source anywhere: each would reopen a way out.
+    const everySource = [...directives.values()].flat();
+    expect(everySource.filter((s) => s.includes("*") || s === "'unsafe-eval'" || /^(https?|wss?):$/i.test(s))).toEqual([]);
+    expect(directives.get("script-src")).not.toContain("'unsafe-inline'");
+  });
+
+  it.each(PAGES)("$page loads only scripts its policy allows", ({ page, scripts }) => {
+    const sources = scriptSources(readFileSync(join(outDir, page), "utf8"));
+    expect(sources.length).toBeGreaterThan(0);
+    const blocked = sources.filter((s) => /^(https?:)?\/\//i.test(s) && !scripts.includes(new URL(s, "https://localhost:3000").origin));
+    expect(blocked).toEqual([]);
+  });
+});

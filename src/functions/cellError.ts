@@ -18,11 +18,24 @@ export interface CellError {
   message?: string;
 }
 
+/** Longer than this, a message no longer fits a cell's error tip and buries what to fix. */
+export const MESSAGE_LIMIT = 500;
+
+/**
+ * Messages quote the user's own headers, levels and texts, which can be any length (a header cell
+ * may hold 100,000 characters): long quotations are cut, then the whole message if still too long.
+ */
+function readable(message: string): string {
+  const quoted = message.replace(/"([^"]{61,})"/g, (_, text: string) => `"${text.slice(0, 40)}…"`);
+  return quoted.length > MESSAGE_LIMIT ? `${quoted.slice(0, MESSAGE_LIMIT - 1)}…` : quoted;
+}
+
 export function toCellError(error: unknown): CellError {
-  const message =
+  const message = readable(
     error instanceof EngineError
       ? error.message
-      : `Plumbline could not compute this result (${error instanceof Error ? error.message : String(error)}). Please report it with the data that caused it.`;
+      : `Plumbline could not compute this result (${error instanceof Error ? error.message : String(error)}). Please report it with the data that caused it.`,
+  );
   if (typeof CustomFunctions !== 'undefined' && typeof CustomFunctions.Error === 'function') {
     return new CustomFunctions.Error(CustomFunctions.ErrorCode.invalidValue, message);
   }

@@ -29,6 +29,19 @@ function scalar(value: unknown): unknown {
   return value;
 }
 
+/**
+ * How a rejected setting is quoted: a cell error by its code and long text cut short, so the
+ * message stays readable in the cell's error tip (String() gave "[object Object]" for an error
+ * and echoed a 100,000-character text whole).
+ */
+function shown(value: unknown): string {
+  if (typeof value === 'string') return value.length > 40 ? `${value.slice(0, 40)}…` : value;
+  if (typeof value === 'object' && value !== null) {
+    return 'code' in value && typeof value.code === 'string' ? `the error ${value.code}` : 'a value that is neither a number nor text';
+  }
+  return String(value);
+}
+
 function isUnset(value: unknown): boolean {
   return value === null || value === undefined || value === '';
 }
@@ -45,18 +58,18 @@ export function parseSettings(levelArg: unknown, interceptArg: unknown, sigmaArg
   const settings: FitSettings = {};
   if (!isUnset(level) && level !== 0) {
     if (typeof level !== 'number' || !(level > 0 && level < 1)) {
-      throw new EngineError('bad-setting', `level must be a number between 0 and 1, such as 0.95 for 95%; got ${String(level)}.`);
+      throw new EngineError('bad-setting', `level must be a number between 0 and 1, such as 0.95 for 95%; got ${shown(level)}.`);
     }
     settings.level = level;
   }
   if (!isUnset(intercept)) {
     if (intercept === true || intercept === 1) settings.intercept = true;
     else if (intercept === false || intercept === 0) settings.intercept = false;
-    else throw new EngineError('bad-setting', `intercept must be TRUE or FALSE; got ${String(intercept)}.`);
+    else throw new EngineError('bad-setting', `intercept must be TRUE or FALSE; got ${shown(intercept)}.`);
   }
   if (!isUnset(sigma) && sigma !== 0) {
     if (typeof sigma !== 'number' || !(sigma > 0) || !Number.isFinite(sigma)) {
-      throw new EngineError('bad-setting', `known_sigma must be a positive number, or left empty to estimate σ; got ${String(sigma)}.`);
+      throw new EngineError('bad-setting', `known_sigma must be a positive number, or left empty to estimate σ; got ${shown(sigma)}.`);
     }
     settings.knownSigma = sigma;
   }
@@ -83,6 +96,6 @@ function parseRobust(robust: unknown): CovarianceKind | undefined {
   if (named !== undefined) return named;
   throw new EngineError(
     'bad-setting',
-    `robust must be FALSE (classical standard errors), TRUE (HC3), or one of the texts "HC0", "HC1", "HC3", "classical"; got ${String(robust)}.`,
+    `robust must be FALSE (classical standard errors), TRUE (HC3), or one of the texts "HC0", "HC1", "HC3", "classical"; got ${shown(robust)}.`,
   );
 }

@@ -1,4 +1,5 @@
 import { EngineError } from '../errors';
+import { shortName } from './cells';
 
 export type SourceColumn =
   | { kind: 'numeric'; name: string }
@@ -31,7 +32,7 @@ export function codeCategorical(
     fullCodingLeft = false;
     return { kind: 'categorical', name, levels, reference: keepAll ? undefined : levels[0] };
   });
-  const termNames = columns.flatMap((c) => (c.kind === 'numeric' ? [c.name] : indicatorLevels(c).map((level) => `${c.name}: ${level}`)));
+  const termNames = columns.flatMap((c) => (c.kind === 'numeric' ? [c.name] : indicatorLevels(c).map((level) => `${c.name}: ${shortName(level)}`)));
   const termColumns = columns.flatMap((c, j) => (c.kind === 'numeric' ? [j] : indicatorLevels(c).map(() => j)));
   const x = rows.map((row) => codeRow(row, columns));
   return { columns, termNames, termColumns, x };

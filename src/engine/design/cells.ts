@@ -40,6 +40,16 @@ function errorCell(code: string): Cell {
   return code === '#N/A' ? { kind: 'missing', why: '#N/A' } : { kind: 'error', code };
 }
 
+/**
+ * Headers and levels become term names in result cells, and a cell holds at most 32,767
+ * characters; no readable name needs more than this, so longer ones are cut to it.
+ */
+export const NAME_LIMIT = 1000;
+
+export function shortName(text: string): string {
+  return text.length > NAME_LIMIT ? `${text.slice(0, NAME_LIMIT - 1)}…` : text;
+}
+
 /** How a cell is quoted in a message. */
 export function describeCell(cell: Cell): string {
   switch (cell.kind) {

@@ -1,7 +1,7 @@
 import { EngineError } from '../errors';
 import { INTERCEPT_NAME } from '../fit/design';
 import type { ModelData } from '../types';
-import { type Cell, type CellGrid, classifyCell, describeCell } from './cells';
+import { type Cell, type CellGrid, classifyCell, describeCell, shortName } from './cells';
 import { codeCategorical, type SourceColumn } from './categorical';
 
 export interface FrameInput {
@@ -66,7 +66,7 @@ export function buildModelFrame(input: FrameInput): ModelFrame {
   const columnWithinBlock = input.x.flatMap((block) => Array.from({ length: block[0]?.length ?? 0 }, (_, j) => j));
   const hasHeader = rowCount > 1 && classifyCell(input.y[0][0]).kind === 'text';
   const firstData = hasHeader ? 1 : 0;
-  const responseName = hasHeader ? (classifyCell(input.y[0][0]) as { text: string }).text : 'y';
+  const responseName = hasHeader ? shortName((classifyCell(input.y[0][0]) as { text: string }).text) : 'y';
   const names = xColumns.map((cellAt, j) =>
     headerName(hasHeader ? classifyCell(cellAt(0)) : undefined, j, blockArgument(columnBlocks[j]), columnWithinBlock[j]),
   );
@@ -132,7 +132,7 @@ function valueOf(cell: Cell): number | string {
 
 function headerName(cell: Cell | undefined, j: number, argument: string, column: number): string {
   if (cell === undefined || cell.kind === 'missing') return `x${j + 1}`;
-  if (cell.kind === 'text') return cell.text;
+  if (cell.kind === 'text') return shortName(cell.text);
   throw new EngineError(
     'bad-value',
     `known_y starts with a header but ${argument} row 1, column ${column + 1} holds ${describeCell(cell)}: ` +

@@ -81,6 +81,9 @@ export function collinearity(x: number[][], names?: string[], weights?: number[]
       for (let k = c; k < q; k++) norm2 += rInverse[c * q + k] ** 2;
       rss = 1 / norm2;
     } else {
+      // Aliased on earlier columns is collinear with the rest; skipping the refactorization keeps
+      // a very wide design (16,384 columns over a few rows) from taking minutes.
+      if (qr.aliased[c]) return undefinedTerm(name, 'collinear');
       const last = householderQr(withColumnLast(scaled, c), aliasTolerance(n));
       if (last.aliased[q - 1]) return undefinedTerm(name, 'collinear');
       const size = last.accepted.length;
