@@ -1,4 +1,5 @@
 import type { PaneAnalysis } from '../model/analysis';
+import { WarningList } from './WarningList';
 
 /** What the pane understood of the cells: headers, rows used and skipped, categorical columns. */
 export function DataSummary({ analysis }: { analysis: PaneAnalysis }) {
@@ -18,13 +19,7 @@ export function DataSummary({ analysis }: { analysis: PaneAnalysis }) {
           Categorical: {categorical.map((c) => (c.kind === 'categorical' ? `${c.name} (${c.levels.length} levels, compared with ${c.reference ?? 'zero'})` : '')).join('; ')}.
         </p>
       )}
-      {analysis.warnings.length > 0 && (
-        <ul class="warnings" aria-label="Warnings">
-          {analysis.warnings.map((w) => (
-            <li key={w}>{w}</li>
-          ))}
-        </ul>
-      )}
+      <WarningList warnings={analysis.warnings} />
     </div>
   );
 }

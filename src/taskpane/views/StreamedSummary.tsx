@@ -1,4 +1,5 @@
 import type { StreamedAnalysis } from '../model/streamedAnalysis';
+import { WarningList } from './WarningList';
 
 /** What a streamed read understood: headers, rows used and skipped, and what large data change. */
 export function StreamedSummary({ analysis, dataRows }: { analysis: StreamedAnalysis; dataRows: number }) {
@@ -14,13 +15,7 @@ export function StreamedSummary({ analysis, dataRows }: { analysis: StreamedAnal
       <p class="hint">
         Large data: read in blocks and fitted without keeping the rows. Standard errors are classical, the residual checks are not run, and the report is written as values (use Refresh after the data change).
       </p>
-      {analysis.warnings.length > 0 && (
-        <ul class="warnings" aria-label="Warnings">
-          {analysis.warnings.map((w) => (
-            <li key={w}>{w}</li>
-          ))}
-        </ul>
-      )}
+      <WarningList warnings={analysis.warnings} />
     </div>
   );
 }
