@@ -7,10 +7,13 @@ import { afterAll, describe, expect, it } from 'vitest';
 import { fitModel } from '../../src/engine';
 import { lre, readStrd, STRD_DIR, STRD_NAMES, type StrdName, strdAvailable } from '../support/strd';
 
-/** What careful double-precision Householder QR reaches on each problem (measured by the team). */
+/**
+ * Measured floors: designs with κ above 1e3 are solved in double-double (src/engine/precise), the
+ * rest in double. Filip stays near 8 even in double-double; Norris and Pontius stay in double.
+ */
 const MIN_LRE: Record<StrdName, number> = {
-  Norris: 11, Pontius: 11, NoInt1: 11, NoInt2: 11, Longley: 11, Wampler2: 11,
-  Wampler1: 9, Filip: 7, Wampler3: 5.5, Wampler4: 5.5, Wampler5: 5.5,
+  Norris: 12, Pontius: 11.5, NoInt1: 14, NoInt2: 14, Longley: 14, Wampler2: 13,
+  Wampler1: 14, Filip: 7.5, Wampler3: 13, Wampler4: 13, Wampler5: 13,
 };
 
 interface Row {

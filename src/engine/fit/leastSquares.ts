@@ -1,6 +1,7 @@
 import { type ColumnMajorMatrix, columnView, stableNorm } from '../linalg/columnMajor';
 import { applyQ, applyQTranspose, householderQr, type QrFactorization } from '../linalg/householderQr';
 import { invertUpper, solveUpper } from '../linalg/triangular';
+import { preciseLeastSquares } from '../precise/preciseQr';
 import type { WeightedDesign } from './design';
 
 /**
@@ -41,6 +42,28 @@ export interface LeastSquaresSolution {
   fitted: Float64Array;
 }
 
+/**
+ * Above this estimate of κ(R) double precision may lose more than three of its 16 digits in the
+ * coefficients (forward error ≈ κ·u, Björck 1996 §2.4), and the estimates are recomputed in
+ * double-double (see precise/preciseQr.ts).
+ */
+export const PRECISE_CONDITION_THRESHOLD = 1e3;
+
+/**
+ * ‖R‖_F·‖R⁻¹‖_F, within a factor rank of κ₂. R⁻¹ is needed for the covariance anyway, so the
+ * check costs O(rank²) on top of the O(n·rank²) factorization. The diagonal ratio alone is not
+ * enough: for Wampler's quintic it is 234 while κ₂ exceeds 1e6.
+ */
+export function frobeniusCondition(r: Float64Array, rInverse: Float64Array, rank: number): number {
+  let a = 0;
+  let b = 0;
+  for (let i = 0; i < rank * rank; i++) {
+    a += r[i] * r[i];
+    b += rInverse[i] * rInverse[i];
+  }
+  return Math.sqrt(a) * Math.sqrt(b);
+}
+
 export function solveLeastSquares(design: WeightedDesign): LeastSquaresSolution {
   const { matrix, y } = design;
   const n = matrix.rows;
@@ -70,6 +93,24 @@ export function solveLeastSquares(design: WeightedDesign): LeastSquaresSolution 
 
   let scaledRss = 0;
   for (let i = rank; i < n; i++) scaledRss += qty[i] * qty[i];
+  let r = qr.r;
+  let rInverse = invertUpper(qr.r, rank);
+  if (frobeniusCondition(qr.r, rInverse, rank) > PRECISE_CONDITION_THRESHOLD) {
+    // The double QR's reflectors stay in use for residuals and diagnostics: they are accurate
+    // to double precision in what they produce (Qᵀ applied to vectors), unlike the solve.
+    const precise = preciseLeastSquares(
+      qr.accepted.map((col) => columnView(matrix, col)),
+      qr.accepted.map((col) => columnScales[col]),
+      y,
+      yScale,
+    );
+    qr.accepted.forEach((col, a) => {
+      coefficients[col] = precise.coefficients[a];
+    });
+    r = precise.r;
+    rInverse = precise.rInverse;
+    scaledRss = precise.scaledRss;
+  }
   const perfectFit = Math.sqrt(scaledRss) <= PERFECT_FIT_TOLERANCE;
   if (perfectFit) scaledRss = 0;
 
@@ -86,11 +127,11 @@ export function solveLeastSquares(design: WeightedDesign): LeastSquaresSolution 
 
   return {
     design,
-    qr,
+    qr: r === qr.r ? qr : { ...qr, r },
     columnScales,
     yScale,
     coefficients,
-    rInverse: invertUpper(qr.r, rank),
+    rInverse,
     scaledRss,
     perfectFit,
     residuals,
