@@ -1,6 +1,7 @@
 import { cellAddress, columnLetters, formatAbsolute, type RangeRef } from '../../addressing/a1';
 import type { PaneChoices, ResolvedRanges } from './choices';
 import type { PaneAnalysis } from './analysis';
+import { modelEquation, settingsRows } from './reportParts';
 import { splitUnit } from './sentences';
 
 /** One cell the report writes. Labels are always written as text, never as formulas. */
@@ -126,21 +127,18 @@ export function planReport({ sheetName, ranges, choices, analysis, writtenAt }: 
   label(0, 0, `${REPORT_TITLE_PREFIX}: ${frame.responseName}`, true);
   label(1, 0, `Written ${date}. ${specification}. Every number below is a live formula over those cells.`);
   label(3, 0, 'Settings: edit these cells and every result below recalculates', true);
-  label(4, 0, 'Confidence level');
-  cells.push({ row: 4, column: 1, kind: 'value', value: choices.level });
-  label(5, 0, 'Intercept');
-  cells.push({ row: 5, column: 1, kind: 'value', value: choices.intercept });
-  label(6, 0, 'Known sigma (empty: estimated)');
-  cells.push({ row: 6, column: 1, kind: 'value', value: analysis.settings.knownSigma ?? '' });
-  label(7, 0, 'Standard errors (classical, HC3, HC1 or HC0)');
-  label(7, 1, choices.robust);
-  label(8, 0, 'Weights');
-  label(8, 1, ranges.weights === undefined ? 'none' : formatAbsolute(ranges.weights));
+  cells.push(
+    ...settingsRows(4, {
+      level: choices.level,
+      intercept: choices.intercept,
+      knownSigma: analysis.settings.knownSigma,
+      standardErrors: { label: 'Standard errors (classical, HC3, HC1 or HC0)', value: choices.robust },
+      weights: ranges.weights === undefined ? 'none' : formatAbsolute(ranges.weights),
+    }),
+  );
 
   label(10, 0, 'The model', true);
-  const terms = frame.termNames.filter((t) => t !== 'Intercept');
-  const equation = [choices.intercept ? 'b0' : undefined, ...terms.map((t, j) => `b${j + 1}·[${t}]`)].filter((s) => s !== undefined).join(' + ');
-  label(11, 0, `[${frame.responseName}] = ${equation} + error`);
+  label(11, 0, modelEquation(frame.responseName, frame.termNames, choices.intercept));
   label(12, 0, 'The b values are the Estimates in the next table, in the same order.');
 
   let row = 14;

@@ -7,6 +7,7 @@ import { predictGrid } from '../../cellGrids/predictGrid';
 import { termsGrid } from '../../cellGrids/termsGrid';
 import type { PaneChoices, ResolvedRanges } from './choices';
 import { decimalsFor, P_VALUE_FORMAT, REPORT_TITLE_PREFIX, type ReportCell, type ReportFormat, type ReportPlan } from './reportPlan';
+import { modelEquation, settingsRows } from './reportParts';
 import type { StreamedAnalysis } from './streamedAnalysis';
 import type { StreamedPredictions } from './streamedPredict';
 
@@ -56,21 +57,19 @@ export function planValuesReport({ sheetName, ranges, choices, analysis, predict
   label(2, 0, valuesNote(dataRows), true);
 
   label(4, 0, 'Settings used (change them in the pane, then Refresh)', true);
-  label(5, 0, 'Confidence level');
-  cells.push({ row: 5, column: 1, kind: 'value', value: choices.level });
-  label(6, 0, 'Intercept');
-  cells.push({ row: 6, column: 1, kind: 'value', value: choices.intercept });
-  label(7, 0, 'Known sigma (empty: estimated)');
-  cells.push({ row: 7, column: 1, kind: 'value', value: analysis.settings.knownSigma ?? '' });
-  label(8, 0, 'Standard errors');
-  label(8, 1, 'classical');
-  label(9, 0, 'Weights');
-  label(9, 1, ranges.weights === undefined ? 'none' : formatAbsolute(ranges.weights));
+  cells.push(
+    ...settingsRows(5, {
+      level: choices.level,
+      intercept: choices.intercept,
+      knownSigma: analysis.settings.knownSigma,
+      // Robust errors need every row at once, so a streamed fit is always classical.
+      standardErrors: { label: 'Standard errors', value: 'classical' },
+      weights: ranges.weights === undefined ? 'none' : formatAbsolute(ranges.weights),
+    }),
+  );
 
   label(11, 0, 'The model', true);
-  const terms = fit.terms.map((t) => t.name).filter((t) => t !== 'Intercept');
-  const equation = [choices.intercept ? 'b0' : undefined, ...terms.map((t, j) => `b${j + 1}·[${t}]`)].filter((s) => s !== undefined).join(' + ');
-  label(12, 0, `[${header.responseName}] = ${equation} + error`);
+  label(12, 0, modelEquation(header.responseName, fit.terms.map((t) => t.name), choices.intercept));
 
   let row = 14;
   label(row, 0, 'Which terms matter?', true);

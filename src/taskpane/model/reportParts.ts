@@ -1,0 +1,31 @@
+import type { ReportCell } from './reportPlan';
+
+/**
+ * Pieces both report kinds write alike: the settings rows (label in A, value in B) and the model
+ * equation with the user's column names.
+ */
+export function settingsRows(
+  top: number,
+  settings: { level: number; intercept: boolean; knownSigma: number | undefined; standardErrors: { label: string; value: string }; weights: string },
+): ReportCell[] {
+  const label = (row: number, column: number, text: string): ReportCell => ({ row, column, kind: 'label', text, bold: false });
+  return [
+    label(top, 0, 'Confidence level'),
+    { row: top, column: 1, kind: 'value', value: settings.level },
+    label(top + 1, 0, 'Intercept'),
+    { row: top + 1, column: 1, kind: 'value', value: settings.intercept },
+    label(top + 2, 0, 'Known sigma (empty: estimated)'),
+    { row: top + 2, column: 1, kind: 'value', value: settings.knownSigma ?? '' },
+    label(top + 3, 0, settings.standardErrors.label),
+    label(top + 3, 1, settings.standardErrors.value),
+    label(top + 4, 0, 'Weights'),
+    label(top + 4, 1, settings.weights),
+  ];
+}
+
+/** "[y] = b0 + b1·[x1] + … + error", the b's numbered in the order of the term table. */
+export function modelEquation(responseName: string, termNames: readonly string[], intercept: boolean): string {
+  const predictors = termNames.filter((t) => t !== 'Intercept');
+  const parts = [...(intercept ? ['b0'] : []), ...predictors.map((t, j) => `b${j + 1}·[${t}]`)];
+  return `[${responseName}] = ${parts.join(' + ')} + error`;
+}
