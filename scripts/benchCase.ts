@@ -5,6 +5,7 @@ import { readFileSync, writeFileSync } from 'node:fs';
 import { Matrix, inverse, solve } from 'ml-matrix';
 import MultivariateLinearRegression from 'ml-regression-multivariate-linear';
 import { fitAccumulated, fitModel, modelCache, RegressionAccumulator } from '../src/engine';
+import { generateColumns } from './benchData';
 
 type Method = 'engine' | 'streaming' | 'normal-equations' | 'regression-package';
 const [method, nText, pText, repeatsText] = process.argv.slice(2) as [Method, string, string, string];
@@ -12,27 +13,6 @@ const n = Number(nText);
 const p = Number(pText);
 const repeats = Number(repeatsText);
 const BLOCK_ROWS = 20_000;
-
-/** A seeded, well-conditioned design: y = 1 + Σ xⱼ·(j+1)/p + noise. */
-function generateColumns(n: number): { x: Float64Array; y: Float64Array } {
-  let state = 12345;
-  const uniform = () => {
-    state = (Math.imul(state, 1103515245) + 12345) >>> 0;
-    return state / 4294967296 - 0.5;
-  };
-  const x = new Float64Array(n * p);
-  const y = new Float64Array(n);
-  for (let i = 0; i < n; i++) {
-    let value = 1 + uniform();
-    for (let j = 0; j < p; j++) {
-      const v = uniform();
-      x[j * n + i] = v;
-      value += (v * (j + 1)) / p;
-    }
-    y[i] = value;
-  }
-  return { x, y };
-}
 
 function rows(x: Float64Array, n: number): number[][] {
   return Array.from({ length: n }, (_, i) => Array.from({ length: p }, (_, j) => x[j * n + i]));
@@ -52,11 +32,16 @@ function runOnce(data: { x: Float64Array; y: Float64Array }, arrays: { x: number
     }
     case 'streaming': {
       const accumulator = new RegressionAccumulator(p, true);
+      // One pair of block buffers, refilled for each block, as a reader of sheet blocks would.
+      const xBuffer = new Float64Array(BLOCK_ROWS * p);
+      const yBuffer = new Float64Array(BLOCK_ROWS);
       for (let start = 0; start < n; start += BLOCK_ROWS) {
         const count = Math.min(BLOCK_ROWS, n - start);
-        const x = new Float64Array(count * p);
+        const x = xBuffer.subarray(0, count * p);
         for (let j = 0; j < p; j++) x.set(data.x.subarray(j * n + start, j * n + start + count), j * count);
-        accumulator.addBlock({ rows: count, x, y: data.y.slice(start, start + count) });
+        const y = yBuffer.subarray(0, count);
+        y.set(data.y.subarray(start, start + count));
+        accumulator.addBlock({ rows: count, x, y });
       }
       const fit = fitAccumulated(accumulator.result()).fit;
       return fit.terms[1].estimate + fit.terms[1].standardError;
@@ -79,9 +64,9 @@ function runOnce(data: { x: Float64Array; y: Float64Array }, arrays: { x: number
 }
 
 // One untimed run on a small problem first, so every method is timed with its code compiled.
-const warmUp = generateColumns(2000);
+const warmUp = generateColumns(2000, p);
 runOnce(warmUp, method === 'streaming' ? undefined : { x: rows(warmUp.x, 2000), y: Array.from(warmUp.y) }, 2000);
-const data = generateColumns(n);
+const data = generateColumns(n, p);
 const arrays = method === 'streaming' ? undefined : { x: rows(data.x, n), y: Array.from(data.y) };
 const inputBytes = method === 'streaming' ? data.x.byteLength + data.y.byteLength : (n * (p + 1) * 8);
 (globalThis as { gc?: () => void }).gc?.();

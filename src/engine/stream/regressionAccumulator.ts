@@ -105,13 +105,23 @@ export class RegressionAccumulator {
     for (let j = 0; j < this.predictors; j++) {
       const source = j * rows + start;
       const target = (j + offset) * count;
-      for (let i = 0; i < count; i++) {
-        const v = x[source + i];
-        if (!Number.isFinite(v)) throw new EngineError('non-finite', `Row ${this.n + start + i + 1}, predictor ${j + 1} is ${v}; it must be a finite number.`);
-        work[target + i] = weights === undefined ? v : v * Math.sqrt(weights[start + i]);
-      }
+      if (weights === undefined) work.set(x.subarray(source, source + count), target);
+      else for (let i = 0; i < count; i++) work[target + i] = x[source + i] * Math.sqrt(weights[start + i]);
     }
     foldBlock(this.r, size, work, count);
+    // A NaN or infinity anywhere in the chunk spreads into R, so one look at R replaces a check
+    // of every value; the chunk's own rows are searched only to name the culprit.
+    if (!isFiniteArray(this.r)) this.reportNonFinite(x, rows, start, count);
+  }
+
+  private reportNonFinite(x: Float64Array, rows: number, start: number, count: number): never {
+    for (let i = 0; i < count; i++) {
+      for (let j = 0; j < this.predictors; j++) {
+        const v = x[j * rows + start + i];
+        if (!Number.isFinite(v)) throw new EngineError('non-finite', `Row ${this.n + start + i + 1}, predictor ${j + 1} is ${v}; it must be a finite number.`);
+      }
+    }
+    throw new EngineError('non-finite', `Rows ${this.n + start + 1} to ${this.n + start + count} overflow double precision; rescale the data.`);
   }
 
   result(): AccumulatedRows {
@@ -127,4 +137,9 @@ export class RegressionAccumulator {
       weighted: this.weighted,
     };
   }
+}
+
+function isFiniteArray(values: Float64Array): boolean {
+  for (let i = 0; i < values.length; i++) if (!Number.isFinite(values[i])) return false;
+  return true;
 }

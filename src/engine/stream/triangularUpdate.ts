@@ -6,58 +6,67 @@
 export function foldBlock(r: Float64Array, size: number, block: Float64Array, rows: number): void {
   for (let j = 0; j < size; j++) {
     const col = j * rows;
-    const norm = columnNorm(r[j * size + j], block, col, rows);
+    const diagonal = j * size + j;
+    const norm = columnNorm(r[diagonal], block, col, rows);
     if (norm === 0) continue;
-    if (norm === Math.abs(r[j * size + j]) && blockColumnIsZero(block, col, rows)) continue;
-    const alpha = r[j * size + j];
+    if (norm === Math.abs(r[diagonal]) && blockColumnIsZero(block, col, rows)) continue;
+    const alpha = r[diagonal];
     const beta = alpha >= 0 ? -norm : norm;
     // v = (1 at R's row j; block[:, j] / (alpha − beta)), τ = (beta − alpha)/beta.
     const inv = 1 / (alpha - beta);
     const tau = (beta - alpha) / beta;
     for (let i = 0; i < rows; i++) block[col + i] *= inv;
-    r[j * size + j] = beta;
-    // Columns are updated two at a time, and each sweep over the rows finishes the previous pair
-    // while forming the dot products of the next: the block is read about once per pair.
-    let pending1 = -1;
-    let pending2 = -1;
-    let scale1 = 0;
-    let scale2 = 0;
-    for (let k = j + 1; k < size || pending1 >= 0; k += 2) {
-      const k1 = k < size ? k : -1;
-      const k2 = k + 1 < size ? k + 1 : -1;
-      let dot1 = k1 >= 0 ? r[j * size + k1] : 0;
-      let dot2 = k2 >= 0 ? r[j * size + k2] : 0;
-      const t1 = k1 * rows;
-      const t2 = k2 * rows;
-      const p1 = pending1 * rows;
-      const p2 = pending2 * rows;
-      if (pending1 >= 0 && pending2 >= 0 && k2 >= 0) {
-        for (let i = 0; i < rows; i++) {
-          const v = block[col + i];
-          block[p1 + i] -= scale1 * v;
-          block[p2 + i] -= scale2 * v;
-          dot1 += v * block[t1 + i];
-          dot2 += v * block[t2 + i];
-        }
-      } else {
-        if (pending1 >= 0) for (let i = 0; i < rows; i++) block[p1 + i] -= scale1 * block[col + i];
-        if (pending2 >= 0) for (let i = 0; i < rows; i++) block[p2 + i] -= scale2 * block[col + i];
-        if (k1 >= 0) for (let i = 0; i < rows; i++) dot1 += block[col + i] * block[t1 + i];
-        if (k2 >= 0) for (let i = 0; i < rows; i++) dot2 += block[col + i] * block[t2 + i];
-      }
-      pending1 = k1;
-      pending2 = k2;
-      if (k1 >= 0) {
-        scale1 = dot1 * tau;
-        r[j * size + k1] -= scale1;
-      }
-      if (k2 >= 0) {
-        scale2 = dot2 * tau;
-        r[j * size + k2] -= scale2;
-      }
-    }
+    r[diagonal] = beta;
+    let k = j + 1;
+    // Four columns per sweep: each pass over v feeds four dot products, then four updates, which
+    // keeps the loads per multiply-add low enough for the loop to run at arithmetic speed.
+    for (; k + 3 < size; k += 4) reflectFourColumns(r, j * size + k, block, col, k * rows, rows, tau);
+    for (; k < size; k++) reflectColumn(r, j * size + k, block, col, k * rows, rows, tau);
     for (let i = 0; i < rows; i++) block[col + i] = 0;
   }
+}
+
+/** Applies I − τvvᵀ (v from block column `vStart`, 1 at R's row) to four adjacent columns. */
+function reflectFourColumns(r: Float64Array, rStart: number, block: Float64Array, vStart: number, target: number, rows: number, tau: number): void {
+  const a = target;
+  const b = a + rows;
+  const c = b + rows;
+  const d = c + rows;
+  let s0 = r[rStart];
+  let s1 = r[rStart + 1];
+  let s2 = r[rStart + 2];
+  let s3 = r[rStart + 3];
+  for (let i = 0; i < rows; i++) {
+    const v = block[vStart + i];
+    s0 += v * block[a + i];
+    s1 += v * block[b + i];
+    s2 += v * block[c + i];
+    s3 += v * block[d + i];
+  }
+  s0 *= tau;
+  s1 *= tau;
+  s2 *= tau;
+  s3 *= tau;
+  r[rStart] -= s0;
+  r[rStart + 1] -= s1;
+  r[rStart + 2] -= s2;
+  r[rStart + 3] -= s3;
+  for (let i = 0; i < rows; i++) {
+    const v = block[vStart + i];
+    block[a + i] -= s0 * v;
+    block[b + i] -= s1 * v;
+    block[c + i] -= s2 * v;
+    block[d + i] -= s3 * v;
+  }
+}
+
+/** Applies I − τvvᵀ to one column. */
+function reflectColumn(r: Float64Array, rIndex: number, block: Float64Array, vStart: number, target: number, rows: number, tau: number): void {
+  let s = r[rIndex];
+  for (let i = 0; i < rows; i++) s += block[vStart + i] * block[target + i];
+  s *= tau;
+  r[rIndex] -= s;
+  for (let i = 0; i < rows; i++) block[target + i] -= s * block[vStart + i];
 }
 
 function blockColumnIsZero(block: Float64Array, col: number, rows: number): boolean {

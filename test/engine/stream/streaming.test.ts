@@ -100,4 +100,21 @@ describe('streamed fits agree with in-memory fits', () => {
     accumulator.addBlock({ rows: 3, x: Float64Array.from([1, 2, 3]), y: Float64Array.from([1, 2, 4]) });
     expect(() => fitAccumulated(accumulator.result(), { covariance: 'HC3' })).toThrow(/classical/);
   });
+
+  it('names the row and predictor of a non-finite value, wherever in the block it falls', () => {
+    const rows = 600;
+    for (const [row, value] of [[0, Number.NaN], [300, Number.POSITIVE_INFINITY], [599, Number.NEGATIVE_INFINITY]] as const) {
+      const accumulator = new RegressionAccumulator(2, true);
+      accumulator.addBlock({ rows: 10, x: new Float64Array(20).fill(1).map((v, i) => v + i), y: new Float64Array(10).fill(1) });
+      const x = Float64Array.from({ length: 2 * rows }, (_, i) => Math.sin(i));
+      x[rows + row] = value;
+      expect(() => accumulator.addBlock({ rows, x, y: new Float64Array(rows).fill(2) })).toThrow(`Row ${10 + row + 1}, predictor 2 is ${value}`);
+    }
+  });
+
+  it('says when finite values overflow double precision', () => {
+    const accumulator = new RegressionAccumulator(2, true);
+    const x = Float64Array.from([1.5e308, -1.5e308, 1.7e308, 1, 2, 3]);
+    expect(() => accumulator.addBlock({ rows: 3, x, y: Float64Array.from([1, 1, 2]) })).toThrow(/overflow double precision/);
+  });
 });
