@@ -92,9 +92,14 @@ export function readStrd(name: StrdName): StrdProblem {
 }
 
 /** Log relative error, NIST's measure of correct significant digits, capped at 15. */
-export function lre(estimate: number, certified: number): number {
+/**
+ * NIST's log relative error, capped at 15. A certified value of exactly 0 (Wampler1's standard
+ * deviations) has no relative error, so there the error is taken relative to `zeroScale`, the
+ * data's scale (|est| ≤ 1e-13·scale of y reads as LRE 13).
+ */
+export function lre(estimate: number, certified: number, zeroScale = 1): number {
   if (estimate === certified) return 15;
-  const err = certified === 0 ? Math.abs(estimate) : Math.abs(estimate - certified) / Math.abs(certified);
+  const err = certified === 0 ? Math.abs(estimate) / zeroScale : Math.abs(estimate - certified) / Math.abs(certified);
   if (!Number.isFinite(err)) return 0;
   return Math.min(15, Math.max(0, -Math.log10(err)));
 }

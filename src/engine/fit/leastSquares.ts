@@ -1,6 +1,7 @@
 import { type ColumnMajorMatrix, columnView, stableNorm } from '../linalg/columnMajor';
 import { applyQ, applyQTranspose, householderQr, type QrFactorization } from '../linalg/householderQr';
 import { invertUpper, solveUpper } from '../linalg/triangular';
+import { type ExtendedColumn, recognisePowers } from '../precise/exactPowers';
 import { preciseLeastSquares } from '../precise/preciseQr';
 import type { WeightedDesign } from './design';
 
@@ -50,6 +51,24 @@ export interface LeastSquaresSolution {
 export const PRECISE_CONDITION_THRESHOLD = 1e3;
 
 /**
+ * The relative error allowed in σ̂ before the double-double path takes over: RSS comes from
+ * Qᵀy, whose entries carry absolute errors near κ·u·‖y‖, so ‖r‖ is good to about κ·u·‖y‖/‖r‖.
+ * That is large when the residuals are tiny beside y (a large level with little noise, NIST's
+ * Norris and Pontius), and the coefficients that carry such a level lose as many digits.
+ */
+export const RESIDUAL_ACCURACY_TARGET = 1e-13;
+
+const UNIT_ROUNDOFF = 2 ** -53;
+
+/** Whether double precision may fall short of 13 digits in the coefficients or σ̂. */
+export function needsExtendedPrecision(condition: number, scaledResidualNorm: number): boolean {
+  return condition > PRECISE_CONDITION_THRESHOLD || UNIT_ROUNDOFF * condition > RESIDUAL_ACCURACY_TARGET * scaledResidualNorm;
+}
+
+/** 'double' skips the check and the extended-precision path, for measuring what they cost. */
+export type Precision = 'auto' | 'double';
+
+/**
  * ‖R‖_F·‖R⁻¹‖_F, within a factor rank of κ₂. R⁻¹ is needed for the covariance anyway, so the
  * check costs O(rank²) on top of the O(n·rank²) factorization. The diagonal ratio alone is not
  * enough: for Wampler's quintic it is 234 while κ₂ exceeds 1e6.
@@ -64,7 +83,7 @@ export function frobeniusCondition(r: Float64Array, rInverse: Float64Array, rank
   return Math.sqrt(a) * Math.sqrt(b);
 }
 
-export function solveLeastSquares(design: WeightedDesign): LeastSquaresSolution {
+export function solveLeastSquares(design: WeightedDesign, precision: Precision = 'auto'): LeastSquaresSolution {
   const { matrix, y } = design;
   const n = matrix.rows;
   const columnScales = new Float64Array(matrix.cols);
@@ -95,15 +114,10 @@ export function solveLeastSquares(design: WeightedDesign): LeastSquaresSolution 
   for (let i = rank; i < n; i++) scaledRss += qty[i] * qty[i];
   let r = qr.r;
   let rInverse = invertUpper(qr.r, rank);
-  if (frobeniusCondition(qr.r, rInverse, rank) > PRECISE_CONDITION_THRESHOLD) {
+  if (precision === 'auto' && needsExtendedPrecision(frobeniusCondition(qr.r, rInverse, rank), Math.sqrt(scaledRss))) {
     // The double QR's reflectors stay in use for residuals and diagnostics: they are accurate
     // to double precision in what they produce (Qᵀ applied to vectors), unlike the solve.
-    const precise = preciseLeastSquares(
-      qr.accepted.map((col) => columnView(matrix, col)),
-      qr.accepted.map((col) => columnScales[col]),
-      y,
-      yScale,
-    );
+    const precise = preciseLeastSquares(extendedColumns(design, qr.accepted), qr.accepted.map((col) => columnScales[col]), y, yScale);
     qr.accepted.forEach((col, a) => {
       coefficients[col] = precise.coefficients[a];
     });
@@ -137,4 +151,16 @@ export function solveLeastSquares(design: WeightedDesign): LeastSquaresSolution 
     residuals,
     fitted,
   };
+}
+
+/**
+ * The accepted columns for the double-double solve: those of an unweighted design that are
+ * powers of another column are taken as the exact powers (see exactPowers.ts). A weighted
+ * design's columns already carry the rounding of √w, so they are used as they stand.
+ */
+function extendedColumns(design: WeightedDesign, accepted: readonly number[]): (Float64Array | ExtendedColumn)[] {
+  const columns = accepted.map((col) => columnView(design.matrix, col));
+  if (design.rootWeights !== undefined) return columns;
+  const powers = recognisePowers(columns);
+  return columns.map((column, a) => powers[a] ?? column);
 }

@@ -1,4 +1,5 @@
 import { ddAdd, ddDiv, ddMul, ddSqrt, pair } from './doubleDouble';
+import type { ExtendedColumn } from './exactPowers';
 
 /**
  * Householder least squares carried out entirely in double-double arithmetic (Hida, Li & Bailey
@@ -7,8 +8,9 @@ import { ddAdd, ddDiv, ddMul, ddSqrt, pair } from './doubleDouble';
  * about κ·u (κ² · residual term for the SDs); with u ≈ 1e-32 even κ ≈ 1e10 leaves 20 digits, and
  * the results rounded to double are then correct to double precision.
  *
- * The input is the design as doubles, exactly as given, with its column scales and y's scale:
- * the scaled entries x/s are formed in double-double so that scaling adds no rounding of its own.
+ * The input is the design as given (doubles, or double-double where a column is known more
+ * exactly than double, see exactPowers.ts), with its column scales and y's scale: the scaled
+ * entries x/s are formed in double-double so that scaling adds no rounding of its own.
  */
 export interface PreciseLeastSquares {
   /** Coefficients in the data's units (b·yScale/s, formed in double-double), rounded to double. */
@@ -22,11 +24,12 @@ export interface PreciseLeastSquares {
 }
 
 /**
- * `columns` are the accepted design columns (each of length n) and `scales` their norms; the
- * caller has already decided which columns are aliased, so this never drops one.
+ * `columns` are the accepted design columns (each of length n; a Float64Array is exact as it
+ * stands) and `scales` their norms; the caller has already decided which columns are aliased, so
+ * this never drops one.
  */
 export function preciseLeastSquares(
-  columns: readonly Float64Array[],
+  columns: readonly (Float64Array | ExtendedColumn)[],
   scales: ArrayLike<number>,
   y: Float64Array,
   yScale: number,
@@ -39,10 +42,12 @@ export function preciseLeastSquares(
   const lo = new Float64Array(n * width);
   const t = pair();
   for (let j = 0; j < width; j++) {
-    const source = j < q ? columns[j] : y;
+    const column = j < q ? columns[j] : y;
+    const source = column instanceof Float64Array ? column : column.hi;
+    const low = column instanceof Float64Array ? undefined : column.lo;
     const s = j < q ? scales[j] : yScale;
     for (let i = 0; i < n; i++) {
-      ddDiv(source[i], 0, s, 0, t);
+      ddDiv(source[i], low === undefined ? 0 : low[i], s, 0, t);
       hi[j * n + i] = t[0];
       lo[j * n + i] = t[1];
     }
