@@ -62,7 +62,10 @@ const UNIT_ROUNDOFF = 2 ** -53;
 
 /** Whether double precision may fall short of 13 digits in the coefficients or σ̂. */
 export function needsExtendedPrecision(condition: number, scaledResidualNorm: number): boolean {
-  return condition > PRECISE_CONDITION_THRESHOLD || UNIT_ROUNDOFF * condition > RESIDUAL_ACCURACY_TARGET * scaledResidualNorm;
+  if (condition > PRECISE_CONDITION_THRESHOLD) return true;
+  // An exact fit reports σ̂ = 0: there is no relative accuracy of σ̂ to protect.
+  if (scaledResidualNorm <= PERFECT_FIT_TOLERANCE) return false;
+  return UNIT_ROUNDOFF * condition > RESIDUAL_ACCURACY_TARGET * scaledResidualNorm;
 }
 
 /** 'double' skips the check and the extended-precision path, for measuring what they cost. */

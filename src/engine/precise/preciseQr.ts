@@ -45,9 +45,10 @@ export function preciseLeastSquares(
     const column = j < q ? columns[j] : y;
     const source = column instanceof Float64Array ? column : column.hi;
     const low = column instanceof Float64Array ? undefined : column.lo;
-    const s = j < q ? scales[j] : yScale;
+    const scale = splitScale(j < q ? scales[j] : yScale);
     for (let i = 0; i < n; i++) {
-      ddDiv(source[i], low === undefined ? 0 : low[i], s, 0, t);
+      const lowPart = low === undefined ? 0 : timesPowerOfTwo(low[i], -scale.exponent);
+      ddDiv(timesPowerOfTwo(source[i], -scale.exponent), lowPart, scale.mantissa, 0, t);
       hi[j * n + i] = t[0];
       lo[j * n + i] = t[1];
     }
@@ -158,12 +159,30 @@ export function preciseLeastSquares(
   const round = (h: Float64Array, l: Float64Array) => Float64Array.from(h, (v, i) => v + l[i]);
   return {
     coefficients: Float64Array.from(bHi, (v, i) => {
-      ddMul(v, bLo[i], yScale, 0, t);
-      ddDiv(t[0], t[1], scales[i], 0, t);
-      return t[0] + t[1];
+      const column = splitScale(scales[i]);
+      const response = splitScale(yScale);
+      ddMul(v, bLo[i], response.mantissa, 0, t);
+      ddDiv(t[0], t[1], column.mantissa, 0, t);
+      return timesPowerOfTwo(t[0] + t[1], response.exponent - column.exponent);
     }),
     r: round(rHi, rLo),
     rInverse: round(invHi, invLo),
     scaledRss,
   };
+}
+
+/**
+ * s = mantissa·2^exponent with the mantissa near 1. Scales span 1e±300, where Dekker's
+ * splitting overflows; the power of two is applied exactly apart, and only the mantissa enters
+ * double-double arithmetic.
+ */
+function splitScale(s: number): { mantissa: number; exponent: number } {
+  const exponent = Math.round(Math.log2(s));
+  return { mantissa: timesPowerOfTwo(s, -exponent), exponent };
+}
+
+/** x·2^k, exact whenever x and the result are normal: two halves keep each factor finite. */
+function timesPowerOfTwo(x: number, k: number): number {
+  const half = Math.trunc(k / 2);
+  return x * 2 ** half * 2 ** (k - half);
 }

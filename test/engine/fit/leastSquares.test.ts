@@ -19,7 +19,9 @@ describe('needsExtendedPrecision', () => {
     // Norris measures κ ≈ 3.2 and ‖r‖/‖y‖ ≈ 1.6e-3; the benchmark's random designs κ ≤ 51 and ‖r‖/‖y‖ ≥ 0.18.
     expect(needsExtendedPrecision(3.2, 1.6e-3)).toBe(true);
     expect(needsExtendedPrecision(51, 0.18)).toBe(false);
-    expect(needsExtendedPrecision(1, 0)).toBe(true);
+    // An exact fit has no σ̂ to protect; only its condition number counts.
+    expect(needsExtendedPrecision(1, 0)).toBe(false);
+    expect(needsExtendedPrecision(2e3, 0)).toBe(true);
   });
 });
 
