@@ -183,4 +183,36 @@ describe.skipIf(!available)('large data in the pane', () => {
     fit.terms.forEach((t, i) => expectClose(shown[i][1], t.estimate));
     expect(Math.abs((shown[0][1] as number) - engineFit().terms[0].estimate)).toBeGreaterThan(1e-6);
   });
+
+  it('refuses a refresh that would write over a cell typed below the residual table, and keeps the cell', async () => {
+    const setCell = (sheet: string, address: string, value: unknown) =>
+      page().evaluate(
+        ({ sheet, address, value }) =>
+          Excel.run(async (context) => {
+            context.workbook.worksheets.getItem(sheet).getRange(address).values = [[value]];
+            await context.sync();
+          }),
+        { sheet, address, value },
+      );
+    const refresh = () => page().getByRole('button', { name: 'Refresh the values report "Plumbline report"' }).click();
+    // A blank response drops a row, so the residual table ends one row earlier (header in row 5).
+    await setCell('Big', 'A3', '');
+    await refresh();
+    await expect.poll(() => page().locator('.done').innerText(), { timeout: 40_000 }).toContain('refreshed');
+    const freedRow = 5 + ROWS;
+    await setCell('Plumbline report', `K${freedRow}`, 'my note');
+    await setCell('Big', 'A3', 7);
+    await refresh();
+    await expect.poll(() => page().locator('.problem').innerText(), { timeout: 40_000 }).toContain(`Refresh would write over cells filled since the report was written (K${freedRow}:M${freedRow})`);
+    const kept = await page().evaluate(
+      (address) =>
+        Excel.run(async (context) => {
+          const range = context.workbook.worksheets.getItem('Plumbline report').getRange(address).load('values');
+          await context.sync();
+          return range.values[0][0];
+        }),
+      `K${freedRow}`,
+    );
+    expect(kept).toBe('my note');
+  });
 });
