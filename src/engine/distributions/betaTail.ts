@@ -1,4 +1,7 @@
-import { betaContinuedFraction, logBetaPrefactor } from './special';
+import { ddAdd, ddDiv, ddMul, pair, twoProd, twoSum } from '../precise/doubleDouble';
+import { logBetaKernel } from './incompleteBeta/kernel';
+import { type BetaPoint, pointFromOdds } from './incompleteBeta/point';
+import { incompleteBeta } from './incompleteBeta/ratio';
 
 export interface BetaTailParts {
   /** P(F > f) for F with (df1, df2) degrees of freedom. */
@@ -10,14 +13,42 @@ export interface BetaTailParts {
   logKernel: number;
 }
 
+/** Beyond this, b·f is too large for the exact-product splitting (and λ ≈ a·y needs no care). */
+const LARGEST_EXACT_PRODUCT = 1e290;
+
+/**
+ * λ = a − (a+b)·x = a·b·(f − 1)/(a + b·f), the F point's distance from the beta mean that the
+ * large-parameter methods need, evaluated in double-double and rounded once. Its condition number
+ * in the tail reaches about 2·|log P| (≈ 1400 at P = 1e-300), so the 2–5e-16 left by forming it
+ * in plain doubles cost up to 7e-13 relative at df = (3908.5, 914614); rounded once it costs at
+ * most 1.5e-13. Where b·f is huge, a·y − b·x has no cancellation and serves directly.
+ */
+function fMeanDeviation(f: number, a: number, b: number, p: BetaPoint): number {
+  if (!(b * f < LARGEST_EXACT_PRODUCT)) return a * p.y - b * p.x;
+  const t = pair();
+  twoSum(f, -1, t); // f − 1
+  const gHi = t[0];
+  const gLo = t[1];
+  twoProd(a, b, t);
+  ddMul(t[0], t[1], gHi, gLo, t); // a·b·(f − 1)
+  const nHi = t[0];
+  const nLo = t[1];
+  twoProd(b, f, t);
+  ddAdd(a, 0, t[0], t[1], t); // a + b·f
+  ddDiv(nHi, nLo, t[0], t[1], t);
+  return t[0];
+}
+
 /**
  * P(F > f) = I_x(df2/2, df1/2) with x = df2/(df2 + df1·f); the Student t tails reuse it through
  * P(|T| > t) = P(F(1, ν) > t²).
  *
- * Everything is driven by w = df1·f/df2, so x = 1/(1+w) and y = 1 − x = w/(1+w) are both formed
- * without a subtraction, and log x, log y come from log1p. A library incomplete beta takes a single
- * x and forms 1 − x inside, which costs about df·ε relative accuracy when one df is large (measured
- * 3e-10 at df2 = 1e7) and, near underflow, returned 0 or a 1 % error in our measurements.
+ * Everything is driven by the odds w = y/x = df1·f/df2, so x = 1/(1+w), y = w/(1+w) and their
+ * logarithms are all formed without a subtraction (see BetaPoint), and λ comes from f itself (see
+ * fMeanDeviation): near f = 1 with both df large, forming it from a rounded x or y would cost
+ * (a+b)·ε absolute. A library incomplete beta takes a single x and forms 1 − x inside, which costs
+ * about df·ε relative accuracy when one df is large (measured 3e-10 at df2 = 1e7) and, near
+ * underflow, returned 0 or a 1 % error in our measurements.
  *
  * `logF` lets a caller whose f overflows (t beyond 1e154) still supply log f.
  */
@@ -32,33 +63,9 @@ export function betaTailParts(f: number, df1: number, df2: number, logF: number 
     logW = Math.log(df1) + logF - Math.log(df2);
     w = Math.exp(logW);
   }
-  let x: number;
-  let y: number;
-  let logX: number;
-  let logY: number;
-  let v: number; // y(a+b)/b − 1, the relative deviation of y from its mean-ish value
-  if (w <= 1) {
-    x = 1 / (1 + w);
-    y = w / (1 + w);
-    logX = -Math.log1p(w);
-    logY = logW - Math.log1p(w);
-    v = (f - 1) / (1 + w);
-  } else {
-    const inv = 1 / w;
-    x = inv / (1 + inv);
-    y = 1 / (1 + inv);
-    logX = -logW - Math.log1p(inv);
-    logY = -Math.log1p(inv);
-    v = (df2 / df1) * y * (1 - 1 / f);
-  }
-  const u = -(df1 / df2) * v; // a·u + b·v = 0 exactly
-  const logKernel = logBetaPrefactor(a, b, logX, logY, u, v);
-  const kernel = Math.exp(logKernel);
-  // Standard switch: the fraction in x converges fast below (a+1)/(a+b+2); above it, the
-  // complementary fraction does, and the result is then ≥ about ½ so 1 − (…) loses nothing.
-  const upper =
-    x < (a + 1) / (a + b + 2)
-      ? (kernel * betaContinuedFraction(a, b, x, y)) / a
-      : 1 - (kernel * betaContinuedFraction(b, a, y, x)) / b;
-  return { upper: Math.min(1, Math.max(0, upper)), logKernel };
+  const point = pointFromOdds(w, logW);
+  const lambda = fMeanDeviation(f, a, b, point);
+  const upper = incompleteBeta(a, b, point, lambda).lower;
+  // The complement of a directly computed tail can round a hair outside [0, 1].
+  return { upper: Math.min(1, Math.max(0, upper)), logKernel: logBetaKernel(a, b, point, lambda) };
 }
