@@ -3,12 +3,11 @@ import { readRanges } from './excel/readRanges';
 import { rewriteReport } from './excel/rewriteReport';
 import { writeReport } from './excel/writeReport';
 import { occupiedAddresses } from './excel/occupiedCells';
-import { clearResidualTable, deleteSheet, RESIDUAL_TABLE_LEFT, RESIDUAL_TABLE_TOP, writeResidualTable } from './excel/writeResidualTable';
+import { clearResidualTable, deleteSheet, writeResidualTable } from './excel/writeResidualTable';
 import type { PaneChoices, ResolvedRanges } from './model/choices';
 import { asCellGrid } from './model/readValues';
 import { newlyWrittenAddresses } from './model/refreshFootprint';
 import type { ReportCell } from './model/reportPlan';
-import { RESIDUAL_TABLE_HEADER } from './model/streamedResiduals';
 import { analyzeStreamed, type StreamedAnalysis } from './model/streamedAnalysis';
 import { predictStreamed, type StreamedPredictions } from './model/streamedPredict';
 import { planValuesReport } from './model/valuesReportPlan';
@@ -60,8 +59,7 @@ export async function refreshValuesReport(saved: SavedValuesReport, progress: (r
   if (analysis.fit === undefined) throw new Error(analysis.fitError ?? 'The data no longer give a fit.');
   const predictions = await newRowPredictions(saved.ranges, analysis);
   const plan = planValuesReport({ sheetName: saved.sheetName, ranges: saved.ranges, choices: saved.choices, analysis, predictions, dataRows: read.dataRows, writtenAt: new Date() });
-  const table = { top: RESIDUAL_TABLE_TOP, left: RESIDUAL_TABLE_LEFT, columns: RESIDUAL_TABLE_HEADER.length };
-  const fresh = newlyWrittenAddresses(saved.cells, plan.cells, table, saved.residualRows, analysis.fit.n);
+  const fresh = newlyWrittenAddresses(saved.cells, plan.cells, saved.residualRows, analysis.fit.n);
   const occupied = await occupiedAddresses(saved.sheetName, fresh);
   if (occupied.length > 0) {
     throw new Error(`Refresh would write over cells filled since the report was written (${occupied.slice(0, 3).join(', ')}${occupied.length > 3 ? ', …' : ''}). Move them, or write a new report.`);

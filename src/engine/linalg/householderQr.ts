@@ -1,4 +1,5 @@
 import { type ColumnMajorMatrix, columnView, stableNorm } from './columnMajor';
+import { reflectFourColumns } from './reflectFourColumns';
 
 /**
  * Householder QR of a matrix whose columns have unit norm, taken column by column in input
@@ -40,8 +41,7 @@ export function householderQr(scaled: ColumnMajorMatrix, aliasTolerance: number)
     col[k] = beta;
     for (let i = k + 1; i < n; i++) col[i] = 0;
     let c = j + 1;
-    // Four columns per pass over v halve the memory traffic on tall designs.
-    for (; c + 3 < scaled.cols; c += 4) applyReflectorToFour(v, tau, k, work, c * n, n);
+    for (; c + 3 < scaled.cols; c += 4) reflectFourColumns(v, k, work, c * n + k, n, n - k, tau);
     for (; c < scaled.cols; c++) applyReflector(v, tau, k, columnView(m, c));
     accepted.push(j);
     reflectors.push(v);
@@ -74,36 +74,6 @@ function applyReflector(v: Float64Array, tau: number, k: number, target: Float64
   s *= tau;
   if (s === 0) return;
   for (let i = k; i < target.length; i++) target[i] -= s * v[i];
-}
-
-/** applyReflector on the four adjacent columns of `data` (column-major, `rows` tall) from `start`. */
-function applyReflectorToFour(v: Float64Array, tau: number, k: number, data: Float64Array, start: number, rows: number): void {
-  const a = start;
-  const b = a + rows;
-  const c = b + rows;
-  const d = c + rows;
-  let s0 = 0;
-  let s1 = 0;
-  let s2 = 0;
-  let s3 = 0;
-  for (let i = k; i < rows; i++) {
-    const vi = v[i];
-    s0 += vi * data[a + i];
-    s1 += vi * data[b + i];
-    s2 += vi * data[c + i];
-    s3 += vi * data[d + i];
-  }
-  s0 *= tau;
-  s1 *= tau;
-  s2 *= tau;
-  s3 *= tau;
-  for (let i = k; i < rows; i++) {
-    const vi = v[i];
-    data[a + i] -= s0 * vi;
-    data[b + i] -= s1 * vi;
-    data[c + i] -= s2 * vi;
-    data[d + i] -= s3 * vi;
-  }
 }
 
 /** Overwrites b with Qᵀb. */

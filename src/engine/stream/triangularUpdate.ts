@@ -1,3 +1,5 @@
+import { reflectFourColumns } from '../linalg/reflectFourColumns';
+
 /**
  * Folds a block of rows into an upper-triangular factor: the R of QR([R; B]), computed in place
  * with Householder reflections that touch only R's diagonal row and the block (TSQR, one block
@@ -18,45 +20,9 @@ export function foldBlock(r: Float64Array, size: number, block: Float64Array, ro
     for (let i = 0; i < rows; i++) block[col + i] *= inv;
     r[diagonal] = beta;
     let k = j + 1;
-    // Four columns per sweep: each pass over v feeds four dot products, then four updates, which
-    // keeps the loads per multiply-add low enough for the loop to run at arithmetic speed.
-    for (; k + 3 < size; k += 4) reflectFourColumns(r, j * size + k, block, col, k * rows, rows, tau);
+    for (; k + 3 < size; k += 4) reflectFourColumns(block, col, block, k * rows, rows, rows, tau, { r, start: j * size + k });
     for (; k < size; k++) reflectColumn(r, j * size + k, block, col, k * rows, rows, tau);
     for (let i = 0; i < rows; i++) block[col + i] = 0;
-  }
-}
-
-/** Applies I − τvvᵀ (v from block column `vStart`, 1 at R's row) to four adjacent columns. */
-function reflectFourColumns(r: Float64Array, rStart: number, block: Float64Array, vStart: number, target: number, rows: number, tau: number): void {
-  const a = target;
-  const b = a + rows;
-  const c = b + rows;
-  const d = c + rows;
-  let s0 = r[rStart];
-  let s1 = r[rStart + 1];
-  let s2 = r[rStart + 2];
-  let s3 = r[rStart + 3];
-  for (let i = 0; i < rows; i++) {
-    const v = block[vStart + i];
-    s0 += v * block[a + i];
-    s1 += v * block[b + i];
-    s2 += v * block[c + i];
-    s3 += v * block[d + i];
-  }
-  s0 *= tau;
-  s1 *= tau;
-  s2 *= tau;
-  s3 *= tau;
-  r[rStart] -= s0;
-  r[rStart + 1] -= s1;
-  r[rStart + 2] -= s2;
-  r[rStart + 3] -= s3;
-  for (let i = 0; i < rows; i++) {
-    const v = block[vStart + i];
-    block[a + i] -= s0 * v;
-    block[b + i] -= s1 * v;
-    block[c + i] -= s2 * v;
-    block[d + i] -= s3 * v;
   }
 }
 

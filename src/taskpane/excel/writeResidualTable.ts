@@ -2,12 +2,9 @@ import { cellAddress } from '../../addressing/a1';
 import type { ResolvedRanges } from '../model/choices';
 import { convertBlock } from '../model/blockRows';
 import type { StreamedAnalysis } from '../model/streamedAnalysis';
+import { headerAddresses, pieceAddress, RESIDUAL_TABLE_LEFT, RESIDUAL_TABLE_TOP, tablePieces } from '../model/residualTableLayout';
 import { RESIDUAL_TABLE_HEADER, residualRows } from '../model/streamedResiduals';
 import { readInBlocks } from './readInBlocks';
-
-/** Where a values report keeps its residual table: column K, under a title in row 4. */
-export const RESIDUAL_TABLE_TOP = 4;
-export const RESIDUAL_TABLE_LEFT = 10;
 
 /**
  * Writes the fitted value and residual of every used row beside a values report, reading the data
@@ -22,11 +19,10 @@ export async function writeResidualTable(
   signal: AbortSignal,
 ): Promise<number> {
   const sources = { response: ranges.response, predictors: ranges.predictorColumns, weights: ranges.weights };
-  const write = (top: number, rows: (string | number)[][]) =>
+  const write = (first: number, rows: number[][]) =>
     Excel.run(async (context) => {
       const sheet = context.workbook.worksheets.getItem(sheetName);
-      const range = sheet.getRange(`${cellAddress(top, RESIDUAL_TABLE_LEFT)}:${cellAddress(top + rows.length - 1, RESIDUAL_TABLE_LEFT + 2)}`);
-      range.values = rows;
+      for (const piece of tablePieces(first, rows.length)) sheet.getRange(pieceAddress(piece)).values = rows.slice(piece.start - first, piece.start - first + piece.rows);
       await context.sync();
     });
   await Excel.run(async (context) => {
@@ -36,8 +32,7 @@ export async function writeResidualTable(
     title.format.font.bold = true;
     await context.sync();
   });
-  await write(RESIDUAL_TABLE_TOP, [RESIDUAL_TABLE_HEADER]);
-  let next = RESIDUAL_TABLE_TOP + 1;
+  let written = 0;
   const pending: Promise<void>[] = [];
   await readInBlocks(
     sources,
@@ -45,24 +40,27 @@ export async function writeResidualTable(
       block: (values, offset) => {
         const rows = residualRows(convertBlock(values, sources, analysis.header, offset), analysis);
         if (rows.length === 0) return;
-        pending.push(write(next, rows));
-        next += rows.length;
+        pending.push(write(written, rows));
+        written += rows.length;
       },
       progress,
     },
     signal,
   );
   await Promise.all(pending);
-  return next - RESIDUAL_TABLE_TOP - 1;
+  await Excel.run(async (context) => {
+    const sheet = context.workbook.worksheets.getItem(sheetName);
+    for (const address of headerAddresses(written)) sheet.getRange(address).values = [RESIDUAL_TABLE_HEADER];
+    await context.sync();
+  });
+  return written;
 }
 
-/** Empties a previous residual table's rows (header included) before a refresh writes the new one. */
+/** Empties a previous residual table (headers included) before a refresh writes the new one. */
 export async function clearResidualTable(sheetName: string, rows: number): Promise<void> {
   await Excel.run(async (context) => {
-    const range = context.workbook.worksheets
-      .getItem(sheetName)
-      .getRange(`${cellAddress(RESIDUAL_TABLE_TOP, RESIDUAL_TABLE_LEFT)}:${cellAddress(RESIDUAL_TABLE_TOP + rows, RESIDUAL_TABLE_LEFT + 2)}`);
-    range.clear('Contents');
+    const sheet = context.workbook.worksheets.getItem(sheetName);
+    for (const address of [...headerAddresses(rows), ...tablePieces(0, rows).map(pieceAddress)]) sheet.getRange(address).clear('Contents');
     await context.sync();
   });
 }
