@@ -141,6 +141,7 @@ export function solveLeastSquares(design: WeightedDesign, precision: Precision =
     residuals[i] = (residualPart[i] * yScale) / w;
     fitted[i] = design.response[i] - residuals[i];
   }
+  if (!perfectFit) recomputeLeadingResiduals(design, qr.accepted, coefficients, residuals, fitted);
 
   return {
     design,
@@ -166,4 +167,22 @@ function extendedColumns(design: WeightedDesign, accepted: readonly number[]): (
   if (design.rootWeights !== undefined) return columns;
   const powers = recognisePowers(columns);
   return columns.map((column, a) => powers[a] ?? column);
+}
+
+/**
+ * Q·(0, Qᵀy tail) gives residuals accurate to about u·‖y‖ absolute in every row but the first
+ * `rank`, where each reflector's leading entry meets the column's whole norm: on a million rows
+ * those residuals were off by 5e-10 against 6e-13 elsewhere. They are formed directly instead,
+ * y − x·b, whose error does not grow with the number of rows.
+ */
+function recomputeLeadingResiduals(design: WeightedDesign, accepted: readonly number[], coefficients: Float64Array, residuals: Float64Array, fitted: Float64Array): void {
+  const { matrix, y } = design;
+  const n = matrix.rows;
+  for (let i = 0; i < Math.min(accepted.length, n); i++) {
+    let prediction = 0;
+    for (const col of accepted) prediction += matrix.data[col * n + i] * coefficients[col];
+    const w = design.rootWeights === undefined ? 1 : design.rootWeights[i];
+    residuals[i] = (y[i] - prediction) / w;
+    fitted[i] = design.response[i] - residuals[i];
+  }
 }

@@ -6,7 +6,7 @@
 import { describe, expect, it } from 'vitest';
 import { buildDesign } from '../../../src/engine/fit/design';
 import { needsExtendedPrecision, PRECISE_CONDITION_THRESHOLD, solveLeastSquares } from '../../../src/engine/fit/leastSquares';
-import { randomProblem } from '../../support/random';
+import { mulberry32, randomProblem } from '../../support/random';
 import { lre, readStrd, strdAvailable } from '../../support/strd';
 
 describe('needsExtendedPrecision', () => {
@@ -45,3 +45,22 @@ describe('solveLeastSquares on well-conditioned data', () => {
     expect(auto.scaledRss).toBe(plain.scaledRss);
   });
 });
+
+describe('residuals on many rows', () => {
+  it('keeps the first rows’ residuals as accurate as the rest (y − x·b to 1e-12 σ), where Q alone lost digits', () => {
+    // 200,000 rows with a level of 50: ‖y‖ ≈ 2e4, which Q·(0, Qᵀy tail) carried into the leading rows.
+    const random = mulberry32(3);
+    const n = 200_000;
+    const x = Array.from({ length: n }, () => [10 * random(), 5 * random() - 2, random()]);
+    const y = x.map(([a, b, c]) => 50 + 0.8 * a - 1.5 * b + 2 * c + (random() - 0.5));
+    const design = buildDesign(y, x, true, undefined, undefined);
+    const solution = solveLeastSquares(design);
+    const b = Array.from(solution.coefficients);
+    const sigma = Math.sqrt((solution.scaledRss * solution.yScale ** 2) / (n - 4));
+    for (const i of [0, 1, 2, 3, 4, 1000, n - 1]) {
+      const direct = y[i] - (b[0] + b[1] * x[i][0] + b[2] * x[i][1] + b[3] * x[i][2]);
+      expect(Math.abs(solution.residuals[i] - direct), `row ${i}`).toBeLessThanOrEqual(1e-12 * sigma);
+    }
+  });
+});
+
