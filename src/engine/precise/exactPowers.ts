@@ -24,11 +24,16 @@ const POWER_ROUNDING = 2 ** -52;
  * column was recognised and undefined elsewhere.
  */
 export function recognisePowers(columns: readonly Float64Array[]): (ExtendedColumn | undefined)[] {
+  const probes = columns.map(probeRow);
   return columns.map((column, j) => {
     for (let b = 0; b < columns.length; b++) {
-      if (b === j) continue;
-      const exponent = candidateExponent(columns[b], column);
-      if (exponent === undefined) continue;
+      const row = probes[b];
+      if (b === j || row === undefined) continue;
+      const exponent = Math.round(Math.log(Math.abs(column[row])) / Math.log(Math.abs(columns[b][row])));
+      if (!(exponent >= 2 && exponent <= MAX_EXPONENT)) continue;
+      // A cheap look at the probe row first: most unrelated columns fail there.
+      const probe = columns[b][row] ** exponent;
+      if (!(Math.abs(column[row] - probe) <= 4 * POWER_ROUNDING * Math.abs(probe))) continue;
       const power = exactPower(columns[b], exponent);
       if (matchesRounded(column, power)) return power;
     }
@@ -37,12 +42,12 @@ export function recognisePowers(columns: readonly Float64Array[]): (ExtendedColu
 }
 
 /**
- * The k with column ≈ base^k, read from the row whose base is farthest from 1 in log terms, or
- * undefined when no integer 2 ≤ k ≤ 30 fits there. A base of only 0s and ±1s has no unique k.
+ * The row where a base column is farthest from 1 in log terms, where a power's exponent reads
+ * most clearly; undefined for a base of only 0s and ±1s, which has no unique exponent.
  */
-function candidateExponent(base: Float64Array, column: Float64Array): number | undefined {
-  let row = -1;
-  let spread = 0;
+function probeRow(base: Float64Array): number | undefined {
+  let row: number | undefined;
+  let spread = 1e-3;
   for (let i = 0; i < base.length; i++) {
     const logBase = Math.abs(Math.log(Math.abs(base[i])));
     if (Number.isFinite(logBase) && logBase > spread) {
@@ -50,9 +55,7 @@ function candidateExponent(base: Float64Array, column: Float64Array): number | u
       row = i;
     }
   }
-  if (row < 0 || spread < 1e-3) return undefined;
-  const k = Math.round(Math.log(Math.abs(column[row])) / Math.log(Math.abs(base[row])));
-  return k >= 2 && k <= MAX_EXPONENT ? k : undefined;
+  return row;
 }
 
 function exactPower(base: Float64Array, exponent: number): ExtendedColumn {
