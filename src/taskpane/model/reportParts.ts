@@ -29,3 +29,15 @@ export function modelEquation(responseName: string, termNames: readonly string[]
   const parts = [...(intercept ? ['b0'] : []), ...predictors.map((t, j) => `b${j + 1}·[${t}]`)];
   return `[${responseName}] = ${parts.join(' + ')} + error`;
 }
+
+/**
+ * The cautions every report ends with: association is not causation, extrapolation is risky, and
+ * the inference rests on assumptions, worded for what the report can show of them.
+ */
+export function cautionLines(assumptions: string): string[] {
+  return [
+    'These are associations in the data, not proof of cause: a clear-of-zero term does not show that changing it will change the response.',
+    'Predictions outside the range of the data are extrapolations and can be badly wrong, however narrow the intervals look.',
+    assumptions,
+  ];
+}

@@ -1,7 +1,7 @@
 import { cellAddress, columnLetters, formatAbsolute, type RangeRef } from '../../addressing/a1';
 import type { PaneChoices, ResolvedRanges } from './choices';
 import type { PaneAnalysis } from './analysis';
-import { modelEquation, settingsRows } from './reportParts';
+import { cautionLines, modelEquation, settingsRows } from './reportParts';
 import { splitUnit } from './sentences';
 
 /** One cell the report writes. Labels are always written as text, never as formulas. */
@@ -188,11 +188,9 @@ export function planReport({ sheetName, ranges, choices, analysis, writtenAt }: 
   row += 22;
 
   label(row, 0, 'Cautions', true);
-  [
-    'These are associations in the data, not proof of cause: a clear-of-zero term does not show that changing it will change the response.',
-    'Predictions outside the range of the data are extrapolations and can be badly wrong, however narrow the intervals look.',
+  cautionLines(
     'Standard errors, intervals and p-values assume independent errors with constant variance, roughly normal, and no single row steering the fit: read the checks and the charts before relying on them.',
-  ].forEach((text, i) => label(row + 1 + i, 0, text));
+  ).forEach((text, i) => label(row + 1 + i, 0, text));
   row += 5;
 
   label(row, 0, 'Every row used, with its residual and flags (high leverage: h > 2p/n; outlier: |studentized| > 3; influential: Cook > 4/n)', true);

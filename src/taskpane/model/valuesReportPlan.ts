@@ -7,7 +7,7 @@ import { predictGrid } from '../../cellGrids/predictGrid';
 import { termsGrid } from '../../cellGrids/termsGrid';
 import type { PaneChoices, ResolvedRanges } from './choices';
 import { decimalsFor, P_VALUE_FORMAT, REPORT_TITLE_PREFIX, type ReportCell, type ReportFormat, type ReportPlan } from './reportPlan';
-import { modelEquation, settingsRows } from './reportParts';
+import { cautionLines, modelEquation, settingsRows } from './reportParts';
 import type { StreamedAnalysis } from './streamedAnalysis';
 import type { StreamedPredictions } from './streamedPredict';
 
@@ -106,11 +106,9 @@ export function planValuesReport({ sheetName, ranges, choices, analysis, predict
   label(row + 1, 0, LEFT_OUT_NOTE);
   row += 3;
   label(row, 0, 'Cautions', true);
-  [
-    'These are associations in the data, not proof of cause: a clear-of-zero term does not show that changing it will change the response.',
-    'Predictions outside the range of the data are extrapolations and can be badly wrong, however narrow the intervals look.',
+  cautionLines(
     'Standard errors, intervals and p-values assume independent errors with constant variance, roughly normal: with this many rows they are narrow, and only as good as those assumptions.',
-  ].forEach((text, i) => label(row + 1 + i, 0, text));
+  ).forEach((text, i) => label(row + 1 + i, 0, text));
 
   return { cells, formats, charts: [], specification };
 }

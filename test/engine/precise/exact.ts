@@ -61,15 +61,3 @@ export function solveExact(a: Fraction[][], b: Fraction[]): Fraction[] {
   }
   return x;
 }
-
-/** Deterministic uniform [0, 1) generator (mulberry32), so failures reproduce. */
-export function seeded(seed: number): () => number {
-  let s = seed >>> 0;
-  return () => {
-    s = (s + 0x6d2b79f5) >>> 0;
-    let t = s;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}

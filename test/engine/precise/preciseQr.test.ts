@@ -1,9 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { fitModel } from '../../../src/engine';
 import { preciseLeastSquares } from '../../../src/engine/precise/preciseQr';
-import { abs, add, exactOf, type Fraction, lessOrEqual, mul, seeded, solveExact, sub } from './exact';
+import { abs, add, exactOf, type Fraction, lessOrEqual, mul, solveExact, sub } from './exact';
+import { mulberry32 } from '../../support/random';
 
-const random = seeded(1996);
+const random = mulberry32(1996);
 const ZERO: Fraction = { num: 0n, den: 1n };
 
 /** The exact least-squares solution, from the normal equations in rationals. */
