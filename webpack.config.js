@@ -8,8 +8,39 @@ const path = require("node:path");
 const HtmlWebpackPlugin = require("html-webpack-plugin");
 const CopyWebpackPlugin = require("copy-webpack-plugin");
 const CustomFunctionsMetadataPlugin = require("custom-functions-metadata-plugin");
+const webpack = require("webpack");
+// The build helpers are TypeScript (tested in test/scripts/build/); tsx compiles them on load.
+const { require: requireTs } = require("tsx/cjs/api");
+const { deployTarget } = requireTs("./scripts/build/deployTarget.ts", __filename);
+const { manifestForTarget } = requireTs("./scripts/build/manifestForTarget.ts", __filename);
+const { allowErrorsAsInput } = requireTs("./scripts/build/functionsMetadata.ts", __filename);
+const { version: packageVersion } = require("./package.json");
 
 const FUNCTIONS_SOURCE = path.resolve(__dirname, "src/functions/functions.ts");
+const FUNCTIONS_METADATA = "functions.json";
+
+// After CustomFunctionsMetadataPlugin has generated functions.json from the JSDoc, let every
+// parameter receive error values (scripts/build/functionsMetadata.ts says why and where).
+class AllowErrorsAsInputPlugin {
+  apply(compiler) {
+    compiler.hooks.thisCompilation.tap("AllowErrorsAsInputPlugin", (compilation) => {
+      compilation.hooks.processAssets.tap(
+        { name: "AllowErrorsAsInputPlugin", stage: webpack.Compilation.PROCESS_ASSETS_STAGE_ADDITIONS },
+        () => {
+          const generated = compilation.getAsset(FUNCTIONS_METADATA);
+          // Without the asset the generator has already reported why.
+          if (!generated) return;
+          try {
+            const json = allowErrorsAsInput(generated.source.source().toString());
+            compilation.updateAsset(FUNCTIONS_METADATA, new webpack.sources.RawSource(json));
+          } catch (error) {
+            compilation.errors.push(new webpack.WebpackError(`${FUNCTIONS_METADATA}: ${error.message}`));
+          }
+        },
+      );
+    });
+  }
+}
 
 // Office only loads add-ins over https. office-addin-dev-certs writes trusted
 // localhost certificates here (`npx office-addin-dev-certs install`); without
@@ -27,6 +58,13 @@ function devServerTransport() {
 module.exports = (env = {}, argv = {}) => {
   const mode = argv.mode || "production";
   const outputPath = env.outputPath ? path.resolve(env.outputPath) : path.resolve(__dirname, "dist");
+  // Where dist/ will be served from: PLUMB_ORIGIN (default https://localhost:3000) and the manifest
+  // version, PLUMB_VERSION or package.json's. `--env origin=... --env version=...` do the same.
+  const target = deployTarget({
+    origin: env.origin ?? process.env.PLUMB_ORIGIN,
+    version: env.version ?? process.env.PLUMB_VERSION,
+    packageVersion,
+  });
 
   return {
     mode,
@@ -70,7 +108,8 @@ module.exports = (env = {}, argv = {}) => {
       ],
     },
     plugins: [
-      new CustomFunctionsMetadataPlugin({ input: FUNCTIONS_SOURCE, output: "functions.json" }),
+      new CustomFunctionsMetadataPlugin({ input: FUNCTIONS_SOURCE, output: FUNCTIONS_METADATA }),
+      new AllowErrorsAsInputPlugin(),
       // Shared runtime: Excel loads this single page for the pane AND the cell
       // functions, so it must carry both bundles, functions first so the
       // cell functions are registered before any pane code runs.
@@ -93,7 +132,8 @@ module.exports = (env = {}, argv = {}) => {
           { from: "src/preview/preview.css", to: "preview.css" },
           { from: "src/taskpane/taskpane.css", to: "taskpane.css" },
           { from: "assets/*.png", to: "assets/[name][ext]" },
-          { from: "manifest.xml", to: "manifest.xml" },
+          // The repository's manifest is written for https://localhost:3000; dist/ gets it for the target.
+          { from: "manifest.xml", to: "manifest.xml", transform: (content) => manifestForTarget(content.toString("utf8"), target) },
         ],
       }),
     ],

@@ -19,6 +19,7 @@ function excelInstructions(https: boolean): string[] {
     '  Excel desktop, Windows or Mac:  npx office-addin-debugging start manifest.xml',
     '  Excel on the web:              Insert > Add-ins > Upload My Add-in, then choose manifest.xml',
   ];
+  lines.push('  For colleagues, build for your own https host instead: PLUMB_ORIGIN=https://host/path npm run build (README, "Deploy for your team").');
   if (!https) {
     lines.push('  No development certificate was found, so this server speaks plain http, which Excel refuses.');
     lines.push('  Make one with `npx office-addin-dev-certs install`, then run `npm start` again.');

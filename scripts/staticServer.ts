@@ -1,6 +1,7 @@
 /**
  * Serves the built add-in (dist/) on localhost only. Used by `npm start` and by the browser
- * tests, which pass port 0 to get a free port.
+ * tests, which pass port 0 to get a free port. A deployed build is served by any static https
+ * host instead (README, "Deploy for your team").
  */
 import { createReadStream, existsSync, readFileSync, statSync } from 'node:fs';
 import { createServer as createHttpServer, type IncomingMessage, type Server, type ServerResponse } from 'node:http';
@@ -17,6 +18,16 @@ const TYPES: Record<string, string> = {
   '.xml': 'application/xml; charset=utf-8',
   '.map': 'application/json; charset=utf-8',
 };
+
+/**
+ * "Office Add-ins manifest", Hosting requirements: image URIs must support caching, and the server
+ * hosting them shouldn't send a Cache-Control of no-cache, no-store or similar. The pages, bundles
+ * and metadata stay no-store, so a rebuild shows at the next reload during development; the icons
+ * are fixed files (scripts/make-icons.ts) and may be kept for a day.
+ */
+export function cachePolicy(file: string): string {
+  return TYPES[extname(file)]?.startsWith('image/') ? 'public, max-age=86400' : 'no-store';
+}
 
 export interface RunningServer {
   server: Server;
@@ -44,7 +55,7 @@ function handler(root: string) {
     }
     response.writeHead(200, {
       'Content-Type': TYPES[extname(file)] ?? 'application/octet-stream',
-      'Cache-Control': 'no-store',
+      'Cache-Control': cachePolicy(file),
       // Excel on the web fetches functions.json from its own origin.
       'Access-Control-Allow-Origin': '*',
     });

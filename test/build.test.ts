@@ -1,17 +1,24 @@
-// Builds the add-in the way `npm run build` does, but into a temporary folder so
-// the test never clobbers dist/ or races a developer's build.
+// Builds the add-in the way `PLUMB_ORIGIN=… PLUMB_VERSION=… npm run build` does, but into a
+// temporary folder so the test never clobbers dist/ or races a developer's build. (The default
+// build, for https://localhost:3000, is the one the browser tests serve.)
 import { existsSync, mkdtempSync, readFileSync, rmSync } from "node:fs";
 import { createRequire } from "node:module";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import webpack, { type Configuration, type Stats } from "webpack";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { ORIGIN, ROOT, loadManifest, urlsIn } from "./support/manifest";
+import { deployTarget } from "../scripts/build/deployTarget";
+import { manifestForTarget } from "../scripts/build/manifestForTarget";
+import { ROOT, loadManifest, parseXml, urlsIn } from "./support/manifest";
+
+const SAMPLE_ORIGIN = "https://stats.example.org/plumbline";
+const SAMPLE_VERSION = "1.2.3.4";
+const FUNCTIONS_SOURCE = join(ROOT, "src/functions/functions.ts");
 
 // Every PLUMB cell function spills a grid, so each result is a matrix in functions.json.
 const EXPECTED_FUNCTIONS: ReadonlyArray<{ id: string; dimensionality: string }> = [
   "TERMS", "ESTIMATES", "STDERRORS", "INTERVALS", "COVARIANCE", "FITSTATS", "NESTEDF", "PREDICT", "RESIDUALS", "QQPOINTS",
-  "COLLINEARITY", "CHECKS", "COMPARE",
+  "COLLINEARITY", "CHECKS", "COMPARE", "GATHER",
 ].map((id) => ({ id, dimensionality: "matrix" }));
 
 const OFFICE_JS = "https://appsforoffice.microsoft.com/lib/1/hosted/office.js";
@@ -21,7 +28,12 @@ type ConfigFactory = (env: { outputPath: string }, argv: { mode: "production" })
 interface FunctionMetadata {
   id: string;
   name: string;
+  parameters: { name: string; type?: string }[];
   result?: { dimensionality?: string };
+}
+
+interface MetadataPluginClass {
+  generateResults: Record<string, { metadataJson: string }>;
 }
 
 let outDir: string;
@@ -50,8 +62,14 @@ function scriptSources(html: string): string[] {
   return sources;
 }
 
-function readFunctions(): FunctionMetadata[] {
+function readMetadata(): Record<string, unknown> {
   const parsed: unknown = JSON.parse(readFileSync(join(outDir, "functions.json"), "utf8"));
+  if (typeof parsed !== "object" || parsed === null || Array.isArray(parsed)) throw new Error("functions.json is not an object");
+  return parsed as Record<string, unknown>;
+}
+
+function readFunctions(): FunctionMetadata[] {
+  const parsed = readMetadata();
   const list = typeof parsed === "object" && parsed !== null && "functions" in parsed ? parsed.functions : undefined;
   if (!Array.isArray(list)) throw new Error("functions.json has no functions array");
   const items: unknown[] = list;
@@ -62,7 +80,20 @@ function readFunctions(): FunctionMetadata[] {
 beforeAll(async () => {
   outDir = mkdtempSync(join(tmpdir(), "plumbline-build-"));
   const factory = createRequire(import.meta.url)(join(ROOT, "webpack.config.js")) as ConfigFactory;
-  stats = await runWebpack(factory({ outputPath: outDir }, { mode: "production" }));
+  // The documented interface is the environment, so the test sets it, and restores it at once.
+  const saved = { origin: process.env.PLUMB_ORIGIN, version: process.env.PLUMB_VERSION };
+  process.env.PLUMB_ORIGIN = SAMPLE_ORIGIN;
+  process.env.PLUMB_VERSION = SAMPLE_VERSION;
+  let config: Configuration;
+  try {
+    config = factory({ outputPath: outDir }, { mode: "production" });
+  } finally {
+    if (saved.origin === undefined) delete process.env.PLUMB_ORIGIN;
+    else process.env.PLUMB_ORIGIN = saved.origin;
+    if (saved.version === undefined) delete process.env.PLUMB_VERSION;
+    else process.env.PLUMB_VERSION = saved.version;
+  }
+  stats = await runWebpack(config);
 }, 180_000);
 
 afterAll(() => {
@@ -86,6 +117,26 @@ describe("production build", () => {
     const fn = readFunctions().find((f) => f.id === id);
     expect(fn?.name).toBe(id);
     expect(fn?.result?.dimensionality).toBe(dimensionality);
+  });
+
+  it("lets error values reach every parameter of every function: allowErrorForDataTypeAny at the top level, every parameter of type any", () => {
+    // "Manually create JSON metadata for custom functions", allowErrorForDataTypeAny: a top-level
+    // Boolean that lets parameters of type any (a parameter without type is any) accept errors.
+    const metadata = readMetadata();
+    expect(metadata.allowErrorForDataTypeAny).toBe(true);
+    const functions = readFunctions();
+    const parameters = functions.flatMap((f) => f.parameters.map((p) => ({ at: `${f.id}.${p.name}`, type: p.type ?? "any" })));
+    expect(parameters.length).toBeGreaterThan(functions.length);
+    expect(parameters.filter((p) => p.type !== "any")).toEqual([]);
+  });
+
+  it("gets that flag from the build's post-processing: the JSDoc generation alone never writes it", () => {
+    // "Handle and return errors from your custom function", Errors as custom function inputs: the
+    // property doesn't come from the autogenerated JSON metadata process.
+    const plugin = createRequire(join(ROOT, "webpack.config.js"))("custom-functions-metadata-plugin") as MetadataPluginClass;
+    const generated: unknown = JSON.parse(plugin.generateResults[FUNCTIONS_SOURCE]?.metadataJson ?? "null");
+    expect(generated).toMatchObject({ functions: expect.any(Array) });
+    expect(JSON.stringify(generated)).not.toContain("allowErrorForDataTypeAny");
   });
 
   it.each(EXPECTED_FUNCTIONS)("registers $id in functions.js", ({ id }) => {
@@ -123,18 +174,20 @@ describe("production build", () => {
     expect(external).toEqual([OFFICE_JS]);
   });
 
-  it("emits every file the manifest points at", () => {
-    const { root } = loadManifest();
-    const paths = [...new Set(urlsIn(root).filter((u) => u.startsWith(`${ORIGIN}/`)))].map((u) =>
-      new URL(u).pathname.slice(1),
-    );
+  it("writes manifest.xml for PLUMB_ORIGIN and PLUMB_VERSION, with no localhost left", () => {
+    const built = readFileSync(join(outDir, "manifest.xml"), "utf8");
+    const expected = manifestForTarget(loadManifest().xml, deployTarget({ origin: SAMPLE_ORIGIN, version: SAMPLE_VERSION, packageVersion: "0" }));
+    expect(built).toBe(expected);
+    expect(built).not.toMatch(/localhost/i);
+    expect(parseXml(built).children.find((c) => c.name === "Version")?.text).toBe(SAMPLE_VERSION);
+  });
+
+  it("emits every file the built manifest points at, under the origin's path", () => {
+    const root = parseXml(readFileSync(join(outDir, "manifest.xml"), "utf8"));
+    const paths = [...new Set(urlsIn(root).filter((u) => u.startsWith(`${SAMPLE_ORIGIN}/`)))].map((u) => u.slice(SAMPLE_ORIGIN.length + 1));
     expect(paths.length).toBeGreaterThan(0);
     const missing = paths.filter((p) => !existsSync(join(outDir, p)));
     expect(missing).toEqual([]);
-  });
-
-  it("copies manifest.xml unchanged", () => {
-    expect(readFileSync(join(outDir, "manifest.xml"), "utf8")).toBe(readFileSync(join(ROOT, "manifest.xml"), "utf8"));
   });
 });
 

@@ -1,6 +1,9 @@
 import { existsSync, readFileSync } from "node:fs";
+import { createRequire } from "node:module";
 import { join } from "node:path";
 import { beforeAll, describe, expect, it } from "vitest";
+import { manifestVersion } from "../scripts/build/deployTarget";
+import { compareVersions, requirementSetsUsed } from "./support/apiSets";
 import {
   type El,
   ORIGIN,
@@ -15,6 +18,34 @@ import {
   urlsIn,
   wellFormed,
 } from "./support/manifest";
+
+// Features that functions.json options switch on, with the set their Invocation member belongs to
+// (CustomFunctions.Invocation reference: parameterAddresses is [Api set: CustomFunctionsRuntime 1.3]).
+// allowErrorForDataTypeAny has no documented set, so it adds none.
+const METADATA_OPTION_SETS: Record<string, { set: string; version: string }> = {
+  requiresAddress: { set: "CustomFunctionsRuntime", version: "1.1" },
+  requiresParameterAddresses: { set: "CustomFunctionsRuntime", version: "1.3" },
+};
+
+interface MetadataGenerator {
+  generateCustomFunctionsMetadata(input: string, wantConsoleOutput?: boolean): Promise<{ metadataJson: string; errors: string[] }>;
+}
+
+/** The functions.json options the JSDoc turns on, generated as the build does. */
+async function metadataOptionsUsed(): Promise<Set<string>> {
+  // The generator is the metadata plugin's own dependency, so it is resolved from there.
+  const fromPlugin = createRequire(createRequire(import.meta.url).resolve("custom-functions-metadata-plugin"));
+  const generator = fromPlugin("custom-functions-metadata") as MetadataGenerator;
+  const result = await generator.generateCustomFunctionsMetadata(join(ROOT, "src/functions/functions.ts"));
+  expect(result.errors).toEqual([]);
+  const parsed: unknown = JSON.parse(result.metadataJson);
+  const functions = typeof parsed === "object" && parsed !== null && "functions" in parsed && Array.isArray(parsed.functions) ? parsed.functions : [];
+  const options = new Set<string>();
+  for (const fn of functions as { options?: Record<string, unknown> }[]) {
+    for (const [name, value] of Object.entries(fn.options ?? {})) if (value === true) options.add(name);
+  }
+  return options;
+}
 
 const GUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 const ICON_SIZES = [16, 32, 64, 80];
@@ -102,12 +133,83 @@ describe("manifest.xml", () => {
     expect(path(root, "Permissions").text).toBe("ReadWriteDocument");
   });
 
-  it("requires SharedRuntime 1.1 and CustomFunctionsRuntime 1.1", () => {
-    const sets = findAll(path(root, "Requirements"), "Set");
-    const versions = new Map(sets.map((s) => [s.attrs.Name, s.attrs.MinVersion]));
-    expect(versions.get("SharedRuntime")).toBe("1.1");
-    expect(versions.get("CustomFunctionsRuntime")).toBe("1.1");
+  it("places the OfficeApp children in the schema's order", () => {
+    // "How to find the proper order of manifest elements", Basic task pane add-in element ordering:
+    // Office rejects a manifest whose elements are out of this order.
+    const SCHEMA_ORDER = [
+      "Id", "AlternateId", "Version", "ProviderName", "DefaultLocale", "DisplayName", "Description", "IconUrl",
+      "HighResolutionIconUrl", "SupportUrl", "AppDomains", "Hosts", "Requirements", "DefaultSettings", "Permissions",
+      "Dictionary", "VersionOverrides", "ExtendedOverrides",
+    ];
+    const names = root.children.map((c) => c.name);
+    expect(names.filter((n) => !SCHEMA_ORDER.includes(n))).toEqual([]);
+    const positions = names.map((n) => SCHEMA_ORDER.indexOf(n));
+    expect(positions).toEqual([...positions].sort((a, b) => a - b));
+    expect(new Set(names).size).toBe(names.length);
+    // Same page: Requirements holds Sets (then Methods); Sets holds Set elements only.
+    expect(path(root, "Requirements").children.map((c) => c.name)).toEqual(["Sets"]);
+    expect(path(root, "Requirements", "Sets").children.every((c) => c.name === "Set")).toBe(true);
   });
+
+  it("places the VersionOverrides elements in the schema's order", () => {
+    // "How to find the proper order of manifest elements", Task pane add-in element ordering within
+    // VersionOverrides (bt:Images etc. are the Images, Urls, ShortStrings and LongStrings there).
+    const expectOrder = (el: El, order: string[]) => {
+      const names = el.children.map((c) => c.name);
+      expect(names.filter((n) => !order.includes(n)), `<${el.name}>`).toEqual([]);
+      const positions = names.map((n) => order.indexOf(n));
+      expect(positions, `<${el.name}>`).toEqual([...positions].sort((a, b) => a - b));
+    };
+    const overrides = path(root, "VersionOverrides");
+    expectOrder(overrides, ["Description", "Requirements", "Hosts", "Resources", "WebApplicationInfo", "EquivalentAddins"]);
+    expectOrder(host, ["Runtimes", "AllFormFactors", "DesktopFormFactor"]);
+    expectOrder(customFunctionsPoint(), ["Script", "Page", "Metadata", "Namespace"]);
+    expectOrder(path(host, "DesktopFormFactor"), ["GetStarted", "FunctionFile", "ExtensionPoint"]);
+    expectOrder(path(host, "DesktopFormFactor", "GetStarted"), ["Title", "Description", "LearnMoreUrl"]);
+    expectOrder(path(overrides, "Resources"), ["bt:Images", "bt:Urls", "bt:ShortStrings", "bt:LongStrings"]);
+    for (const control of findAll(host, "Control")) expectOrder(control, ["Label", "Supertip", "Icon", "Action", "Enabled", "Items"]);
+  });
+
+  it("carries package.json's version, so a release bumps one number", () => {
+    // Version element reference: 1 to 4 parts of at most 5 digits; the build pads package.json's to four.
+    const packageJson: unknown = JSON.parse(readFileSync(join(ROOT, "package.json"), "utf8"));
+    const version = typeof packageJson === "object" && packageJson !== null && "version" in packageJson ? String(packageJson.version) : "";
+    expect(path(root, "Version").text).toBe(manifestVersion(undefined, version));
+  });
+
+  it("requires the shared runtime: the Runtimes element needs SharedRuntime 1.1", () => {
+    // "Configure your Office Add-in to use a shared runtime": the manifest declares SharedRuntime 1.1.
+    const sets = findAll(path(root, "Requirements"), "Set");
+    expect(sets.find((s) => s.attrs.Name === "SharedRuntime")?.attrs.MinVersion).toBe("1.1");
+    expect(new Set(sets.map((s) => s.attrs.Name)).size).toBe(sets.length);
+  });
+
+  it("declares exactly the highest version of each requirement set that the code Excel loads uses", async () => {
+    // The version of each member comes from the "[Api set: …]" remark of its Office JavaScript API
+    // reference entry (carried by @types/office-js and @types/custom-functions-runtime). "Requirements
+    // element": Office does not activate the add-in where a declared set is missing, so declaring
+    // less lets it start where it will fail, and declaring more shuts users out for nothing.
+    const used = requirementSetsUsed(ROOT, ["src/taskpane/index.tsx", "src/functions/functions.ts"], ["src/preview"]);
+    for (const option of await metadataOptionsUsed()) {
+      const need = METADATA_OPTION_SETS[option];
+      if (!need) continue;
+      const current = used.get(need.set);
+      if (!current || compareVersions(need.version, current.version) > 0) used.set(need.set, { version: need.version, members: [option] });
+      else if (compareVersions(need.version, current.version) === 0) current.members.push(option);
+    }
+    const declared = new Map(findAll(path(root, "Requirements"), "Set").map((s) => [s.attrs.Name, s.attrs.MinVersion ?? "1.1"]));
+    expect(used.get("CustomFunctionsRuntime")).toBeDefined();
+    expect(used.get("ExcelApi")).toBeDefined();
+    for (const [setName, use] of used) {
+      expect(declared.get(setName), `${setName} (used by ${use.members.join(", ")})`).toBe(use.version);
+    }
+    for (const [setName, version] of declared) {
+      if (setName === "SharedRuntime") continue;
+      const use = used.get(setName);
+      expect(use, `${setName} ${version} is declared but nothing uses it`).toBeDefined();
+      if (use) expect(compareVersions(version, use.version), setName).toBe(0);
+    }
+  }, 120_000);
 
   it("has a Home tab button that opens the pane, with our labels", () => {
     const tab = findAll(host, "OfficeTab").find((t) => t.attrs.id === "TabHome");

@@ -1,6 +1,7 @@
 /**
- * A1 notation: column letters, cell and range addresses with optional sheet names and `$`
- * anchors. Pure functions shared by the task pane and the preview host.
+ * A1 notation: column letters, cell, range and whole-column addresses with optional sheet names
+ * and `$` anchors, and multi-area addresses. Pure functions shared by the task pane and the
+ * preview host.
  */
 /** A rectangular block of cells on one sheet; rows and columns are 0-based and inclusive. */
 export interface RangeRef {
@@ -41,14 +42,21 @@ export function quoteSheetName(name: string): string {
   return /^[A-Za-z_][A-Za-z0-9_.]*$/.test(name) && !/^[A-Za-z]{1,3}\d+$/.test(name) ? name : `'${name.replace(/'/g, "''")}'`;
 }
 
+/** True when the range spans every row of its columns, as selecting column headers gives. */
+export function isWholeColumns(range: RangeRef): boolean {
+  return range.top === 0 && range.bottom === MAX_ROWS - 1;
+}
+
+/** As Excel writes addresses: "Sheet1!B2:C9", "Sheet1!B2" for one cell, "Sheet1!B:B" for whole columns. */
 export function formatRange(range: RangeRef, withSheet = true): string {
   const start = cellAddress(range.top, range.left);
   const end = cellAddress(range.bottom, range.right);
-  const body = start === end ? start : `${start}:${end}`;
+  const body = isWholeColumns(range) ? `${columnLetters(range.left)}:${columnLetters(range.right)}` : start === end ? start : `${start}:${end}`;
   return withSheet ? `${quoteSheetName(range.sheet)}!${body}` : body;
 }
 
 const CELL = /^\$?([A-Za-z]{1,3})\$?(\d{1,7})$/;
+const COLUMN = /^\$?([A-Za-z]{1,3})$/;
 
 function parseCell(text: string): { row: number; column: number } | undefined {
   const m = CELL.exec(text);
@@ -57,6 +65,13 @@ function parseCell(text: string): { row: number; column: number } | undefined {
   const row = Number(m[2]) - 1;
   if (row < 0 || row >= MAX_ROWS || column >= MAX_COLUMNS) return undefined;
   return { row, column };
+}
+
+function parseColumn(text: string): number | undefined {
+  const m = COLUMN.exec(text);
+  if (!m) return undefined;
+  const column = columnIndex(m[1]);
+  return column < MAX_COLUMNS ? column : undefined;
 }
 
 /** Splits "Sheet!A1:B2" or "'Planned batches'!B2" into sheet and address; the sheet may be absent. */
@@ -68,21 +83,39 @@ export function splitSheet(text: string): { sheet: string | undefined; address: 
   return { sheet: text.slice(0, bang), address: text.slice(bang + 1) };
 }
 
-/** Parses "A1", "$B$2:C5" or "Sheet!A1:B2"; undefined when the text is not a valid address. */
+/**
+ * Parses "A1", "$B$2:C5", "B:B", "$B:$D" or "Sheet!A1:B2"; undefined when the text is not a
+ * valid address. Whole columns span every row.
+ */
 export function parseRange(text: string, defaultSheet: string): RangeRef | undefined {
   const { sheet, address } = splitSheet(text.trim());
   const parts = address.split(':');
   if (parts.length > 2) return undefined;
-  const a = parseCell(parts[0]);
-  const b = parts.length === 2 ? parseCell(parts[1]) : a;
+  const bounds = parts.length === 2 ? columnBounds(parts[0], parts[1]) ?? cellBounds(parts[0], parts[1]) : cellBounds(parts[0], parts[0]);
+  return bounds && { sheet: sheet ?? defaultSheet, ...bounds };
+}
+
+type Bounds = Omit<RangeRef, 'sheet'>;
+
+function cellBounds(first: string, second: string): Bounds | undefined {
+  const a = parseCell(first);
+  const b = parseCell(second);
   if (!a || !b) return undefined;
-  return {
-    sheet: sheet ?? defaultSheet,
-    top: Math.min(a.row, b.row),
-    left: Math.min(a.column, b.column),
-    bottom: Math.max(a.row, b.row),
-    right: Math.max(a.column, b.column),
-  };
+  return { top: Math.min(a.row, b.row), left: Math.min(a.column, b.column), bottom: Math.max(a.row, b.row), right: Math.max(a.column, b.column) };
+}
+
+function columnBounds(first: string, second: string): Bounds | undefined {
+  const a = parseColumn(first);
+  const b = parseColumn(second);
+  if (a === undefined || b === undefined) return undefined;
+  return { top: 0, left: Math.min(a, b), bottom: MAX_ROWS - 1, right: Math.max(a, b) };
+}
+
+/** Parses a multi-area address ("Data!B2:B9, Data!D:D"); undefined when any area is not valid. */
+export function parseAreas(text: string, defaultSheet: string): RangeRef[] | undefined {
+  const areas = splitAreas(text).map((area) => parseRange(area, defaultSheet));
+  if (areas.length === 0 || areas.some((area) => area === undefined)) return undefined;
+  return areas as RangeRef[];
 }
 
 export function rangeContains(range: RangeRef, sheet: string, row: number, column: number): boolean {

@@ -26,7 +26,7 @@ export function checksGrid(checks: AssumptionChecks, frame: ModelFrame): Grid {
   return rows;
 }
 
-/** The row's position in the input range (a header is row 1), as PLUMB.RESIDUALS numbers it. */
+/** The row as PLUMB.RESIDUALS numbers it: its worksheet row, or its place in the input range. */
 function cooksRow(checks: AssumptionChecks, frame: ModelFrame): GridCell {
   if (checks.largestCooksRow >= 0) return frame.usedRows[checks.largestCooksRow];
   return checks.durbinWatson.undefinedBecause === 'exact-fit' ? 'none: exact fit, every residual is 0' : 'none: every row has leverage 1';

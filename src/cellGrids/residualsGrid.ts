@@ -3,6 +3,7 @@ import { finiteOrBlank, type Grid } from './gridCell';
 
 export const RESIDUALS_HEADER = [
   'Row',
+  'Observed',
   'Fitted',
   'Residual',
   'Standardized',
@@ -28,16 +29,20 @@ const REASON_TEXT: Record<UndefinedReason, string> = {
 };
 
 /**
- * One row per used data row. Row is that row's position in the input range (a header counts as
+ * One row per used data row. Row is numbered as the frame numbers it (the worksheet row when the
+ * frame knows where known_y sits, else the position in the input range, a header counting as
  * row 1), so rows skipped for blanks leave visible gaps and every line traces back to its data.
+ * Observed is that row's response, so a chart of observed against fitted needs no reference to
+ * the data (which would turn a blank into 0).
  */
 export function residualsGrid(diagnostics: ResidualDiagnostics, frame: ModelFrame): Grid {
-  return [[...RESIDUALS_HEADER], ...diagnostics.rows.map((row, i) => residualRow(row, frame.usedRows[i]))];
+  return [[...RESIDUALS_HEADER], ...diagnostics.rows.map((row, i) => residualRow(row, frame.usedRows[i], frame.data.y[i]))];
 }
 
-function residualRow(row: RowDiagnostics, position: number): Grid[number] {
+function residualRow(row: RowDiagnostics, rowNumber: number, observed: number): Grid[number] {
   return [
-    position,
+    rowNumber,
+    observed,
     finiteOrBlank(row.fitted),
     finiteOrBlank(row.residual),
     finiteOrBlank(row.standardized),

@@ -28,7 +28,8 @@ export type {
 } from './types';
 export { modelCache } from './fitModel';
 export type { CacheStats } from './cache/modelCache';
-export { buildModelFrame, type FrameInput, type ModelFrame, type SkippedRow } from './design/modelFrame';
+export { buildModelFrame, type FrameInput, type FrameOrigins, type ModelFrame, type SkippedRow } from './design/modelFrame';
+export { cellPlace, type RangeOrigin, rowNumber } from './design/origin';
 export { codeRow, type SourceColumn } from './design/categorical';
 export { classifyCell, describeCell, type Cell, type CellGrid, type CellValue, type CellErrorValue } from './design/cells';
 export { INTERCEPT_NAME } from './fit/design';

@@ -1,4 +1,4 @@
-import { type CellGrid, classifyCell, describeCell, EngineError, type ModelFrame } from '../engine';
+import { type CellGrid, cellPlace, classifyCell, describeCell, EngineError, type ModelFrame, type RangeOrigin } from '../engine';
 
 /**
  * The candidates grid: one row per candidate model, one 0/1 (or FALSE/TRUE) cell per source
@@ -12,7 +12,8 @@ export interface CandidateChoice {
   terms: number[];
 }
 
-export function readCandidates(grid: CellGrid, frame: ModelFrame): CandidateChoice[] {
+/** origin: where the candidates grid sits on its worksheet, so messages name its cells by address. */
+export function readCandidates(grid: CellGrid, frame: ModelFrame, origin?: RangeOrigin): CandidateChoice[] {
   const width = frame.columns.length;
   if (grid.length === 0 || grid.every((row) => row.length === 0)) {
     throw new EngineError('shape', `candidates is empty: give one row per candidate model, with a 1 or 0 for each of the ${width} columns of known_x.`);
@@ -31,7 +32,7 @@ export function readCandidates(grid: CellGrid, frame: ModelFrame): CandidateChoi
       if (cell.kind === 'boolean') return cell.value;
       throw new EngineError(
         'bad-value',
-        `candidates row ${i + 1}, column ${j + 1} ("${frame.columns[j].name}") holds ${describeCell(cell)}: ` +
+        `${cellPlace('candidates', origin, i, j, false)} ("${frame.columns[j].name}") holds ${describeCell(cell)}: ` +
           'use 1 or TRUE to include that column of known_x, 0 or FALSE to leave it out.',
       );
     });

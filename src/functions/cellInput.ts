@@ -8,6 +8,45 @@ import { type CellGrid, type CellValue, type CovarianceKind, EngineError, type F
 /** A range argument as Excel passes it: row-major, blanks as "", null or 0, errors as objects. */
 export type RangeArgument = unknown[][];
 
+/**
+ * Excel.ErrorCellValue's errorType, for an error value that carries no basicValue (the data-types
+ * form of an error, "Excel.ErrorCellValue" in the Excel JavaScript API reference).
+ */
+const ERROR_TYPE_CODES: Record<string, string> = {
+  Blocked: '#BLOCKED!',
+  Busy: '#BUSY!',
+  Calc: '#CALC!',
+  Connect: '#CONNECT!',
+  Div0: '#DIV/0!',
+  External: '#EXTERNAL!',
+  Field: '#FIELD!',
+  GettingData: '#GETTING_DATA',
+  NotAvailable: '#N/A',
+  Name: '#NAME?',
+  Null: '#NULL!',
+  Num: '#NUM!',
+  Ref: '#REF!',
+  Spill: '#SPILL!',
+  Value: '#VALUE!',
+};
+
+/**
+ * The error code of a cell argument, or undefined when it is no error. "Handle and return errors
+ * from your custom function" says errors reach a function when functions.json allows it but not in
+ * which form, so every form the Office documentation shows for an error value is read: a
+ * CustomFunctions.Error ({ code: "#N/A", message? }) and an Excel.ErrorCellValue
+ * ({ type: "Error", basicValue: "#N/A", errorType: "NotAvailable" }).
+ */
+export function errorCodeOf(value: unknown): string | undefined {
+  if (typeof value !== 'object' || value === null) return undefined;
+  if ('code' in value && typeof value.code === 'string') return value.code;
+  if ('type' in value && value.type === 'Error') {
+    if ('basicValue' in value && typeof value.basicValue === 'string' && value.basicValue.startsWith('#')) return value.basicValue;
+    if ('errorType' in value && typeof value.errorType === 'string') return ERROR_TYPE_CODES[value.errorType] ?? '#VALUE!';
+  }
+  return undefined;
+}
+
 export function toCellGrid(range: RangeArgument | null | undefined, argument: string): CellGrid {
   if (range === null || range === undefined) return [];
   if (!Array.isArray(range) || !range.every(Array.isArray)) {
@@ -19,8 +58,8 @@ export function toCellGrid(range: RangeArgument | null | undefined, argument: st
 function toCellValue(value: unknown): CellValue {
   if (value === null || value === undefined) return null;
   if (typeof value === 'number' || typeof value === 'string' || typeof value === 'boolean') return value;
-  if (typeof value === 'object' && 'code' in value && typeof value.code === 'string') return { errorCode: value.code };
-  return { errorCode: '#VALUE!' };
+  // Any other object (a data type, say) is no cell value a regression can use.
+  return { errorCode: errorCodeOf(value) ?? '#VALUE!' };
 }
 
 /** A single-cell argument may still arrive as a 1×1 range. */
@@ -37,9 +76,18 @@ function scalar(value: unknown): unknown {
 function shown(value: unknown): string {
   if (typeof value === 'string') return value.length > 40 ? `${value.slice(0, 40)}…` : value;
   if (typeof value === 'object' && value !== null) {
-    return 'code' in value && typeof value.code === 'string' ? `the error ${value.code}` : 'a value that is neither a number nor text';
+    const code = errorCodeOf(value);
+    return code === undefined ? 'a value that is neither a number nor text' : `the error ${code}`;
   }
   return String(value);
+}
+
+/** An error in a setting is never a default: #N/A there is a broken formula, not a blank. */
+function rejectErrorSetting(name: string, value: unknown): void {
+  const code = errorCodeOf(value);
+  if (code !== undefined) {
+    throw new EngineError('bad-setting', `${name} is the error ${code}: fix the cell or formula it comes from, or leave ${name} empty for its default.`);
+  }
 }
 
 function isUnset(value: unknown): boolean {
@@ -55,6 +103,10 @@ export function parseSettings(levelArg: unknown, interceptArg: unknown, sigmaArg
   const level = scalar(levelArg);
   const intercept = scalar(interceptArg);
   const sigma = scalar(sigmaArg);
+  rejectErrorSetting('level', level);
+  rejectErrorSetting('intercept', intercept);
+  rejectErrorSetting('known_sigma', sigma);
+  rejectErrorSetting('robust', scalar(robustArg));
   const settings: FitSettings = {};
   if (!isUnset(level) && level !== 0) {
     if (typeof level !== 'number' || !(level > 0 && level < 1)) {

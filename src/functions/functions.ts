@@ -5,15 +5,19 @@
  * below into functions.json and writes the CustomFunctions.associate calls.
  *
  * Shared settings, always the last five arguments and in this order: level, intercept,
- * known_sigma, weights, robust.
+ * known_sigma, weights, robust. After them every function takes the invocation Excel passes; with
+ * @requiresParameterAddresses it carries each argument's worksheet address, so rows and cells are
+ * named as the user reads them (functions.json never lists it as a parameter).
  */
 import { compareCandidates, compareNested, fitModel, predict as predictRows, residualDiagnostics, assumptionChecks, collinearity as collinearityOf, normalScores } from '../engine';
 import { guarded } from './cellError';
 import type { RangeArgument } from './cellInput';
 import { toCellGrid } from './cellInput';
 import { readCandidates } from './candidates';
+import { gatherAreas } from './gather';
 import { readModel, type ModelRequest, readPredictors } from './modelRequest';
 import { readNewRows } from './newRows';
+import { argumentOrigins } from './parameterOrigins';
 import { covarianceGrid, estimatesGrid, intervalsGrid, standardErrorsGrid } from '../cellGrids/coefficientGrids';
 import { compareGrid } from '../cellGrids/compareGrid';
 import { fitStatsGrid } from '../cellGrids/fitStatsGrid';
@@ -27,6 +31,41 @@ import { qqGrid } from '../cellGrids/qqGrid';
 
 /* eslint-disable @typescript-eslint/no-explicit-any -- ranges arrive from Excel as any[][] */
 
+type Invocation = CustomFunctions.Invocation | undefined;
+
+/** Position of weights among the arguments: after two data ranges (the usual), or after three. */
+const WEIGHTS_AFTER_TWO = 5;
+const WEIGHTS_AFTER_THREE = 6;
+
+interface SettingsAt {
+  level: any;
+  intercept: any;
+  known_sigma: any;
+  weights: any;
+  robust: any;
+  weightsIndex: number;
+}
+
+/**
+ * known_y, the predictor blocks (with their argument positions) and the settings read into a
+ * model, each range located on its worksheet.
+ */
+function requestOf(known_y: any[][], blocks: { range: any[][]; argument: string; index: number }[], settings: SettingsAt, invocation: Invocation): ModelRequest {
+  const at = argumentOrigins(invocation);
+  return readModel(
+    known_y as RangeArgument,
+    blocks.map((b) => ({ range: b.range as RangeArgument, argument: b.argument })),
+    {
+      level: settings.level,
+      intercept: settings.intercept,
+      knownSigma: settings.known_sigma,
+      weights: settings.weights as RangeArgument | null,
+      robust: settings.robust,
+    },
+    { y: at(0), x: blocks.map((b) => at(b.index)), weights: at(settings.weightsIndex) },
+  );
+}
+
 function request(
   known_y: any[][],
   known_x: any[][],
@@ -34,15 +73,15 @@ function request(
   intercept: any,
   known_sigma: any,
   weights: any,
-  robust?: any,
+  robust: any,
+  invocation: Invocation,
 ): ModelRequest {
-  return readModel(known_y as RangeArgument, [{ range: known_x as RangeArgument, argument: 'known_x' }], {
-    level,
-    intercept,
-    knownSigma: known_sigma,
-    weights: weights as RangeArgument | null,
-    robust,
-  });
+  return requestOf(
+    known_y,
+    [{ range: known_x, argument: 'known_x', index: 1 }],
+    { level, intercept, known_sigma, weights, robust, weightsIndex: WEIGHTS_AFTER_TWO },
+    invocation,
+  );
 }
 
 function fitOf(r: ModelRequest) {
@@ -59,10 +98,21 @@ function fitOf(r: ModelRequest) {
  * @param [known_sigma] The noise standard deviation if known from outside the data. Default: estimated.
  * @param [weights] Optional column of positive case weights, same rows as known_y.
  * @param [robust] FALSE (default) for classical standard errors; TRUE for heteroscedasticity-consistent HC3, or the text "HC0", "HC1", "HC3" or "classical".
+ * @param invocation Passed by Excel: the address of each argument, to name rows and cells as the worksheet does.
+ * @requiresParameterAddresses
  * @returns A table with a header row and one row per term.
  */
-export function terms(known_y: any[][], known_x: any[][], level?: any, intercept?: any, known_sigma?: any, weights?: any[][], robust?: any): any[][] {
-  return guarded(() => termsGrid(fitOf(request(known_y, known_x, level, intercept, known_sigma, weights, robust))));
+export function terms(
+  known_y: any[][],
+  known_x: any[][],
+  level?: any,
+  intercept?: any,
+  known_sigma?: any,
+  weights?: any[][],
+  robust?: any,
+  invocation?: CustomFunctions.Invocation,
+): any[][] {
+  return guarded(() => termsGrid(fitOf(request(known_y, known_x, level, intercept, known_sigma, weights, robust, invocation))));
 }
 
 /**
@@ -75,10 +125,21 @@ export function terms(known_y: any[][], known_x: any[][], level?: any, intercept
  * @param [known_sigma] The noise standard deviation if known. Default: estimated.
  * @param [weights] Optional column of positive case weights, same rows as known_y.
  * @param [robust] Accepted as in every PLUMB function; the estimates do not depend on it.
+ * @param invocation Passed by Excel: the address of each argument, to name rows and cells as the worksheet does.
+ * @requiresParameterAddresses
  * @returns One column of numbers.
  */
-export function estimates(known_y: any[][], known_x: any[][], level?: any, intercept?: any, known_sigma?: any, weights?: any[][], robust?: any): any[][] {
-  return guarded(() => estimatesGrid(fitOf(request(known_y, known_x, level, intercept, known_sigma, weights, robust))));
+export function estimates(
+  known_y: any[][],
+  known_x: any[][],
+  level?: any,
+  intercept?: any,
+  known_sigma?: any,
+  weights?: any[][],
+  robust?: any,
+  invocation?: CustomFunctions.Invocation,
+): any[][] {
+  return guarded(() => estimatesGrid(fitOf(request(known_y, known_x, level, intercept, known_sigma, weights, robust, invocation))));
 }
 
 /**
@@ -91,10 +152,21 @@ export function estimates(known_y: any[][], known_x: any[][], level?: any, inter
  * @param [known_sigma] The noise standard deviation if known. Default: estimated.
  * @param [weights] Optional column of positive case weights, same rows as known_y.
  * @param [robust] FALSE (default) for classical standard errors; TRUE for heteroscedasticity-consistent HC3, or the text "HC0", "HC1", "HC3" or "classical".
+ * @param invocation Passed by Excel: the address of each argument, to name rows and cells as the worksheet does.
+ * @requiresParameterAddresses
  * @returns One column of standard errors.
  */
-export function stdErrors(known_y: any[][], known_x: any[][], level?: any, intercept?: any, known_sigma?: any, weights?: any[][], robust?: any): any[][] {
-  return guarded(() => standardErrorsGrid(fitOf(request(known_y, known_x, level, intercept, known_sigma, weights, robust))));
+export function stdErrors(
+  known_y: any[][],
+  known_x: any[][],
+  level?: any,
+  intercept?: any,
+  known_sigma?: any,
+  weights?: any[][],
+  robust?: any,
+  invocation?: CustomFunctions.Invocation,
+): any[][] {
+  return guarded(() => standardErrorsGrid(fitOf(request(known_y, known_x, level, intercept, known_sigma, weights, robust, invocation))));
 }
 
 /**
@@ -107,10 +179,21 @@ export function stdErrors(known_y: any[][], known_x: any[][], level?: any, inter
  * @param [known_sigma] The noise standard deviation if known. Default: estimated.
  * @param [weights] Optional column of positive case weights, same rows as known_y.
  * @param [robust] FALSE (default) for classical standard errors; TRUE for heteroscedasticity-consistent HC3, or the text "HC0", "HC1", "HC3" or "classical".
+ * @param invocation Passed by Excel: the address of each argument, to name rows and cells as the worksheet does.
+ * @requiresParameterAddresses
  * @returns Two columns: low and high.
  */
-export function intervals(known_y: any[][], known_x: any[][], level?: any, intercept?: any, known_sigma?: any, weights?: any[][], robust?: any): any[][] {
-  return guarded(() => intervalsGrid(fitOf(request(known_y, known_x, level, intercept, known_sigma, weights, robust))));
+export function intervals(
+  known_y: any[][],
+  known_x: any[][],
+  level?: any,
+  intercept?: any,
+  known_sigma?: any,
+  weights?: any[][],
+  robust?: any,
+  invocation?: CustomFunctions.Invocation,
+): any[][] {
+  return guarded(() => intervalsGrid(fitOf(request(known_y, known_x, level, intercept, known_sigma, weights, robust, invocation))));
 }
 
 /**
@@ -123,10 +206,21 @@ export function intervals(known_y: any[][], known_x: any[][], level?: any, inter
  * @param [known_sigma] The noise standard deviation if known. Default: estimated.
  * @param [weights] Optional column of positive case weights, same rows as known_y.
  * @param [robust] FALSE (default) for classical standard errors; TRUE for heteroscedasticity-consistent HC3, or the text "HC0", "HC1", "HC3" or "classical".
+ * @param invocation Passed by Excel: the address of each argument, to name rows and cells as the worksheet does.
+ * @requiresParameterAddresses
  * @returns A square matrix, one row and column per term.
  */
-export function covariance(known_y: any[][], known_x: any[][], level?: any, intercept?: any, known_sigma?: any, weights?: any[][], robust?: any): any[][] {
-  return guarded(() => covarianceGrid(fitOf(request(known_y, known_x, level, intercept, known_sigma, weights, robust))));
+export function covariance(
+  known_y: any[][],
+  known_x: any[][],
+  level?: any,
+  intercept?: any,
+  known_sigma?: any,
+  weights?: any[][],
+  robust?: any,
+  invocation?: CustomFunctions.Invocation,
+): any[][] {
+  return guarded(() => covarianceGrid(fitOf(request(known_y, known_x, level, intercept, known_sigma, weights, robust, invocation))));
 }
 
 /**
@@ -139,11 +233,22 @@ export function covariance(known_y: any[][], known_x: any[][], level?: any, inte
  * @param [known_sigma] The noise standard deviation if known. Default: estimated.
  * @param [weights] Optional column of positive case weights, same rows as known_y.
  * @param [robust] Accepted as in every PLUMB function; these statistics, the F test included, stay classical.
+ * @param invocation Passed by Excel: the address of each argument, to name rows and cells as the worksheet does.
+ * @requiresParameterAddresses
  * @returns Two columns: label and value.
  */
-export function fitStats(known_y: any[][], known_x: any[][], level?: any, intercept?: any, known_sigma?: any, weights?: any[][], robust?: any): any[][] {
+export function fitStats(
+  known_y: any[][],
+  known_x: any[][],
+  level?: any,
+  intercept?: any,
+  known_sigma?: any,
+  weights?: any[][],
+  robust?: any,
+  invocation?: CustomFunctions.Invocation,
+): any[][] {
   return guarded(() => {
-    const r = request(known_y, known_x, level, intercept, known_sigma, weights, robust);
+    const r = request(known_y, known_x, level, intercept, known_sigma, weights, robust, invocation);
     return fitStatsGrid(fitOf(r), r.frame);
   });
 }
@@ -159,6 +264,8 @@ export function fitStats(known_y: any[][], known_x: any[][], level?: any, interc
  * @param [known_sigma] The noise standard deviation if known. Default: estimated from the larger model.
  * @param [weights] Optional column of positive case weights, same rows as known_y.
  * @param [robust] Accepted as in every PLUMB function; the nested F test stays classical.
+ * @param invocation Passed by Excel: the address of each argument, to name rows and cells as the worksheet does.
+ * @requiresParameterAddresses
  * @returns Two columns: label and value, ending with a reading.
  */
 export function nestedF(
@@ -170,15 +277,17 @@ export function nestedF(
   known_sigma?: any,
   weights?: any[][],
   robust?: any,
+  invocation?: CustomFunctions.Invocation,
 ): any[][] {
   return guarded(() => {
-    const r = readModel(
-      known_y as RangeArgument,
+    const r = requestOf(
+      known_y,
       [
-        { range: base_x as RangeArgument, argument: 'base_x' },
-        { range: added_x as RangeArgument, argument: 'added_x' },
+        { range: base_x, argument: 'base_x', index: 1 },
+        { range: added_x, argument: 'added_x', index: 2 },
       ],
-      { level, intercept, knownSigma: known_sigma, weights: weights as RangeArgument | null, robust },
+      { level, intercept, known_sigma, weights, robust, weightsIndex: WEIGHTS_AFTER_THREE },
+      invocation,
     );
     const { x, y, weights: w } = r.frame.data;
     const inBase = r.frame.termBlocks.map((b) => b === 0);
@@ -206,6 +315,8 @@ export function nestedF(
  * @param [known_sigma] The noise standard deviation if known. Default: estimated.
  * @param [weights] Optional column of positive case weights, same rows as known_y. New rows have weight 1.
  * @param [robust] Accepted as in every PLUMB function; both intervals use the classical covariance.
+ * @param invocation Passed by Excel: the address of each argument, to name rows and cells as the worksheet does.
+ * @requiresParameterAddresses
  * @returns One row per new row: prediction, mean low and high, new low and high.
  */
 export function predict(
@@ -217,10 +328,16 @@ export function predict(
   known_sigma?: any,
   weights?: any[][],
   robust?: any,
+  invocation?: CustomFunctions.Invocation,
 ): any[][] {
   return guarded(() => {
-    const r = request(known_y, known_x, level, intercept, known_sigma, weights, robust);
-    const { rows } = readNewRows(toCellGrid(new_x as RangeArgument, 'new_x'), r.frame);
+    const r = requestOf(
+      known_y,
+      [{ range: known_x, argument: 'known_x', index: 1 }],
+      { level, intercept, known_sigma, weights, robust, weightsIndex: WEIGHTS_AFTER_THREE },
+      invocation,
+    );
+    const { rows } = readNewRows(toCellGrid(new_x as RangeArgument, 'new_x'), r.frame, argumentOrigins(invocation)(2));
     const complete = rows.filter((row): row is number[] => row !== undefined);
     const predicted = complete.length > 0 ? predictRows(r.frame.data, complete, r.settings) : [];
     let next = 0;
@@ -232,7 +349,7 @@ export function predict(
 }
 
 /**
- * Which rows stand out: fitted value, residual, standardized and studentized residuals, leverage, Cook's distance, DFFITS and a flag for every row used.
+ * Which rows stand out: observed and fitted value, residual, standardized and studentized residuals, leverage, Cook's distance, DFFITS and a flag for every row used.
  * @customfunction RESIDUALS
  * @param known_y Responses: one column, with an optional text header.
  * @param known_x Predictors: one or more columns with the same rows. Text columns are categorical.
@@ -241,11 +358,22 @@ export function predict(
  * @param [known_sigma] The noise standard deviation if known; used for the standardized residual and Cook's distance. Default: estimated.
  * @param [weights] Optional column of positive case weights, same rows as known_y.
  * @param [robust] Accepted as in every PLUMB function; it does not change these diagnostics.
- * @returns A table with a header row and one row per row used, numbered by its position in known_y.
+ * @param invocation Passed by Excel: the address of each argument, to name rows and cells as the worksheet does.
+ * @requiresParameterAddresses
+ * @returns A table with a header row and one row per row used: its worksheet row (its position in known_y when known_y is no reference), the observed response, then the diagnostics.
  */
-export function residuals(known_y: any[][], known_x: any[][], level?: any, intercept?: any, known_sigma?: any, weights?: any[][], robust?: any): any[][] {
+export function residuals(
+  known_y: any[][],
+  known_x: any[][],
+  level?: any,
+  intercept?: any,
+  known_sigma?: any,
+  weights?: any[][],
+  robust?: any,
+  invocation?: CustomFunctions.Invocation,
+): any[][] {
   return guarded(() => {
-    const r = request(known_y, known_x, level, intercept, known_sigma, weights, robust);
+    const r = request(known_y, known_x, level, intercept, known_sigma, weights, robust, invocation);
     return residualsGrid(residualDiagnostics(r.frame.data, r.settings), r.frame);
   });
 }
@@ -261,6 +389,8 @@ export function residuals(known_y: any[][], known_x: any[][], level?: any, inter
  * @param [known_sigma] The noise standard deviation if known; the likelihoods then use it. Default: estimated.
  * @param [weights] Optional column of positive case weights, same rows as known_y.
  * @param [robust] Accepted as in every PLUMB function; AIC and BIC do not depend on it.
+ * @param invocation Passed by Excel: the address of each argument, to name rows and cells as the worksheet does.
+ * @requiresParameterAddresses
  * @returns A table with a header row and one row per candidate, best (smallest BIC) first.
  */
 export function compare(
@@ -272,10 +402,16 @@ export function compare(
   known_sigma?: any,
   weights?: any[][],
   robust?: any,
+  invocation?: CustomFunctions.Invocation,
 ): any[][] {
   return guarded(() => {
-    const r = request(known_y, known_x, level, intercept, known_sigma, weights, robust);
-    const choices = readCandidates(toCellGrid(candidates as RangeArgument, 'candidates'), r.frame);
+    const r = requestOf(
+      known_y,
+      [{ range: known_x, argument: 'known_x', index: 1 }],
+      { level, intercept, known_sigma, weights, robust, weightsIndex: WEIGHTS_AFTER_THREE },
+      invocation,
+    );
+    const choices = readCandidates(toCellGrid(candidates as RangeArgument, 'candidates'), r.frame, argumentOrigins(invocation)(2));
     const results = compareCandidates(
       r.frame.data,
       choices.map((c) => c.terms),
@@ -284,8 +420,6 @@ export function compare(
     return compareGrid(results, choices, r.frame);
   });
 }
-
-// Imports of the checks below sit with them so that this block can be appended on its own.
 
 /**
  * How far each predictor is explained by the others: VIF and tolerance for every term, and the condition number of the design.
@@ -296,11 +430,23 @@ export function compare(
  * @param [known_sigma] Accepted as in every PLUMB function; collinearity does not depend on it.
  * @param [weights] Optional column of positive case weights, same rows as known_x.
  * @param [robust] Accepted as in every PLUMB function; collinearity does not depend on it.
+ * @param invocation Passed by Excel: the address of each argument, to name rows and cells as the worksheet does.
+ * @requiresParameterAddresses
  * @returns A table with a header row, one row per term, and a last row with the condition number and its reading.
  */
-export function collinearity(known_x: any[][], level?: any, intercept?: any, known_sigma?: any, weights?: any[][], robust?: any): any[][] {
+export function collinearity(
+  known_x: any[][],
+  level?: any,
+  intercept?: any,
+  known_sigma?: any,
+  weights?: any[][],
+  robust?: any,
+  invocation?: CustomFunctions.Invocation,
+): any[][] {
   return guarded(() => {
-    const r = readPredictors(known_x as RangeArgument, { level, intercept, knownSigma: known_sigma, weights: weights as RangeArgument | null, robust });
+    const at = argumentOrigins(invocation);
+    const settings = { level, intercept, knownSigma: known_sigma, weights: weights as RangeArgument | null, robust };
+    const r = readPredictors(known_x as RangeArgument, settings, { x: at(0), weights: at(4) });
     const { x, names, weights: w } = r.frame.data;
     return collinearityGrid(collinearityOf(x, names, w, r.settings));
   });
@@ -316,11 +462,22 @@ export function collinearity(known_x: any[][], level?: any, intercept?: any, kno
  * @param [known_sigma] The noise standard deviation if known; used for Cook's distance only. Default: estimated.
  * @param [weights] Optional column of positive case weights, same rows as known_y; the checks use the weighted residuals.
  * @param [robust] Accepted as in every PLUMB function; the checks do not depend on it (uneven spread is a reason to turn it on elsewhere).
+ * @param invocation Passed by Excel: the address of each argument, to name rows and cells as the worksheet does.
+ * @requiresParameterAddresses
  * @returns Two columns: label and value, ending with an overall reading.
  */
-export function checks(known_y: any[][], known_x: any[][], level?: any, intercept?: any, known_sigma?: any, weights?: any[][], robust?: any): any[][] {
+export function checks(
+  known_y: any[][],
+  known_x: any[][],
+  level?: any,
+  intercept?: any,
+  known_sigma?: any,
+  weights?: any[][],
+  robust?: any,
+  invocation?: CustomFunctions.Invocation,
+): any[][] {
   return guarded(() => {
-    const r = request(known_y, known_x, level, intercept, known_sigma, weights, robust);
+    const r = request(known_y, known_x, level, intercept, known_sigma, weights, robust, invocation);
     return checksGrid(assumptionChecks(r.frame.data, r.settings), r.frame);
   });
 }
@@ -335,11 +492,34 @@ export function checks(known_y: any[][], known_x: any[][], level?: any, intercep
  * @param [known_sigma] The noise standard deviation if known. Default: estimated.
  * @param [weights] Optional column of positive case weights, same rows as known_y.
  * @param [robust] Accepted as in every PLUMB function; it does not change these points.
- * @returns Three columns: normal quantile, studentized residual, and the row in the input range; roughly a straight line when the residuals are normal.
+ * @param invocation Passed by Excel: the address of each argument, to name rows and cells as the worksheet does.
+ * @requiresParameterAddresses
+ * @returns Three columns: normal quantile, studentized residual, and the worksheet row, as PLUMB.RESIDUALS numbers it; roughly a straight line when the residuals are normal.
  */
-export function qqPoints(known_y: any[][], known_x: any[][], level?: any, intercept?: any, known_sigma?: any, weights?: any[][], robust?: any): any[][] {
+export function qqPoints(
+  known_y: any[][],
+  known_x: any[][],
+  level?: any,
+  intercept?: any,
+  known_sigma?: any,
+  weights?: any[][],
+  robust?: any,
+  invocation?: CustomFunctions.Invocation,
+): any[][] {
   return guarded(() => {
-    const r = request(known_y, known_x, level, intercept, known_sigma, weights, robust);
+    const r = request(known_y, known_x, level, intercept, known_sigma, weights, robust, invocation);
     return qqGrid(normalScores(residualDiagnostics(r.frame.data, r.settings)), r.frame);
   });
+}
+
+/**
+ * Several ranges side by side as one block, cell for cell: blanks stay blank and errors stay the same errors, so PLUMB functions that read the block skip and report the same rows as in the source cells (a plain reference would turn blanks into 0).
+ * @customfunction GATHER
+ * @param areas One or more ranges with the same number of rows, such as B2:B61, D2:E61; they are joined left to right.
+ * @param invocation Passed by Excel: the address of each argument, to name an area that does not fit.
+ * @requiresParameterAddresses
+ * @returns The areas joined left to right, one row per row of the areas.
+ */
+export function gather(areas: any[][][], invocation?: CustomFunctions.Invocation): any[][] {
+  return guarded(() => gatherAreas(areas, invocation?.parameterAddresses ?? []));
 }

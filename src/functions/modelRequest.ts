@@ -1,4 +1,4 @@
-import { buildModelFrame, classifyCell, EngineError, type FitSettings, type ModelFrame } from '../engine';
+import { buildModelFrame, classifyCell, EngineError, type FitSettings, type FrameOrigins, type ModelFrame, type RangeOrigin } from '../engine';
 import { parseSettings, type RangeArgument, toCellGrid } from './cellInput';
 
 /** What every PLUMB function reads first: its ranges as a model frame, and the shared settings. */
@@ -15,7 +15,13 @@ export interface SettingArguments {
   robust?: unknown;
 }
 
-export function readModel(knownY: RangeArgument, xBlocks: { range: RangeArgument; argument: string }[], s: SettingArguments): ModelRequest {
+/** origins: where the ranges sit on their worksheets, so messages and row numbers are the user's. */
+export function readModel(
+  knownY: RangeArgument,
+  xBlocks: { range: RangeArgument; argument: string }[],
+  s: SettingArguments,
+  origins?: FrameOrigins,
+): ModelRequest {
   const settings = parseSettings(s.level, s.intercept, s.knownSigma, s.robust);
   const weights = s.weights === null || s.weights === undefined ? undefined : toCellGrid(s.weights, 'weights');
   const frame = buildModelFrame({
@@ -24,6 +30,7 @@ export function readModel(knownY: RangeArgument, xBlocks: { range: RangeArgument
     xArguments: xBlocks.map((b) => b.argument),
     weights: weights !== undefined && weights.length > 0 ? weights : undefined,
     intercept: settings.intercept ?? true,
+    origins,
   });
   return { frame, settings };
 }
@@ -35,7 +42,7 @@ export function readModel(knownY: RangeArgument, xBlocks: { range: RangeArgument
  * cell in it is text (a text header on every column is what the other functions require too).
  * The zeros' values never reach a result: callers use only the frame's x, names and weights.
  */
-export function readPredictors(knownX: RangeArgument, s: SettingArguments): ModelRequest {
+export function readPredictors(knownX: RangeArgument, s: SettingArguments, origins?: { x?: RangeOrigin; weights?: RangeOrigin }): ModelRequest {
   const x = toCellGrid(knownX, 'known_x');
   if (x.length === 0 || x[0].length === 0) throw new EngineError('no-rows', 'known_x is empty: select the predictor columns.');
   const weightRows = s.weights === null || s.weights === undefined ? 0 : toCellGrid(s.weights, 'weights').length;
@@ -44,5 +51,6 @@ export function readPredictors(knownX: RangeArgument, s: SettingArguments): Mode
   }
   const hasHeader = x.length > 1 && x[0].every((cell) => classifyCell(cell).kind === 'text');
   const standIn = x.map((_, i): unknown[] => [hasHeader && i === 0 ? 'y' : 0]);
-  return readModel(standIn, [{ range: knownX, argument: 'known_x' }], s);
+  // The stand-in sits beside known_x, so rows are numbered by known_x's worksheet rows.
+  return readModel(standIn, [{ range: knownX, argument: 'known_x' }], s, { y: origins?.x, x: [origins?.x], weights: origins?.weights });
 }

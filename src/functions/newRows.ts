@@ -1,4 +1,4 @@
-import { type CellGrid, classifyCell, codeRow, describeCell, EngineError, type ModelFrame } from '../engine';
+import { type CellGrid, cellPlace, classifyCell, codeRow, describeCell, EngineError, type ModelFrame, type RangeOrigin, rowNumber } from '../engine';
 
 export interface NewRows {
   /** Coded rows in fit column order; undefined where the new row has a blank and is not predicted. */
@@ -7,14 +7,15 @@ export interface NewRows {
 
 /**
  * new_x in the layout of known_x: the same source columns, categorical ones as level text. A
- * first row that repeats known_x's headers is taken as a header and skipped.
+ * first row that repeats known_x's headers is taken as a header and skipped. origin: where new_x
+ * sits on its worksheet, so messages name its cells by address.
  */
-export function readNewRows(grid: CellGrid, frame: ModelFrame): NewRows {
+export function readNewRows(grid: CellGrid, frame: ModelFrame, origin?: RangeOrigin): NewRows {
   const width = frame.columns.length;
   if (grid.length === 0) throw new EngineError('shape', 'new_x is empty: select the rows to predict.');
   grid.forEach((row, i) => {
     if (row.length !== width) {
-      throw new EngineError('shape', `new_x row ${i + 1} has ${row.length} columns; known_x has ${width}. Lay new rows out like known_x.`);
+      throw new EngineError('shape', `new_x row ${rowNumber(origin, i)} has ${row.length} columns; known_x has ${width}. Lay new rows out like known_x.`);
     }
   });
   const repeatsHeader = (row: CellGrid[number]): boolean =>
@@ -34,7 +35,7 @@ export function readNewRows(grid: CellGrid, frame: ModelFrame): NewRows {
       if (cell.kind === 'text' && column.kind === 'categorical') return cell.text;
       throw new EngineError(
         'bad-value',
-        `new_x row ${k + start + 1}, column ${j + 1} ("${column.name}") holds ${describeCell(cell)}; ` +
+        `${cellPlace('new_x', origin, k + start, j, false)} ("${column.name}") holds ${describeCell(cell)}; ` +
           (column.kind === 'numeric' ? 'it needs a number.' : `it needs one of the levels ${column.levels.join(', ')}.`),
       );
     });

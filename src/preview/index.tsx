@@ -6,21 +6,19 @@ import { render } from 'preact';
 import { loadDemo } from './demo/demoWorkbook';
 import { installOfficeShim } from './shim/install';
 import { PreviewApp } from './ui/PreviewApp';
-import { createWorkbook, type FunctionShape } from './workbook/workbook';
+import { createWorkbook } from './workbook/workbook';
 
 const workbook = createWorkbook();
 loadDemo(workbook);
-installOfficeShim(workbook);
+const settings = installOfficeShim(workbook);
+// For browser tests and a curious person's console: the model (cell edit mode, blanks as 0,
+// selection) and the shim's live settings (sync delay, payload limit).
+(globalThis as unknown as { plumblinePreview: unknown }).plumblinePreview = { workbook, settings };
 
-/** functions.json tells which arguments are single values, as Excel learns it from the same file. */
+/** functions.json tells how each argument is passed, as Excel learns it from the same file. */
 async function loadFunctionShapes(): Promise<void> {
   const response = await fetch('functions.json');
-  const metadata = (await response.json()) as { functions: { id: string; parameters: { dimensionality?: string; optional?: boolean }[] }[] };
-  const shapes: FunctionShape[] = metadata.functions.map((f) => ({
-    id: f.id,
-    parameters: f.parameters.map((p) => ({ dimensionality: p.dimensionality === 'matrix' ? 'matrix' : 'scalar', optional: p.optional === true })),
-  }));
-  workbook.setFunctionShapes(shapes);
+  workbook.loadFunctionMetadata(await response.json());
 }
 
 void loadFunctionShapes();

@@ -1,10 +1,11 @@
 import { useMemo, useRef, useState } from 'preact/hooks';
 import { freezeActiveReport } from './excel/freezeCopy';
-import { ReadCancelled } from './excel/readInBlocks';
-import { selectedAddress } from './excel/selection';
+import { ReadCancelled } from './excel/readRowBlocks';
+import { selectedAreas } from './excel/selection';
+import { clipChoiceAddresses } from './excel/usedRows';
 import { writeReport } from './excel/writeReport';
 import { analyze } from './model/analysis';
-import { EMPTY_CHOICES, type FieldProblem, type PaneChoices, resolveRanges } from './model/choices';
+import { EMPTY_CHOICES, type FieldProblem, type PaneChoices, type ResolvedRanges, resolveRanges, singleAreaProblem } from './model/choices';
 import { planReport } from './model/reportPlan';
 import { analyzeStreamed } from './model/streamedAnalysis';
 import { type PaneData, readData } from './readData';
@@ -46,11 +47,30 @@ export function App() {
 
   const useSelection = (field: 'response' | 'predictors' | 'weights' | 'newRows', append = false) => async () => {
     try {
-      const address = await selectedAddress();
+      const areas = await selectedAreas();
+      const problem = singleAreaProblem(field, areas);
+      setProblems((found) => [...found.filter((p) => p.field !== field), ...(problem === undefined ? [] : [problem])]);
+      if (problem !== undefined) return;
+      const address = areas.join(',');
       setChoices((c) => ({ ...c, [field]: append && c[field].trim() !== '' ? `${c[field]},${address}` : address, ...(field === 'predictors' ? { added: [] } : {}) }));
     } catch (error) {
       setStatus({ kind: 'failed', message: failure(error) });
     }
+  };
+
+  /** The choices with whole columns clipped to the rows in use (the fields show it), resolved to ranges. */
+  const resolveChosen = async (): Promise<{ ranges: ResolvedRanges; chosen: PaneChoices } | undefined> => {
+    let chosen: PaneChoices;
+    try {
+      chosen = await clipChoiceAddresses(choices);
+    } catch (error) {
+      setStatus({ kind: 'failed', message: failure(error) });
+      return undefined;
+    }
+    if (chosen !== choices) setChoices(chosen);
+    const { ranges, problems: found } = resolveRanges(chosen);
+    setProblems(found);
+    return ranges === undefined ? undefined : { ranges, chosen };
   };
 
   /** Runs a block read with the progress bar and Cancel; a cancelled read leaves nothing behind. */
@@ -68,30 +88,30 @@ export function App() {
   };
 
   const readAndFit = async () => {
-    const { ranges, problems: found } = resolveRanges(choices);
-    setProblems(found);
-    if (ranges === undefined) return;
+    const resolved = await resolveChosen();
+    if (resolved === undefined) return;
     setData(undefined);
     setStatus({ kind: 'idle' });
     await withReading(async (progress, signal) => {
-      setData(await readData(ranges, progress, signal));
+      setData(await readData(resolved.ranges, progress, signal));
     });
   };
 
   const report = async () => {
-    const { ranges, problems: found } = resolveRanges(choices);
-    setProblems(found);
-    if (ranges === undefined || analysis === undefined || typeof analysis === 'string' || data === undefined) return;
+    if (analysis === undefined || typeof analysis === 'string' || data === undefined) return;
+    const resolved = await resolveChosen();
+    if (resolved === undefined) return;
+    const { ranges, chosen } = resolved;
     setStatus({ kind: 'busy', what: 'Writing the report…' });
     try {
       if ('kind' in analysis && data.kind === 'streamed') {
-        const written = await writeValuesReport(ranges, choices, analysis, data.dataRows);
+        const written = await writeValuesReport(ranges, chosen, analysis, data.dataRows);
         setSaved(written);
         setStatus({ kind: 'done', message: `Report written to the new sheet "${written.sheetName}" as values: the data are too large for live formulas. Use Refresh after the data change.` });
         return;
       }
       if ('kind' in analysis) return;
-      const name = await writeReport((sheetName) => planReport({ sheetName, ranges, choices, analysis, writtenAt: new Date() }));
+      const name = await writeReport((sheetName) => planReport({ sheetName, ranges, choices: chosen, analysis, writtenAt: new Date() }));
       setStatus({ kind: 'done', message: `Report written to the new sheet "${name}". Its formulas stay live: edit the data or its settings cells and it recalculates.` });
     } catch (error) {
       setStatus({ kind: 'failed', message: `No report was written: ${failure(error)}` });

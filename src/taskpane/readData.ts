@@ -50,7 +50,7 @@ async function readCells(sources: BlockSources, progress: (read: number, total: 
     },
     signal,
   );
-  return { kind: 'cells', data: { response, predictorColumns: predictors, weights: sources.weights === undefined ? undefined : weights } };
+  return { kind: 'cells', data: { response, predictorColumns: predictors, weights: sources.weights === undefined ? undefined : weights, sources } };
 }
 
 async function readStreamed(sources: BlockSources, progress: (read: number, total: number) => void, signal: AbortSignal): Promise<PaneData> {

@@ -1,5 +1,6 @@
 import type { CellGrid } from '../engine';
 import { readRanges } from './excel/readRanges';
+import { ReadCancelled } from './excel/readRowBlocks';
 import { rewriteReport } from './excel/rewriteReport';
 import { writeReport } from './excel/writeReport';
 import { occupiedAddresses } from './excel/occupiedCells';
@@ -64,8 +65,17 @@ export async function refreshValuesReport(saved: SavedValuesReport, progress: (r
   if (occupied.length > 0) {
     throw new Error(`Refresh would write over cells filled since the report was written (${occupied.slice(0, 3).join(', ')}${occupied.length > 3 ? ', …' : ''}). Move them, or write a new report.`);
   }
-  await rewriteReport(saved.sheetName, saved.cells, plan);
+  // The table first: if it stops half way, the report's own cells still match the saved report.
   await clearResidualTable(saved.sheetName, saved.residualRows);
-  const residualRows = await writeResidualTable(saved.sheetName, saved.ranges, analysis, progress, signal);
+  let residualRows: number;
+  try {
+    residualRows = await writeResidualTable(saved.sheetName, saved.ranges, analysis, progress, signal);
+  } catch (error) {
+    // The error to report is the first one; a sheet deleted meanwhile has nothing left to clear.
+    await clearResidualTable(saved.sheetName, Math.max(saved.residualRows, analysis.fit.n)).catch(() => undefined);
+    const why = error instanceof ReadCancelled ? 'it was cancelled' : error instanceof Error ? error.message : String(error);
+    throw new Error(`Refresh stopped (${why}). The report keeps its previous results and its residual table was cleared: press Refresh again.`);
+  }
+  await rewriteReport(saved.sheetName, saved.cells, plan);
   return { ...saved, cells: plan.cells, residualRows };
 }

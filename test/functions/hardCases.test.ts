@@ -97,24 +97,22 @@ describe('hard cases', () => {
     expectClose(datedIntercept, shiftedIntercept - shiftedSlope * 45000, 1e-9);
   });
 
-  // Excel's widest range: the answer must come promptly and name rows against parameters. The
-  // count is of independent parameters (the rank), as the engine reports it for aliased designs.
-  it('a 16,384-column x over 3 rows: a quick, clear rows-versus-parameters error', () => {
+  // Excel's widest range: the answer names rows against parameters. The count is of independent
+  // parameters (the rank), as the engine reports it for aliased designs. No timing is asserted
+  // (speed is the bench's job); the old per-column refactorization would exceed the test timeout.
+  it('a 16,384-column x over 3 rows: a clear rows-versus-parameters error', () => {
     const wide = [0, 1, 2].map((i) => Array.from({ length: 16_384 }, (_, j) => (i * 7 + j * 13) % 17));
-    const start = performance.now();
     const error = thrownBy(() => terms(column([1, 2, 3]), wide));
-    expect(performance.now() - start).toBeLessThan(1000);
     expect(error.message).toBe(
       '3 rows cannot estimate 3 parameters with any left over to measure the noise: the model needs more rows than parameters.',
     );
   });
 
-  // Before the fix each aliased column got its own refactorization: about five minutes.
-  it('a 16,384-column x over 3 rows in COLLINEARITY: every term marked, within a second', () => {
+  // Before the fix each aliased column got its own refactorization: about five minutes, far past
+  // the test timeout.
+  it('a 16,384-column x over 3 rows in COLLINEARITY: every term marked', () => {
     const wide = [0, 1, 2].map((i) => Array.from({ length: 16_384 }, (_, j) => (i * 7 + j * 13) % 17));
-    const start = performance.now();
     const grid = collinearity(wide);
-    expect(performance.now() - start).toBeLessThan(1000);
     expect(grid).toHaveLength(16_384 + 2);
     expect(grid[16_384][2]).toBe('perfectly collinear: an exact combination of the other terms');
   });

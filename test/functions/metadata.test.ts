@@ -12,10 +12,13 @@ interface Parameter {
   description?: string;
   dimensionality?: string;
   optional?: boolean;
+  repeating?: boolean;
+  type?: string;
 }
 interface FunctionMetadata {
   id: string;
   description?: string;
+  options?: { requiresParameterAddresses?: boolean };
   parameters: Parameter[];
   result: { dimensionality?: string };
 }
@@ -46,8 +49,30 @@ beforeAll(async () => {
 });
 
 describe('generated function metadata', () => {
-  it('lists exactly the thirteen PLUMB functions', () => {
-    expect(functions.map((f) => f.id).sort()).toEqual(Object.keys(DATA_ARGUMENTS).sort());
+  it('lists exactly the fourteen PLUMB functions', () => {
+    expect(functions.map((f) => f.id).sort()).toEqual([...Object.keys(DATA_ARGUMENTS), 'GATHER'].sort());
+  });
+
+  // "Manually create JSON metadata for custom functions" (options: requiresParameterAddresses,
+  // which needs a matrix result) and "Custom functions parameter options" (the invocation
+  // parameter is passed by Excel, never shown to the user as an argument).
+  it('asks for parameter addresses in every function, and never lists the invocation as a parameter', () => {
+    for (const fn of functions) {
+      expect(fn.options?.requiresParameterAddresses).toBe(true);
+      expect(fn.result.dimensionality).toBe('matrix');
+      expect(fn.parameters.map((p) => p.name)).not.toContain('invocation');
+    }
+  });
+
+  // "Custom functions parameter options" (Repeating parameters): an any[][][] parameter becomes
+  // repeating, a matrix of type any ("allowErrorForDataTypeAny" applies to any and any[][]).
+  it('GATHER takes one repeating matrix parameter of any type', () => {
+    const fn = functions.find((f) => f.id === 'GATHER')!;
+    expect(fn.description?.length ?? 0).toBeGreaterThan(30);
+    expect(fn.parameters).toHaveLength(1);
+    const [areas] = fn.parameters;
+    expect(areas).toMatchObject({ name: 'areas', repeating: true, dimensionality: 'matrix', type: 'any' });
+    expect(areas.description?.length ?? 0).toBeGreaterThan(10);
   });
 
   it.each(Object.entries(DATA_ARGUMENTS))('%s: data ranges, then level, intercept, known_sigma, weights, robust', (id, data) => {

@@ -2,8 +2,16 @@
  * The server behind `npm start` and the browser tests: it serves the build on localhost, refuses
  * paths outside it, and reports a busy port instead of silently failing.
  */
+import { readFileSync } from 'node:fs';
+import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { type RunningServer, startServer } from '../../scripts/staticServer';
+import { ROOT } from '../support/manifest';
+
+/** Cache-Control directives, lower-cased, e.g. ["public", "max-age=86400"]. */
+function cacheDirectives(response: Response): string[] {
+  return (response.headers.get('cache-control') ?? '').split(',').map((d) => d.trim().toLowerCase()).filter((d) => d !== '');
+}
 
 describe('static server', () => {
   let running: RunningServer;
@@ -23,6 +31,31 @@ describe('static server', () => {
   it('answers 404 for missing files and for paths that climb out of the build', async () => {
     expect((await fetch(`${running.origin}/nope.js`)).status).toBe(404);
     expect((await fetch(`${running.origin}/..%2Fpackage.json`)).status).toBe(404);
+  });
+
+  it('lets Office cache the icons', async () => {
+    // "Office Add-ins manifest", Hosting requirements: image URIs must support caching; the server
+    // shouldn't return Cache-Control no-cache, no-store or similar.
+    for (const size of [16, 32, 64, 80]) {
+      const response = await fetch(`${running.origin}/assets/icon-${size}.png`);
+      expect(response.status).toBe(200);
+      const directives = cacheDirectives(response);
+      expect(directives.filter((d) => ['no-store', 'no-cache', 'private', 'max-age=0'].includes(d))).toEqual([]);
+      const maxAge = Number(directives.find((d) => d.startsWith('max-age='))?.slice('max-age='.length));
+      expect(maxAge).toBeGreaterThanOrEqual(3600);
+    }
+  });
+
+  it('keeps the pages, bundles, metadata and manifest uncached, so a rebuild shows at the next reload', async () => {
+    // common practice (no source): a development server must not serve yesterday's bundle.
+    for (const path of ['/taskpane.html', '/functions.js', '/functions.json', '/manifest.xml']) {
+      expect(cacheDirectives(await fetch(`${running.origin}${path}`)), path).toContain('no-store');
+    }
+  });
+
+  it('serves the default build manifest exactly as the repository has it (default origin and version)', async () => {
+    const served = await (await fetch(`${running.origin}/manifest.xml`)).text();
+    expect(served).toBe(readFileSync(join(ROOT, 'manifest.xml'), 'utf8'));
   });
 
   it('rejects with EADDRINUSE when the port is taken', async () => {

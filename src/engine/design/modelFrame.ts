@@ -3,6 +3,7 @@ import { INTERCEPT_NAME } from '../fit/design';
 import type { ModelData } from '../types';
 import { type Cell, type CellGrid, classifyCell, describeCell, shortName } from './cells';
 import { codeCategorical, type SourceColumn } from './categorical';
+import { cellPlace, type RangeOrigin, rowNumber } from './origin';
 
 export interface FrameInput {
   y: CellGrid;
@@ -12,10 +13,25 @@ export interface FrameInput {
   xArguments?: readonly string[];
   weights?: CellGrid;
   intercept: boolean;
+  /** Where each range sits on its worksheet; without one, rows and cells are named by position. */
+  origins?: FrameOrigins;
+}
+
+/**
+ * The worksheet origin of each range. y's origin numbers the rows (skipped rows, used rows);
+ * every range's own origin names its cells in messages. x has one entry per block of input.x.
+ */
+export interface FrameOrigins {
+  y?: RangeOrigin;
+  x?: readonly (RangeOrigin | undefined)[];
+  weights?: RangeOrigin;
 }
 
 export interface SkippedRow {
-  /** 1-based position in the input range (a header row counts as row 1). */
+  /**
+   * The row as the user reads it: its worksheet row when y's origin is known, else its 1-based
+   * position in the input range (a header row counts as row 1).
+   */
   row: number;
   reason: string;
 }
@@ -28,6 +44,7 @@ export interface ModelFrame {
   hasHeader: boolean;
   responseName: string;
   columns: SourceColumn[];
+  /** Each used row, numbered as SkippedRow.row is. */
   usedRows: number[];
   skipped: SkippedRow[];
   data: ModelData;
@@ -41,8 +58,10 @@ export interface ModelFrame {
 
 interface Located {
   argument: string;
+  origin: RangeOrigin | undefined;
   /** Zero-based position within that argument's range. */
   column: number;
+  singleColumn: boolean;
   name: string;
   categorical: boolean;
 }
@@ -55,6 +74,7 @@ export function buildModelFrame(input: FrameInput): ModelFrame {
     throw new EngineError('shape', `known_y has ${input.y[0].length} columns; select a single column of responses.`);
   }
   const blockArgument = (b: number): string => input.xArguments?.[b] ?? 'known_x';
+  const origins = input.origins ?? {};
   input.x.forEach((block, b) => requireRows(block, rowCount, blockArgument(b)));
   if (input.weights !== undefined) {
     requireRows(input.weights, rowCount, 'weights');
@@ -67,9 +87,15 @@ export function buildModelFrame(input: FrameInput): ModelFrame {
   const hasHeader = rowCount > 1 && classifyCell(input.y[0][0]).kind === 'text';
   const firstData = hasHeader ? 1 : 0;
   const responseName = hasHeader ? shortName((classifyCell(input.y[0][0]) as { text: string }).text) : 'y';
-  const names = xColumns.map((cellAt, j) =>
-    headerName(hasHeader ? classifyCell(cellAt(0)) : undefined, j, blockArgument(columnBlocks[j]), columnWithinBlock[j]),
-  );
+  const located = (j: number, name: string, categorical: boolean): Located => ({
+    argument: blockArgument(columnBlocks[j]),
+    origin: origins.x?.[columnBlocks[j]],
+    column: columnWithinBlock[j],
+    singleColumn: false,
+    name,
+    categorical,
+  });
+  const names = xColumns.map((cellAt, j) => headerName(hasHeader ? classifyCell(cellAt(0)) : undefined, j, located(j, '', false)));
 
   const classified = xColumns.map((cellAt) => Array.from({ length: rowCount - firstData }, (_, k) => classifyCell(cellAt(k + firstData))));
   const categorical = classified.map((cells) => cells.some((c) => c.kind === 'text') && !cells.some((c) => c.kind === 'number'));
@@ -79,27 +105,28 @@ export function buildModelFrame(input: FrameInput): ModelFrame {
   const y: number[] = [];
   const numericX: (number | string)[][] = [];
   const weights: number[] = [];
+  const xPlaces = xColumns.map((_, j) => located(j, names[j], categorical[j]));
+  const yPlace: Located = { argument: 'known_y', origin: origins.y, column: 0, singleColumn: true, name: responseName, categorical: false };
+  const wPlace: Located = { argument: 'weights', origin: origins.weights, column: 0, singleColumn: true, name: 'weight', categorical: false };
   for (let k = 0; k < rowCount - firstData; k++) {
-    const row = k + firstData + 1;
-    const yCell = classifyCell(input.y[k + firstData][0]);
-    const wCell = input.weights === undefined ? undefined : classifyCell(input.weights[k + firstData][0]);
-    const located: [Cell, Located][] = [
-      [yCell, { argument: 'known_y', column: 0, name: responseName, categorical: false }],
-      ...classified.map((cells, j): [Cell, Located] => [
-        cells[k],
-        { argument: blockArgument(columnBlocks[j]), column: columnWithinBlock[j], name: names[j], categorical: categorical[j] },
-      ]),
+    const position = k + firstData;
+    const row = rowNumber(origins.y, position);
+    const yCell = classifyCell(input.y[position][0]);
+    const wCell = input.weights === undefined ? undefined : classifyCell(input.weights[position][0]);
+    const cells: [Cell, Located][] = [
+      [yCell, yPlace],
+      ...classified.map((column, j): [Cell, Located] => [column[k], xPlaces[j]]),
     ];
-    if (wCell !== undefined) located.push([wCell, { argument: 'weights', column: 0, name: 'weight', categorical: false }]);
-    located.forEach(([cell, where]) => rejectBadCell(cell, where, row));
-    const missing = located.find(([cell]) => cell.kind === 'missing');
+    if (wCell !== undefined) cells.push([wCell, wPlace]);
+    cells.forEach(([cell, where]) => rejectBadCell(cell, where, position));
+    const missing = cells.find(([cell]) => cell.kind === 'missing');
     if (missing !== undefined) {
       const [cell, where] = missing;
       skipped.push({ row, reason: `${cell.kind === 'missing' && cell.why === '#N/A' ? '#N/A' : 'blank'} in ${where.name}` });
       continue;
     }
     if (wCell !== undefined && wCell.kind === 'number' && !(wCell.value > 0)) {
-      throw new EngineError('bad-weight', `weights row ${row} is ${wCell.value}; every weight must be a positive number.`);
+      throw new EngineError('bad-weight', `${placeOf(wPlace, position)} is ${wCell.value}; every weight must be a positive number.`);
     }
     usedRows.push(row);
     y.push((yCell as { value: number }).value);
@@ -130,21 +157,25 @@ function valueOf(cell: Cell): number | string {
   throw new Error(`unreachable: ${cell.kind} survived validation`);
 }
 
-function headerName(cell: Cell | undefined, j: number, argument: string, column: number): string {
+function placeOf(where: Located, position: number): string {
+  return cellPlace(where.argument, where.origin, position, where.column, where.singleColumn);
+}
+
+function headerName(cell: Cell | undefined, j: number, where: Located): string {
   if (cell === undefined || cell.kind === 'missing') return `x${j + 1}`;
   if (cell.kind === 'text') return shortName(cell.text);
   throw new EngineError(
     'bad-value',
-    `known_y starts with a header but ${argument} row 1, column ${column + 1} holds ${describeCell(cell)}: ` +
+    `known_y starts with a header but ${placeOf(where, 0)} holds ${describeCell(cell)}: ` +
       'give every predictor column a text header, or select the ranges without headers.',
   );
 }
 
-function rejectBadCell(cell: Cell, where: Located, row: number): void {
+/** position: the cell's 0-based row within its range. */
+function rejectBadCell(cell: Cell, where: Located, position: number): void {
   const ok = cell.kind === 'number' || cell.kind === 'missing' || (cell.kind === 'text' && where.categorical);
   if (ok) return;
-  const column = where.argument === 'known_y' || where.argument === 'weights' ? '' : `, column ${where.column + 1}`;
-  const place = `${where.argument} row ${row}${column} ("${where.name}")`;
+  const place = `${placeOf(where, position)} ("${where.name}")`;
   const hint =
     cell.kind === 'text' && /^[-+]?[\d.,\s]+$/.test(cell.text)
       ? ' It looks like a number stored as text: re-enter it as a number without separators.'

@@ -163,20 +163,25 @@ export class ShimChartSeriesCollection extends ShimClientObject<ChartTarget> {
     );
   }
 
-  /** A series with no values yet, named "SeriesN" unless named, for setXAxisValues and setValues to fill. */
-  add(name?: string): ShimChartSeries {
+  /**
+   * "Excel.ChartSeriesCollection" add(name?, index?): a series with no values yet, not shown until
+   * setValues gives it some; named "SeriesN" unless named; at `index` (zero-based) or last.
+   */
+  add(name?: string, index?: number): ShimChartSeries {
     const location = 'ChartSeriesCollection.add';
     return new ShimChartSeries(
       this.context,
       () => {
         const chart = this.target(location);
         if (name !== undefined && typeof name !== 'string') throw invalidArgument(location);
-        let index = 0;
+        let at = 0;
         changeChart(this.context, chart, location, (c) => {
-          index = c.series.length;
-          return { series: [...c.series, { name: name ?? `Series${index + 1}`, x: null, y: null }] };
+          at = index ?? c.series.length;
+          if (!Number.isInteger(at) || at < 0 || at > c.series.length) throw invalidArgument(location);
+          const added = { name: name ?? `Series${c.series.length + 1}`, x: null, y: null };
+          return { series: [...c.series.slice(0, at), added, ...c.series.slice(at)] };
         });
-        return { chart, index };
+        return { chart, index: at };
       },
       location,
     );

@@ -10,7 +10,7 @@ import { SERIES_BY, seriesFromSource, type SeriesBy } from './chartSource';
 import { ShimClientObject, ShimClientResult } from './clientObject';
 import { splitCollectionLoad } from './collectionLoad';
 import type { LoadSpec } from './loadOptions';
-import { invalidArgument, itemNotFound } from './officeErrors';
+import { invalidArgument, itemNotFound, type OfficeExtensionError } from './officeErrors';
 import { ShimRange } from './range';
 import { rangeRefOf } from './rangeRef';
 import type { SheetHandle, ShimRequestContext } from './requestContext';
@@ -115,13 +115,14 @@ export class ShimChartCollection extends ShimClientObject<SheetHandle> {
       () => {
         const sheet = this.target(location);
         const sheetName = this.sheetName(location);
-        const by = seriesBy ?? 'Auto';
-        if (type !== 'XYScatter' || !(sourceData instanceof ShimRange) || !isSeriesBy(by)) throw invalidArgument(location);
+        if (type !== 'XYScatter' || !(sourceData instanceof ShimRange)) throw invalidArgument(location);
+        if (seriesBy === undefined || seriesBy === 'Auto') throw autoLayoutRefused(location);
+        if (!isSeriesBy(seriesBy)) throw invalidArgument(location);
         const source = rangeRefOf(this.context, sourceData.target(location), location);
         const chart = this.context.model.addChart(sheetName, {
           type: 'XYScatter',
           title: null,
-          series: seriesFromSource(this.context.model, source, by),
+          series: seriesFromSource(source, seriesBy),
           axisTitles: { category: '', value: '' },
           bounds: this.besideData(sheetName, source),
         });
@@ -135,6 +136,13 @@ export class ShimChartCollection extends ShimClientObject<SheetHandle> {
     const left = columnLeft((column) => this.context.model.columnWidth(sheet, column), source.right + 2);
     return { left, top: source.top * ROW_HEIGHT, width: NEW_CHART_WIDTH, height: NEW_CHART_HEIGHT };
   }
+}
+
+/** Auto lays series out differently on desktop and on the web (Excel.ChartSeriesBy), so the preview asks for Columns or Rows. */
+function autoLayoutRefused(location: string): OfficeExtensionError {
+  const error = invalidArgument(location);
+  error.debugInfo.message = `${error.message} (preview: pass Excel.ChartSeriesBy.columns or rows; "auto" differs between Excel on the web and on desktop)`;
+  return error;
 }
 
 function isSeriesBy(value: string): value is SeriesBy {

@@ -64,7 +64,9 @@ export abstract class ShimClientObject<Target> implements Loadable {
     const names = spec.all ? this.scalarNames : [...spec.members.keys()];
     for (const name of names) {
       if (this.scalarNames.includes(name)) {
-        this.loadedValues.set(name, this.readScalar(name, target));
+        const value = this.readScalar(name, target);
+        this.context.countResponse(value, `${this.typeName}.${name}`);
+        this.loadedValues.set(name, value);
         continue;
       }
       const child = this.navigation(name);
@@ -84,7 +86,7 @@ export abstract class ShimClientObject<Target> implements Loadable {
   protected queueWrite(name: string, value: unknown, apply: (target: Target, location: string) => void): void {
     this.loadedValues.set(name, value);
     const location = `${this.typeName}.${name}`;
-    this.context.enqueue(location, () => apply(this.target(location), location));
+    this.context.enqueue(location, () => apply(this.target(location), location), value);
   }
 
   /** Proxies here never go stale, so tracking has nothing to do; kept for code that calls it. */

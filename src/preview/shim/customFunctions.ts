@@ -1,26 +1,7 @@
 /** The CustomFunctions global: registration into the model, and the error a function throws. */
 import type { CustomFunction, WorkbookModel } from '../workbook/types';
 
-export const CustomFunctionsErrorCode = {
-  invalidValue: '#VALUE!',
-  notAvailable: '#N/A',
-  divisionByZero: '#DIV/0!',
-  invalidNumber: '#NUM!',
-  nullReference: '#NULL!',
-  invalidName: '#NAME?',
-  invalidReference: '#REF!',
-} as const;
-
-/** What a cell function throws to show an error in its cell; the model reads `code` and `message`. */
-export class CustomFunctionsError extends Error {
-  readonly code: string;
-
-  constructor(code: string = CustomFunctionsErrorCode.invalidValue, message?: string) {
-    super(message);
-    this.name = 'CustomFunctions.Error';
-    this.code = code;
-  }
-}
+export { CustomFunctionsError, CustomFunctionsErrorCode } from '../workbook/customFunctionError';
 
 export interface FunctionRegistrationHost {
   onFunctionRegistered?(id: string): void;

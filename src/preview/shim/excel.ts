@@ -1,5 +1,6 @@
 /** The Excel global: `Excel.run`, the request context class and the enums add-in code reads. */
 import type { WorkbookModel } from '../workbook/types';
+import type { ShimSettings } from './hostSettings';
 import { ShimChart } from './chart';
 import { ChartSeriesBy, ChartType } from './chartEnums';
 import { ShimChartCollection } from './charts';
@@ -45,23 +46,33 @@ function isThenable(value: unknown): value is PromiseLike<unknown> {
 
 type Batch = (context: ShimRequestContext) => unknown;
 
-export function createExcel(model: WorkbookModel) {
+function contextOf(previous: unknown): ShimRequestContext | undefined {
+  if (previous instanceof ShimRequestContext) return previous;
+  if (previous instanceof ShimClientObject) return previous.context;
+  if (Array.isArray(previous) && previous[0] instanceof ShimClientObject) return previous[0].context;
+  return undefined;
+}
+
+export function createExcel(model: WorkbookModel, settings: ShimSettings) {
   class RequestContext extends ShimRequestContext {
     constructor() {
-      super(model);
+      super(model, settings);
     }
   }
 
   /**
-   * Excel.run(batch), or Excel.run(object, batch) to continue with the context of an existing
-   * context or proxy. Writes still queued when the batch settles are synced, as in Excel.
+   * Excel.run(batch); Excel.run(contextOrObjectOrObjects, batch) to continue with an existing
+   * context; Excel.run(options, batch) with Excel.RunOptions (delayForCellEdit, previousObjects).
+   * Writes still queued when the batch settles are synced, as in Excel.
    */
   async function run(...args: unknown[]): Promise<unknown> {
     const batch = args[args.length - 1];
     if (typeof batch !== 'function') throw new TypeError('Excel.run needs a batch function.');
     const first = args.length > 1 ? args[0] : undefined;
-    const context =
-      first instanceof ShimRequestContext ? first : first instanceof ShimClientObject ? first.context : new RequestContext();
+    const previous = contextOf(first);
+    const options = previous === undefined && typeof first === 'object' && first !== null ? (first as { delayForCellEdit?: unknown; previousObjects?: unknown }) : undefined;
+    const context = previous ?? contextOf(options?.previousObjects) ?? new RequestContext();
+    if (options !== undefined) context.delayForCellEdit = options.delayForCellEdit === true;
     const returned = (batch as Batch)(context);
     if (!isThenable(returned)) throw runMustReturnPromise();
     const result = await returned;

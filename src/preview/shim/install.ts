@@ -6,22 +6,36 @@
  * - Office.onReady(callback?) → { host: 'Excel', platform: 'OfficeOnline' }; Office.HostType,
  *   Office.PlatformType; Office.context.host/platform; Office.context.requirements.isSetSupported
  *   (ExcelApi ≤ 1.12, CustomFunctionsRuntime ≤ 1.3, SharedRuntime 1.1; anything else false).
- * - Excel.run(batch) and Excel.run(contextOrObject, batch), with the final implicit sync;
+ * - Excel.run(batch), Excel.run(contextOrObjectOrObjects, batch) and Excel.run(options, batch)
+ *   with Excel.RunOptions delayForCellEdit and previousObjects, with the final implicit sync;
  *   new Excel.RequestContext(); context.sync(); Excel.ErrorCodes, Excel.RangeValueType,
  *   Excel.ClearApplyTo, Excel.ChartType, Excel.ChartSeriesBy.
+ * - Host behaviour (hostSettings.ts; installOfficeShim returns the live settings): a sync takes
+ *   its queue at once and is processed a macrotask (plus syncDelayMs) later, so nothing is
+ *   written when sync() returns; a request whose written data exceed 5 MB (UTF-8 JSON) is refused
+ *   whole with RequestPayloadSizeLimitExceeded, a response that grows past 5 MB fails with
+ *   ResponsePayloadSizeLimitExceeded (the limit can be lowered for tests); while the model is in
+ *   cell edit mode (model.setCellEditMode) a sync fails with InvalidOperation (or
+ *   InvalidOperationInCellEditMode) unless the batch was run with delayForCellEdit, which waits.
  * - The load/sync model: load('a, b'), load(['a', 'b/c']), load({ a: true }), load({ select });
  *   reading a property before load and sync throws PropertyNotLoaded; writes are queued and
  *   applied in order at the next sync; a failing operation rejects the sync and leaves the
  *   earlier ones applied. Errors are OfficeExtension.Error with code, message and debugInfo
  *   (ItemNotFound, InvalidArgument, ItemAlreadyExists, InvalidOperation, PropertyNotLoaded,
  *   ValueNotLoaded, GeneralException for a failure inside the model).
- * - Workbook: worksheets, getSelectedRange(), getActiveCell() (the selection's top-left cell).
+ * - Workbook: worksheets, getSelectedRange() (InvalidSelection when several areas are selected),
+ *   getSelectedRanges() → RangeAreas (address "Sheet1!B2:B9, Sheet1!D:D", addressLocal,
+ *   areaCount, cellCount, isEntireColumn, areas.items, worksheet), getActiveCell() (the first
+ *   area's top-left cell).
  * - WorksheetCollection: getItem, getItemOrNullObject (isNullObject), add(name?) with
  *   Sheet2, Sheet3… names, getActiveWorksheet, items (load 'items' or 'items/name'), getCount.
  * - Worksheet: name (read, and set to rename), position, visibility,
- *   getRange(A1 or A1:B2, $ allowed, sheet-qualified), getCell, getUsedRange,
- *   getUsedRangeOrNullObject, activate, delete, charts.
- * - Range: address and addressLocal (sheet names quoted as Excel writes them), values,
+ *   getRange(A1, A1:B2 or whole columns B:D, $ allowed, sheet-qualified), getCell,
+ *   getUsedRange(valuesOnly?) and getUsedRangeOrNullObject(valuesOnly?) (the smallest range
+ *   around cells with values, or also formats and styles without valuesOnly), activate, delete,
+ *   charts.
+ * - Range: address and addressLocal (sheet names quoted as Excel writes them, whole columns as
+ *   "Sheet1!B:B"), values,
  *   formulas, numberFormat (read and write, 2-D arrays of the range's shape; null leaves a cell
  *   as it is), text, valueTypes, rowCount, columnCount, rowIndex, columnIndex, cellCount,
  *   worksheet; getCell, getResizedRange, getOffsetRange, getRow, getColumn, getLastRow,
@@ -35,19 +49,23 @@
  *   column shows, columns showing nothing keep theirs), autofitRows() (nothing to do);
  *   font.bold; fill.color ('#RRGGBB', 'RRGGBB' or a common HTML colour name; read as '#RRGGBB',
  *   '#FFFFFF' without fill) and fill.clear(). Reads over cells that differ give null.
- * - ChartCollection (worksheet.charts): add(Excel.ChartType.xyscatter, sourceData, seriesBy?)
- *   — series laid out as Excel does (with series in columns the first column is X and each
- *   further one a series of Y; 'Auto' runs series along the longer side; a first row or column
- *   of text names the series); getItem(name) (case-insensitive), getItemOrNullObject,
+ * - ChartCollection (worksheet.charts): add(Excel.ChartType.xyscatter, sourceData, seriesBy)
+ *   — only as far as the docs say: with Columns (Rows) the first column (row) is X and each
+ *   further one a series of Y; seriesBy Auto or omitted is refused (InvalidArgument: it differs
+ *   between desktop and web); header cells are never series names (every cell is data, series
+ *   are "SeriesN"); getItem(name) (case-insensitive), getItemOrNullObject,
  *   getItemAt, getCount, count, items. New charts are named "Chart N" and are 360 × 216 points.
  * - Chart: name (read/write), id, chartType, top/left/width/height (points, read/write),
  *   setPosition(startCell, endCell?) with ranges or addresses, delete(), worksheet, title.text,
  *   axes.categoryAxis.title.text (the X axis of a scatter chart), axes.valueAxis.title.text;
- *   series: getItemAt, add(name?), getCount, count, items; ChartSeries: name (read/write; a
- *   header name stays live), setXAxisValues(range), setValues(range), delete(). Charts read
- *   their cells live and move and size with the cells under them.
+ *   series: getItemAt, add(name?, index?) (no values until setValues), getCount, count, items;
+ *   ChartSeries: name (read/write), setXAxisValues(range), setValues(range), delete(). Charts
+ *   read their cells live (blank and error Y cells are gaps, text Y cells plot at 0) and move
+ *   and size with the cells under them.
  * - CustomFunctions.associate(id, fn) and associate(mappings) into model.registerFunction
- *   (ids upper-cased), CustomFunctions.Error(code, message?), CustomFunctions.ErrorCode.
+ *   (ids upper-cased), CustomFunctions.Error(code, message?), CustomFunctions.ErrorCode. How
+ *   arguments and results cross (functions.json shapes, errors, blanks, repeating parameters,
+ *   invocation.parameterAddresses) is the model's: src/preview/workbook/functionArguments.ts.
  *
  * Not covered (calling one fails, or it is simply absent):
  * - Other formatting: borders, alignment, indent, protection, font colour/italic/size/name,
@@ -58,13 +76,14 @@
  *   visibility, getImage, chart events. A new chart goes beside its data rather than in the
  *   middle of the window as in Excel.
  * - Range.set(), insert, delete, getEntireRow/Column, getIntersection, getBoundingRect,
- *   getUsedRange on a range, Workbook.getRange/names/tables, Worksheet.getRanges.
- * - Whole-sheet ranges (getRange() with no address), whole rows or columns ("A:A", "1:1"),
+ *   getUsedRange on a range, Workbook.getRange/names/tables.
+ * - The five-million-cell read limit on its own (reads that large exceed 5 MB anyway).
+ * - Whole-sheet ranges (getRange() with no address), whole rows ("1:1"), RangeAreas methods
+ *   and format, Worksheet.getRanges,
  *   named items, tables, events (onChanged, onSelectionChanged), protection, calculation
  *   control, context.trackedObjects, Office.context.document, Office.addin, Office.actions,
  *   Office.initialize, worksheet ids, and writing a single scalar to a multi-cell range.
  * - Range.text follows General and plain numeric formats only, and ignores column width.
- * - Used ranges always start at A1 (the model reports the extent from A1).
  * - Spilled cells other than the anchor read "" in `formulas`.
  * - Written strings are not parsed as dates, currencies or numbers with thousands separators,
  *   and "#N/A"-style text stays text.
@@ -74,6 +93,7 @@ import type { WorkbookModel } from '../workbook/types';
 import { ShimClientObject, ShimClientResult } from './clientObject';
 import { createAssociate, CustomFunctionsError, CustomFunctionsErrorCode, type FunctionRegistrationHost } from './customFunctions';
 import { createExcel } from './excel';
+import { defaultSettings, type ShimSettings } from './hostSettings';
 import { createOffice } from './office';
 import { OfficeExtensionError, OfficeExtensionErrorCodes } from './officeErrors';
 import { ShimRequestContext } from './requestContext';
@@ -85,9 +105,15 @@ interface ShimGlobals {
   CustomFunctions: typeof CustomFunctions;
 }
 
-export function installOfficeShim(model: WorkbookModel, host?: FunctionRegistrationHost): void {
+export interface ShimHost extends FunctionRegistrationHost {
+  settings?: Partial<ShimSettings>;
+}
+
+/** Returns the live settings: changing a member changes the host from the next sync on. */
+export function installOfficeShim(model: WorkbookModel, host?: ShimHost): ShimSettings {
+  const settings: ShimSettings = { ...defaultSettings(), ...host?.settings };
   const office = createOffice();
-  const excel = createExcel(model);
+  const excel = createExcel(model, settings);
   const officeExtension = {
     Error: OfficeExtensionError,
     ErrorCodes: OfficeExtensionErrorCodes,
@@ -111,4 +137,5 @@ export function installOfficeShim(model: WorkbookModel, host?: FunctionRegistrat
   globals.Excel = excel as unknown as typeof Excel;
   globals.OfficeExtension = officeExtension as unknown as typeof OfficeExtension;
   globals.CustomFunctions = customFunctions as unknown as typeof CustomFunctions;
+  return settings;
 }

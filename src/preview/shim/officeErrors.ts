@@ -38,10 +38,13 @@ export const ExcelErrorCodes = {
   invalidBinding: 'InvalidBinding',
   invalidOperation: 'InvalidOperation',
   invalidReference: 'InvalidReference',
+  invalidOperationInCellEditMode: 'InvalidOperationInCellEditMode',
   invalidSelection: 'InvalidSelection',
   itemAlreadyExists: 'ItemAlreadyExists',
   itemNotFound: 'ItemNotFound',
   notImplemented: 'NotImplemented',
+  requestPayloadSizeLimitExceeded: 'RequestPayloadSizeLimitExceeded',
+  responsePayloadSizeLimitExceeded: 'ResponsePayloadSizeLimitExceeded',
   unsupportedOperation: 'UnsupportedOperation',
 } as const;
 
@@ -73,9 +76,32 @@ export function itemAlreadyExists(location: string): OfficeExtensionError {
   return new OfficeExtensionError('ItemAlreadyExists', 'The resource already exists.', location, 409);
 }
 
-// Message from memory, not checked against a live host; callers should branch on the code.
+// Messages from the table in "Error handling with the application-specific JavaScript APIs".
 export function invalidOperation(location: string): OfficeExtensionError {
-  return new OfficeExtensionError('InvalidOperation', 'The operation is invalid for the object in its current state.', location);
+  return new OfficeExtensionError('InvalidOperation', 'The operation attempted is invalid on the object.', location);
+}
+
+export function invalidSelection(location: string): OfficeExtensionError {
+  return new OfficeExtensionError('InvalidSelection', 'The current selection is invalid for this operation.', location);
+}
+
+export function cellEditError(code: 'InvalidOperation' | 'InvalidOperationInCellEditMode', location: string): OfficeExtensionError {
+  if (code === 'InvalidOperation') return invalidOperation(location);
+  return new OfficeExtensionError(
+    code,
+    "The operation isn't available while Excel is in Edit cell mode. Exit Edit mode by using the Enter or Tab keys, or by selecting another cell, and then try again.",
+    location,
+  );
+}
+
+const RESOURCE_LIMITS = 'See the Resource limits and performance optimization for Office Add-ins article for more information.';
+
+export function requestPayloadTooLarge(): OfficeExtensionError {
+  return new OfficeExtensionError('RequestPayloadSizeLimitExceeded', `The request payload size has exceeded the limit. ${RESOURCE_LIMITS}`, 'RequestContext.sync');
+}
+
+export function responsePayloadTooLarge(location: string): OfficeExtensionError {
+  return new OfficeExtensionError('ResponsePayloadSizeLimitExceeded', `The response payload size has exceeded the limit. ${RESOURCE_LIMITS}`, location);
 }
 
 export function generalException(location: string, cause: unknown): OfficeExtensionError {

@@ -83,13 +83,15 @@ export class ShimRange extends ShimClientObject<RangeTarget> {
   private worksheetProxy: ShimWorksheet | undefined;
   private formatProxy: ShimRangeFormat | undefined;
 
+  /** `location` undefined: the target is already known (collection items), nothing to queue. */
   constructor(
     context: ShimRequestContext,
     private readonly locator: () => RangeTarget | null,
-    location: string,
+    location: string | undefined,
   ) {
     super(context);
-    this.queueResolve(location);
+    if (location === undefined) this.resolveOrNull();
+    else this.queueResolve(location);
   }
 
   protected locate(): RangeTarget | null {

@@ -1,11 +1,21 @@
 /**
- * The request context: one queue of operations per context, run in order at `sync()`. Reads,
+ * The request context: one queue of operations per context, sent at `sync()` and run in order
+ * when the request reaches the host, a macrotask (and the configured delay) later. Reads,
  * writes and object look-ups all go through the queue so that they fail, and take effect, at
  * the same point in the batch as they would in Excel; an operation that throws stops the batch
- * and leaves the ones before it applied.
+ * and leaves the ones before it applied. A request whose written data exceed the payload limit
+ * is refused whole; a response that grows past it fails at the read that crosses it.
  */
 import type { WorkbookModel } from '../workbook/types';
-import { generalException, itemNotFound, OfficeExtensionError } from './officeErrors';
+import { defaultSettings, payloadBytes, payloadLimit, type ShimSettings } from './hostSettings';
+import {
+  cellEditError,
+  generalException,
+  itemNotFound,
+  OfficeExtensionError,
+  requestPayloadTooLarge,
+  responsePayloadTooLarge,
+} from './officeErrors';
 import { ShimWorkbook } from './workbook';
 
 /**
@@ -20,19 +30,37 @@ export interface SheetHandle {
 interface QueuedOperation {
   location: string;
   run(): void;
+  /** What the operation sends: the JSON size of the data it writes. */
+  requestBytes: number;
+}
+
+function delay(ms: number): Promise<void> {
+  return new Promise((resolve) => setTimeout(resolve, ms));
 }
 
 export class ShimRequestContext {
   readonly workbook: ShimWorkbook;
   private queue: QueuedOperation[] = [];
   private readonly handles: SheetHandle[] = [];
+  private responseBytes = 0;
+  /** Set by Excel.run({ delayForCellEdit: true }, …): syncs wait for cell editing to end instead of failing. */
+  delayForCellEdit = false;
 
-  constructor(readonly model: WorkbookModel) {
+  constructor(
+    readonly model: WorkbookModel,
+    readonly settings: ShimSettings = defaultSettings(),
+  ) {
     this.workbook = new ShimWorkbook(this);
   }
 
-  enqueue(location: string, run: () => void): void {
-    this.queue.push({ location, run });
+  enqueue(location: string, run: () => void, written?: unknown): void {
+    this.queue.push({ location, run, requestBytes: written === undefined ? 0 : payloadBytes(written) });
+  }
+
+  /** Called for every property a load reads, so the response is measured as it is built. */
+  countResponse(value: unknown, location: string): void {
+    this.responseBytes += payloadBytes(value);
+    if (this.responseBytes > payloadLimit(this.settings)) throw responsePayloadTooLarge(location);
   }
 
   get hasPendingOperations(): boolean {
@@ -40,20 +68,44 @@ export class ShimRequestContext {
   }
 
   /**
-   * Runs the queue synchronously and settles afterwards, so later calls queue for the next sync
-   * exactly as they would while a real request is in flight.
+   * Takes the queue at once, so later calls queue for the next sync exactly as they would while
+   * a real request is in flight, and settles after the request has been processed.
    */
   sync<T>(passThroughValue?: T): Promise<T> {
     const operations = this.queue;
     this.queue = [];
+    const requestBytes = operations.reduce((sum, operation) => sum + operation.requestBytes, 0);
+    return this.send(operations, requestBytes).then(() => passThroughValue as T);
+  }
+
+  private async send(operations: readonly QueuedOperation[], requestBytes: number): Promise<void> {
+    await delay(this.settings.syncDelayMs);
+    // Nothing queued, nothing sent (from memory: Office.js makes no round trip for an empty
+    // sync, such as Excel.run's final one after a batch that synced its own work).
+    if (operations.length === 0) return;
+    if (requestBytes > payloadLimit(this.settings)) throw requestPayloadTooLarge();
+    await this.leaveCellEdit();
+    this.responseBytes = 0;
     for (const operation of operations) {
       try {
         operation.run();
       } catch (error) {
-        return Promise.reject(error instanceof OfficeExtensionError ? error : generalException(operation.location, error));
+        throw error instanceof OfficeExtensionError ? error : generalException(operation.location, error);
       }
     }
-    return Promise.resolve(passThroughValue as T);
+  }
+
+  /** "Delay execution while cell is being edited": fail at once, or wait until the edit is committed or cancelled. */
+  private async leaveCellEdit(): Promise<void> {
+    if (!this.model.cellEditMode()) return;
+    if (!this.delayForCellEdit) throw cellEditError(this.settings.cellEditErrorCode, 'RequestContext.sync');
+    await new Promise<void>((resolve) => {
+      const stop = this.model.subscribe(() => {
+        if (this.model.cellEditMode()) return;
+        stop();
+        resolve();
+      });
+    });
   }
 
   /** Excel matches sheet names without regard to case. */

@@ -1,7 +1,8 @@
 /** Excel.Workbook: the sheets and the selection. */
 import { ShimClientObject, type Loadable } from './clientObject';
-import { invalidArgument, itemNotFound } from './officeErrors';
+import { invalidArgument, invalidSelection, itemNotFound } from './officeErrors';
 import { rangeTarget, ShimRange, type RangeTarget } from './range';
+import { ShimRangeAreas } from './rangeAreas';
 import type { ShimRequestContext } from './requestContext';
 import { ShimWorksheetCollection } from './worksheets';
 
@@ -28,17 +29,39 @@ export class ShimWorkbook extends ShimClientObject<true> {
     return name === 'worksheets' ? this.worksheets : undefined;
   }
 
-  private selectionTarget(location: string): RangeTarget {
-    const selection = this.context.model.selection();
-    const sheet = this.context.findSheet(selection.sheet);
-    if (!sheet) throw itemNotFound(location);
-    return rangeTarget(sheet, selection.top, selection.left, selection.bottom, selection.right, location);
+  private areaTargets(location: string): RangeTarget[] {
+    return this.context.model.selectedAreas().map((area) => {
+      const sheet = this.context.findSheet(area.sheet);
+      if (!sheet) throw itemNotFound(location);
+      return rangeTarget(sheet, area.top, area.left, area.bottom, area.right, location);
+    });
   }
 
-  /** The selection as it is when the batch reaches this call. */
+  private selectionTarget(location: string): RangeTarget {
+    return this.areaTargets(location)[0];
+  }
+
+  /**
+   * The selection as it is when the batch reaches this call. "Work with workbooks using the
+   * Excel JavaScript API": if multiple ranges are selected, it throws InvalidSelection.
+   */
   getSelectedRange(): ShimRange {
     const location = 'Workbook.getSelectedRange';
-    return new ShimRange(this.context, () => this.selectionTarget(location), location);
+    return new ShimRange(
+      this.context,
+      () => {
+        const areas = this.areaTargets(location);
+        if (areas.length > 1) throw invalidSelection(location);
+        return areas[0];
+      },
+      location,
+    );
+  }
+
+  /** ExcelApi 1.9: every selected area, as one RangeAreas. */
+  getSelectedRanges(): ShimRangeAreas {
+    const location = 'Workbook.getSelectedRanges';
+    return new ShimRangeAreas(this.context, () => this.areaTargets(location), location);
   }
 
   /** The model keeps no separate active cell: it is the selection's top-left cell. */

@@ -3,7 +3,7 @@ import { parseRange, splitSheet } from '../../addressing/a1';
 import { ShimChartCollection } from './charts';
 import { ShimClientObject, type Loadable } from './clientObject';
 import { invalidArgument, invalidOperation, itemAlreadyExists } from './officeErrors';
-import { insideGrid, rangeTarget, ShimRange, type RangeTarget } from './range';
+import { rangeTarget, ShimRange, type RangeTarget } from './range';
 import type { SheetHandle, ShimRequestContext } from './requestContext';
 import { isValidSheetName } from './sheetNames';
 
@@ -102,23 +102,23 @@ export class ShimWorksheet extends ShimClientObject<SheetHandle> {
   }
 
   /**
-   * The model reports the used extent from A1, so the range always starts at A1 (Excel starts
-   * it at the first used cell). `valuesOnly` changes nothing: number formats alone never count.
+   * "Excel.Worksheet": the smallest range around every cell with a value or formatting, or with
+   * `valuesOnly` around the cells with values; an empty sheet gives its top-left cell.
    */
-  getUsedRange(_valuesOnly?: boolean): ShimRange {
+  getUsedRange(valuesOnly?: boolean): ShimRange {
     const location = 'Worksheet.getUsedRange';
-    return this.rangeOn(location, (sheet) => this.usedTarget(sheet, location) ?? rangeTarget(sheet, 0, 0, 0, 0, location));
+    return this.rangeOn(location, (sheet) => this.usedTarget(sheet, valuesOnly === true, location) ?? rangeTarget(sheet, 0, 0, 0, 0, location));
   }
 
-  getUsedRangeOrNullObject(_valuesOnly?: boolean): ShimRange {
+  /** A null object when the sheet is empty (in values, with `valuesOnly`). */
+  getUsedRangeOrNullObject(valuesOnly?: boolean): ShimRange {
     const location = 'Worksheet.getUsedRangeOrNullObject';
-    return this.rangeOn(location, (sheet) => this.usedTarget(sheet, location));
+    return this.rangeOn(location, (sheet) => this.usedTarget(sheet, valuesOnly === true, location));
   }
 
-  private usedTarget(sheet: SheetHandle, location: string): RangeTarget | null {
-    const { rows, columns } = this.context.model.usedExtent(this.context.liveSheet(sheet, location));
-    if (rows === 0 || columns === 0 || !insideGrid(0, 0, rows - 1, columns - 1)) return null;
-    return rangeTarget(sheet, 0, 0, rows - 1, columns - 1, location);
+  private usedTarget(sheet: SheetHandle, valuesOnly: boolean, location: string): RangeTarget | null {
+    const area = this.context.model.usedArea(this.context.liveSheet(sheet, location), valuesOnly);
+    return area === undefined ? null : rangeTarget(sheet, area.top, area.left, area.bottom, area.right, location);
   }
 
   activate(): void {

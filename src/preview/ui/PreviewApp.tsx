@@ -3,6 +3,7 @@ import { cellAddress } from '../../addressing/a1';
 import type { PreviewWorkbook } from '../workbook/workbook';
 import { FormulaBar } from './FormulaBar';
 import { Grid } from './Grid';
+import { HostSwitches } from './HostSwitches';
 import { parseEntry } from './parseEntry';
 import { SheetTabs } from './SheetTabs';
 
@@ -31,6 +32,7 @@ export function PreviewApp({ workbook }: { workbook: PreviewWorkbook }) {
         against a small workbook of our own, with a shim for the part of Office.js they use. To use Plumbline in Excel, sideload{' '}
         <code>manifest.xml</code> (see the README: Excel desktop through office-addin-debugging, or Insert › Add-ins › Upload My Add-in in Excel on the web).
       </header>
+      <HostSwitches workbook={workbook} />
       <FormulaBar
         selection={selection}
         input={workbook.inputAt(activeCell)}

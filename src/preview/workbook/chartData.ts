@@ -55,8 +55,10 @@ export function plotSeries(model: CellReader, series: ChartSeriesSource): Plotte
   const points: { x: number; y: number }[] = [];
   ys.forEach((y, i) => {
     const x = numbered ? i + 1 : xs[i];
-    // Blank, text and error cells leave a gap rather than a point at zero.
-    if (typeof y === 'number' && typeof x === 'number') points.push({ x, y });
+    // Blank and error cells leave a gap. Text, "" from a formula included, is plotted at zero
+    // (from memory, as Excel does; the reason reports must not chart cells holding "").
+    const plotted = typeof y === 'string' ? 0 : y;
+    if (typeof plotted === 'number' && typeof x === 'number') points.push({ x, y: plotted });
   });
   return { name: seriesName(model, series), points };
 }

@@ -1,23 +1,26 @@
 /**
- * Evaluates one parsed formula against the workbook, calling custom functions the way Excel
- * does: ranges as row-major 2-D arrays (blanks as "", errors as { code, message } objects),
- * omitted arguments as null, a thrown CustomFunctions.Error as the cell's error.
+ * Evaluates one parsed formula against the workbook. A plain reference shows the cells it
+ * refers to, with blanks as 0 as in Excel; a custom function gets the arguments Excel would
+ * give it (functionArguments.ts), and its result or thrown CustomFunctions.Error becomes the
+ * cell's value or error.
  */
+import { CustomFunctionsError } from './customFunctionError';
+import { buildArguments, type CalculationBehaviour } from './functionArguments';
+import type { FunctionShape } from './functionMetadata';
 import type { Expression } from './formula';
-import type { CellError, CellValue, CustomFunction, RangeRef } from './types';
-
-export type Dimensionality = 'scalar' | 'matrix';
+import type { CellError, CellValue, CustomFunction } from './types';
 
 export interface FunctionEntry {
   fn: CustomFunction;
-  /** Per parameter; when unknown every range is passed whole. */
-  parameters?: { dimensionality: Dimensionality; optional: boolean }[];
+  /** From functions.json; when unknown every argument is passed as a range, with no invocation. */
+  shape?: FunctionShape;
 }
 
 export interface EvaluationContext {
   valueAt(sheet: string, row: number, column: number): CellValue;
   hasSheet(name: string): boolean;
   lookup(name: string): FunctionEntry | undefined;
+  behaviour: CalculationBehaviour;
 }
 
 /** A formula's result: a grid to spill from its cell, or an error. */
@@ -36,84 +39,60 @@ export function evaluate(expression: Expression, context: EvaluationContext): Fo
     case 'boolean':
       return { grid: [[expression.value]] };
     case 'reference': {
-      if (!context.hasSheet(expression.range.sheet)) return { error: { error: '#REF!', message: `There is no sheet named ${expression.range.sheet}.` } };
-      return { grid: readRange(expression.range, context, (v) => v) };
+      const range = expression.range;
+      if (!context.hasSheet(range.sheet)) return { error: { error: '#REF!', message: `There is no sheet named ${range.sheet}.` } };
+      // "=B2" on an empty B2 shows 0, in a single cell and in a spilled range alike (common practice (no source)).
+      const grid: CellValue[][] = [];
+      for (let r = range.top; r <= range.bottom; r++) {
+        const row: CellValue[] = [];
+        for (let c = range.left; c <= range.right; c++) row.push(context.valueAt(range.sheet, r, c) ?? 0);
+        grid.push(row);
+      }
+      return { grid };
     }
     case 'call':
       return callFunction(expression, context);
   }
 }
 
-function readRange<T>(range: RangeRef, context: EvaluationContext, map: (v: CellValue) => T): T[][] {
-  const rows: T[][] = [];
-  for (let r = range.top; r <= range.bottom; r++) {
-    const row: T[] = [];
-    for (let c = range.left; c <= range.right; c++) row.push(map(context.valueAt(range.sheet, r, c)));
-    rows.push(row);
-  }
-  return rows;
-}
-
-/** What a custom function receives for one cell. */
-function argumentCell(value: CellValue): unknown {
-  if (value === null) return '';
-  if (isCellError(value)) return { code: value.error, message: value.message ?? '' };
-  return value;
-}
-
 function callFunction(call: Extract<Expression, { kind: 'call' }>, context: EvaluationContext): FormulaResult | Promise<FormulaResult> {
   const entry = call.name.startsWith(NAMESPACE) ? context.lookup(call.name.slice(NAMESPACE.length)) : undefined;
   if (entry === undefined) return { error: { error: '#NAME?', message: `${call.name} is not a known function.` } };
-  const parameters = entry.parameters;
-  if (parameters !== undefined) {
-    const required = parameters.filter((p) => !p.optional).length;
-    if (call.args.length > parameters.length) {
-      return { error: { error: '#VALUE!', message: `${call.name} takes at most ${parameters.length} arguments.` } };
-    }
-    if (call.args.length < required) {
-      return { error: { error: '#VALUE!', message: `${call.name} needs at least ${required} arguments.` } };
-    }
-  }
-  const args: unknown[] = [];
-  for (let i = 0; i < Math.max(call.args.length, parameters?.length ?? 0); i++) {
-    const arg = call.args[i] ?? null;
-    const dimensionality = parameters?.[i]?.dimensionality ?? 'matrix';
-    if (arg === null) {
-      args.push(null);
-      continue;
-    }
-    if (arg.kind === 'call') return { error: { error: '#VALUE!', message: 'Nested function calls are not supported in the preview.' } };
-    if (arg.kind === 'reference') {
-      if (!context.hasSheet(arg.range.sheet)) return { error: { error: '#REF!', message: `There is no sheet named ${arg.range.sheet}.` } };
-      const grid = readRange(arg.range, context, argumentCell);
-      args.push(dimensionality === 'scalar' ? grid[0][0] : grid);
-    } else {
-      args.push(dimensionality === 'scalar' ? arg.value : [[arg.value]]);
-    }
-  }
+  const built = buildArguments(call.name, call.args, entry.shape, context, context.behaviour);
+  if ('error' in built) return built;
   try {
-    const output = entry.fn(...args);
+    const output = entry.fn(...built.values);
     return output instanceof Promise ? output.then(toResult, fromThrown) : toResult(output);
   } catch (thrown) {
     return fromThrown(thrown);
   }
 }
 
-function fromThrown(thrown: unknown): FormulaResult {
-  if (typeof thrown === 'object' && thrown !== null && 'code' in thrown && typeof thrown.code === 'string') {
-    const message = 'message' in thrown && typeof thrown.message === 'string' ? thrown.message : undefined;
-    return { error: { error: thrown.code, message } };
-  }
-  return { error: { error: '#VALUE!', message: thrown instanceof Error ? thrown.message : String(thrown) } };
+/** "Handle and return errors from your custom function": custom messages show only with #VALUE! and #N/A. */
+const WITH_MESSAGE = new Set(['#VALUE!', '#N/A']);
+/** The same page: #NAME? and #REF! are input errors only, not output errors. */
+const NOT_OUTPUT = new Set(['#NAME?', '#REF!']);
+
+/**
+ * Only a CustomFunctions.Error carries an error code to the cell; anything else thrown is an
+ * unhandled exception, which Excel shows as #VALUE! with no message (same page).
+ */
+function errorFrom(thrown: unknown): CellError {
+  if (!(thrown instanceof CustomFunctionsError)) return { error: '#VALUE!' };
+  if (NOT_OUTPUT.has(thrown.code)) return { error: '#VALUE!' };
+  return thrown.message !== '' && WITH_MESSAGE.has(thrown.code) ? { error: thrown.code, message: thrown.message } : { error: thrown.code };
 }
 
-/** Mirrors Excel: null in a returned array shows as 0, an error object as its error. */
+function fromThrown(thrown: unknown): FormulaResult {
+  return { error: errorFrom(thrown) };
+}
+
+/** A null inside a returned array shows as 0 (OfficeDev/office-js issue 1503, by design); an error object as its error. */
 function resultCell(value: unknown): CellValue {
   if (value === null || value === undefined) return 0;
   if (typeof value === 'number') return Number.isFinite(value) ? value : { error: '#NUM!' };
   if (typeof value === 'string' || typeof value === 'boolean') return value;
-  const thrown = fromThrown(value);
-  return 'error' in thrown ? thrown.error : { error: '#VALUE!' };
+  return errorFrom(value);
 }
 
 function toResult(output: unknown): FormulaResult {

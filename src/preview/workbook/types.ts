@@ -110,9 +110,23 @@ export interface WorkbookModel {
 
   /** Rows and columns from A1 to the last non-empty input or spilled value; {0, 0} when empty. */
   usedExtent(sheet: string): { rows: number; columns: number };
+  /**
+   * The smallest rectangle holding every cell with a value (an input, a formula or a spilled
+   * value), and unless `valuesOnly` every cell with a number format or style; undefined when none.
+   */
+  usedArea(sheet: string, valuesOnly: boolean): RangeRef | undefined;
 
+  /** The active area of the selection (the first one when several are selected). */
   selection(): RangeRef;
+  /** Every selected area, on the active sheet; one unless several were selected together. */
+  selectedAreas(): RangeRef[];
   select(range: RangeRef): void;
+  /** Selects several areas at once (as with Ctrl+click), all on one sheet. */
+  selectAreas(areas: readonly RangeRef[]): void;
+
+  /** True while the user is editing a cell; Excel then fails or delays add-in batches. */
+  cellEditMode(): boolean;
+  setCellEditMode(editing: boolean): void;
 
   registerFunction(id: string, fn: CustomFunction): void;
 

@@ -7,6 +7,8 @@ import { MAX_COLUMNS, rangesOverlap } from '../../addressing/a1';
 import { evaluate, type FormulaResult, type FunctionEntry, isCellError, NAMESPACE } from './evaluate';
 import { ChartList } from './charts';
 import { FormulaSyntaxError, parseFormula, referencedRanges, type Expression } from './formula';
+import { CURRENT_EXCEL, type CalculationBehaviour } from './functionArguments';
+import { shapesFromMetadata, type FunctionShape } from './functionMetadata';
 import { ROW_HEIGHT, STANDARD_COLUMN_WIDTH } from './layout';
 import type {
   CellError,
@@ -50,10 +52,7 @@ interface Sheet {
 
 const PLAIN: CellStyle = { bold: false, fill: null, wrap: false };
 
-export interface FunctionShape {
-  id: string;
-  parameters: { dimensionality: 'scalar' | 'matrix'; optional: boolean }[];
-}
+export type { CalculationBehaviour, FunctionShape };
 
 const key = (row: number, column: number): number => row * MAX_COLUMNS + column;
 const rowOf = (k: number): number => Math.floor(k / MAX_COLUMNS);
@@ -65,9 +64,11 @@ const MAX_PASSES = 64;
 export class PreviewWorkbook implements WorkbookModel {
   private readonly sheets: Sheet[] = [];
   private active = '';
-  private selected: RangeRef = { sheet: '', top: 0, left: 0, bottom: 0, right: 0 };
+  private selected: RangeRef[] = [{ sheet: '', top: 0, left: 0, bottom: 0, right: 0 }];
+  private editing = false;
   private readonly functions = new Map<string, FunctionEntry>();
-  private readonly shapes = new Map<string, FunctionShape['parameters']>();
+  private readonly shapes = new Map<string, FunctionShape>();
+  private behaviour: CalculationBehaviour = CURRENT_EXCEL;
   private readonly listeners = new Set<() => void>();
   private chartsAdded = 0;
 
@@ -98,7 +99,7 @@ export class PreviewWorkbook implements WorkbookModel {
     if (from.toLowerCase() !== to.toLowerCase()) this.validateNewName(to);
     sheet.name = to;
     if (this.active === from) this.active = to;
-    if (this.selected.sheet === from) this.selected = { ...this.selected, sheet: to };
+    this.selected = this.selected.map((area) => (area.sheet === from ? { ...area, sheet: to } : area));
     for (const s of this.sheets) s.charts.renameSheet(from, to);
     this.notify();
   }
@@ -118,7 +119,7 @@ export class PreviewWorkbook implements WorkbookModel {
 
   activateSheet(name: string): void {
     this.active = this.sheet(name).name;
-    this.selected = { sheet: this.active, top: 0, left: 0, bottom: 0, right: 0 };
+    this.selected = [{ sheet: this.active, top: 0, left: 0, bottom: 0, right: 0 }];
     this.notify();
   }
 
@@ -248,32 +249,86 @@ export class PreviewWorkbook implements WorkbookModel {
     return { rows, columns };
   }
 
+  usedArea(sheetName: string, valuesOnly: boolean): RangeRef | undefined {
+    const sheet = this.sheet(sheetName);
+    const maps: Map<number, unknown>[] = [sheet.inputs, sheet.formulas, sheet.spilled];
+    if (!valuesOnly) maps.push(sheet.formats, sheet.styles);
+    let area: RangeRef | undefined;
+    for (const map of maps) {
+      for (const k of map.keys()) {
+        const row = rowOf(k);
+        const column = columnOf(k);
+        area =
+          area === undefined
+            ? { sheet: sheet.name, top: row, left: column, bottom: row, right: column }
+            : { sheet: sheet.name, top: Math.min(area.top, row), left: Math.min(area.left, column), bottom: Math.max(area.bottom, row), right: Math.max(area.right, column) };
+      }
+    }
+    return area;
+  }
+
   selection(): RangeRef {
-    return { ...this.selected };
+    return { ...this.selected[0] };
+  }
+
+  selectedAreas(): RangeRef[] {
+    return this.selected.map((area) => ({ ...area }));
   }
 
   select(range: RangeRef): void {
-    this.sheet(range.sheet);
-    this.active = range.sheet;
-    this.selected = { ...range };
+    this.selectAreas([range]);
+  }
+
+  selectAreas(areas: readonly RangeRef[]): void {
+    if (areas.length === 0) throw new Error('A selection has at least one area.');
+    const sheet = this.sheet(areas[0].sheet).name;
+    if (areas.some((area) => this.sheet(area.sheet).name !== sheet)) throw new Error('Every selected area must be on one sheet.');
+    this.active = sheet;
+    this.selected = areas.map((area) => ({ ...area, sheet }));
+    this.notify();
+  }
+
+  cellEditMode(): boolean {
+    return this.editing;
+  }
+
+  setCellEditMode(editing: boolean): void {
+    if (this.editing === editing) return;
+    this.editing = editing;
     this.notify();
   }
 
   registerFunction(id: string, fn: CustomFunction): void {
     const upper = id.toUpperCase();
-    this.functions.set(upper, { fn, parameters: this.shapes.get(upper) });
+    this.functions.set(upper, { fn, shape: this.shapes.get(upper) });
     this.recalculate(this.formulasCalling(upper));
     this.notify();
   }
 
-  /** Parameter shapes from functions.json, so scalar arguments get one value as in Excel. */
+  /** Parameter shapes from functions.json, so arguments arrive as Excel passes them. */
   setFunctionShapes(shapes: readonly FunctionShape[]): void {
     for (const s of shapes) {
       const id = s.id.toUpperCase();
-      this.shapes.set(id, s.parameters);
+      this.shapes.set(id, s);
       const entry = this.functions.get(id);
-      if (entry !== undefined) this.functions.set(id, { ...entry, parameters: s.parameters });
+      if (entry !== undefined) this.functions.set(id, { ...entry, shape: s });
     }
+    this.recalculate(new Set(this.everyFormula()));
+    this.notify();
+  }
+
+  /** The parsed text of functions.json, as the add-in ships it. */
+  loadFunctionMetadata(metadata: unknown): void {
+    this.setFunctionShapes(shapesFromMetadata(metadata));
+  }
+
+  calculationBehaviour(): CalculationBehaviour {
+    return { ...this.behaviour };
+  }
+
+  /** Switches how Excel builds arguments (e.g. blanks as 0 on older desktop builds) and recalculates everything. */
+  setCalculationBehaviour(change: Partial<CalculationBehaviour>): void {
+    this.behaviour = { ...this.behaviour, ...change };
     this.recalculate(new Set(this.everyFormula()));
     this.notify();
   }
@@ -379,6 +434,7 @@ export class PreviewWorkbook implements WorkbookModel {
           },
           hasSheet: (s) => this.hasSheet(s),
           lookup: (name) => this.functions.get(name.toUpperCase()),
+          behaviour: this.behaviour,
         });
         if (outcome instanceof Promise) {
           const generation = ++formula.generation;

@@ -1,14 +1,15 @@
-import { formatRange, type RangeRef } from '../../addressing/a1';
+import type { RangeRef } from '../../addressing/a1';
+import { readRowBlocks } from './readRowBlocks';
 
-/** Values of several ranges in one round trip; each range is on its own named sheet. */
+/** Values of several ranges, each read in blocks sized by payload and joined again. */
 export async function readRanges(ranges: readonly RangeRef[]): Promise<unknown[][][]> {
-  return Excel.run(async (context) => {
-    const proxies = ranges.map((r) => {
-      const range = context.workbook.worksheets.getItem(r.sheet).getRange(formatRange(r, false));
-      range.load('values');
-      return range;
+  const grids: unknown[][][] = [];
+  for (const range of ranges) {
+    const rows: unknown[][] = [];
+    await readRowBlocks([range], ({ values }) => {
+      for (const row of values[0]) rows.push(row);
     });
-    await context.sync();
-    return proxies.map((p) => p.values);
-  });
+    grids.push(rows);
+  }
+  return grids;
 }

@@ -1,5 +1,6 @@
 import { cellAddress, formatRange } from '../../addressing/a1';
-import type { ReportCell, ReportPlan } from '../model/reportPlan';
+import type { ReportCell, ReportChart, ReportPlan } from '../model/reportPlan';
+import { longRun } from './longRun';
 import { uniqueSheetName } from './uniqueSheetName';
 
 export const REPORT_SHEET_BASE = 'Plumbline report';
@@ -10,7 +11,7 @@ export const REPORT_SHEET_BASE = 'Plumbline report';
  * Labels get the text number format before their value, so a header such as "=x" stays text.
  */
 export async function writeReport(plan: (sheetName: string) => ReportPlan): Promise<string> {
-  return Excel.run(async (context) => {
+  return longRun(async (context) => {
     const sheets = context.workbook.worksheets;
     sheets.load('items/name');
     await context.sync();
@@ -20,18 +21,7 @@ export async function writeReport(plan: (sheetName: string) => ReportPlan): Prom
     try {
       const { charts, ...rest } = plan(name);
       writePlanCells(sheet, rest);
-      for (const c of charts) {
-        const chart = sheet.charts.add(Excel.ChartType.xyscatter, sheet.getRange(formatRange(c.y, false)), Excel.ChartSeriesBy.columns);
-        chart.name = c.name;
-        chart.title.text = c.title;
-        const series = chart.series.getItemAt(0);
-        series.setXAxisValues(sheet.getRange(formatRange(c.x, false)));
-        series.setValues(sheet.getRange(formatRange(c.y, false)));
-        series.name = c.yTitle;
-        chart.axes.categoryAxis.title.text = c.xTitle;
-        chart.axes.valueAxis.title.text = c.yTitle;
-        chart.setPosition(c.topLeft, c.bottomRight);
-      }
+      await addCharts(sheet, charts, context);
       sheet.getRange('A1').format.columnWidth = 170;
       sheet.activate();
       await context.sync();
@@ -42,6 +32,33 @@ export async function writeReport(plan: (sheetName: string) => ReportPlan): Prom
       throw error;
     }
   });
+}
+
+/**
+ * Each chart gets exactly the one series its plan names. `charts.add` needs a source range and
+ * lays out series from it by its own rules, on cells whose formulas may still be calculating, so
+ * whatever series it made are deleted and the planned one is added and pointed at its cells
+ * (ChartSeriesCollection.add, ChartSeries.setXAxisValues and setValues: ExcelApi 1.7).
+ */
+async function addCharts(sheet: Excel.Worksheet, planned: readonly ReportChart[], context: Excel.RequestContext): Promise<void> {
+  const added = planned.map((c) => {
+    const chart = sheet.charts.add(Excel.ChartType.xyscatter, sheet.getRange(formatRange(c.y, false)), Excel.ChartSeriesBy.columns);
+    chart.name = c.name;
+    chart.title.text = c.title;
+    chart.axes.categoryAxis.title.text = c.xTitle;
+    chart.axes.valueAxis.title.text = c.yTitle;
+    chart.setPosition(c.topLeft, c.bottomRight);
+    chart.series.load('items');
+    return { chart, c };
+  });
+  await context.sync();
+  for (const { chart, c } of added) {
+    // From the last, so each deletion leaves the positions of those still to go unchanged.
+    for (const made of [...chart.series.items].reverse()) made.delete();
+    const series = chart.series.add(c.yTitle);
+    series.setXAxisValues(sheet.getRange(formatRange(c.x, false)));
+    series.setValues(sheet.getRange(formatRange(c.y, false)));
+  }
 }
 
 /** Number formats, then cells; a label gets the text format before its value so it stays text. */

@@ -10,16 +10,19 @@ import {
   type ModelFit,
   type ModelFrame,
   type NestedComparison,
+  type RangeOrigin,
 } from '../../engine';
+import type { RangeRef } from '../../addressing/a1';
+import type { BlockSources } from './blockRows';
 import type { PaneChoices } from './choices';
-import { joinColumns } from './readValues';
 import { dataWarnings } from './warnings';
 
-/** The cells the pane has read, one grid per chosen range. */
+/** The cells the pane has read, one grid per chosen range, and the ranges they were read from. */
 export interface ReadData {
   response: CellGrid;
   predictorColumns: CellGrid[];
   weights: CellGrid | undefined;
+  sources: BlockSources;
 }
 
 export interface PaneAnalysis {
@@ -48,20 +51,31 @@ function message(error: unknown): string {
   return error instanceof EngineError ? error.message : `Unexpected problem: ${String(error)}`;
 }
 
+function originOf(range: RangeRef): RangeOrigin {
+  return { sheet: range.sheet, row: range.top, column: range.left };
+}
+
 /**
  * Everything the pane shows about the data and the model, from the engine (and so from the same
  * cache as the cell functions). Base predictors come first and added ones last, the order the
- * report's formulas use.
+ * report's formulas use. Each column goes in as its own block with its worksheet origin, so rows
+ * are numbered as the sheet numbers them and a bad cell is named by its address.
  */
 export function analyze(data: ReadData, choices: PaneChoices): PaneAnalysis {
   const settings = settingsOf(choices);
   const isAdded = (j: number) => choices.added.includes(j);
   const order = data.predictorColumns.map((_, j) => j).sort((a, b) => Number(isAdded(a)) - Number(isAdded(b)));
+  const { sources } = data;
   const frame = buildModelFrame({
     y: data.response,
-    x: [joinColumns(order.map((j) => data.predictorColumns[j]))],
+    x: order.map((j) => data.predictorColumns[j]),
     weights: data.weights,
     intercept: choices.intercept,
+    origins: {
+      y: originOf(sources.response),
+      x: order.map((j) => originOf(sources.predictors[j])),
+      weights: sources.weights === undefined ? undefined : originOf(sources.weights),
+    },
   });
   let fit: ModelFit | undefined;
   let fitError: string | undefined;

@@ -1,4 +1,4 @@
-import { cellAddress, type RangeRef } from '../../addressing/a1';
+import { cellAddress, quoteSheetName, type RangeRef } from '../../addressing/a1';
 import { type Cell, classifyCell, describeCell, EngineError, type RowBlock, type SkippedRow } from '../../engine';
 import { asCellValue } from './readValues';
 
@@ -24,7 +24,7 @@ export interface BlockHeader {
 
 export interface ConvertedBlock {
   block: RowBlock;
-  /** 1-based positions in the chosen ranges of the block's used rows, in order. */
+  /** The worksheet rows (as the sheet numbers them, from the response's rows) of the block's used rows, in order. */
   usedRows: number[];
   /** Rows of this block left out for a blank or #N/A; the first few are kept as examples. */
   skipped: number;
@@ -54,8 +54,9 @@ export function detectHeader(first: BlockValues, sources: BlockSources, totalRow
   return { hasHeader, responseName: hasHeader && responseCell.kind === 'text' ? responseCell.text : 'y', predictorNames };
 }
 
+/** "Data!C5": the cell `offset` rows down a column, as a user finds it on the sheet. */
 function place(source: RangeRef, offset: number): string {
-  return `${source.sheet}!${cellAddress(source.top + offset, source.left)}`;
+  return `${quoteSheetName(source.sheet)}!${cellAddress(source.top + offset, source.left)}`;
 }
 
 /**
@@ -85,12 +86,14 @@ interface Located {
  * Excel values of one block → the accumulator's numeric block. `offset` is the block's first row
  * within the chosen ranges (0-based; the header, when there is one, is row 0 and is not data).
  * Blank and #N/A rows are skipped and counted; any other non-number is an error naming its cell.
+ * Rows are numbered as the sheet numbers them: the response's worksheet row.
  */
 export function convertBlock(values: BlockValues, sources: BlockSources, header: BlockHeader, offset: number): ConvertedBlock {
   const p = values.predictors.length;
   const length = values.response.length;
   const start = offset === 0 && header.hasHeader ? 1 : 0;
   const used = new Uint8Array(length);
+  const worksheetRow = (i: number) => sources.response.top + offset + i + 1;
   const skippedExamples: SkippedRow[] = [];
   let skipped = 0;
   let rows = 0;
@@ -100,12 +103,12 @@ export function convertBlock(values: BlockValues, sources: BlockSources, header:
     if (values.weights !== undefined && sources.weights !== undefined) {
       located.push({ cell: classifyCell(asCellValue(values.weights[i][0])), what: 'weight', source: sources.weights });
     }
-    for (const l of located) rejectBadCell(l, offset + i);
+    for (const l of located) rejectBadCell(l, offset + i, worksheetRow(i));
     const missing = located.find((l) => l.cell.kind === 'missing');
     if (missing !== undefined) {
       skipped++;
       if (skippedExamples.length < EXAMPLES) {
-        skippedExamples.push({ row: offset + i + 1, reason: `${missing.cell.kind === 'missing' && missing.cell.why === '#N/A' ? '#N/A' : 'blank'} in ${missing.what}` });
+        skippedExamples.push({ row: worksheetRow(i), reason: `${missing.cell.kind === 'missing' && missing.cell.why === '#N/A' ? '#N/A' : 'blank'} in ${missing.what}` });
       }
       continue;
     }
@@ -118,18 +121,19 @@ export function convertBlock(values: BlockValues, sources: BlockSources, header:
   }
   const usedRows: number[] = [];
   used.forEach((flag, i) => {
-    if (flag === 1) usedRows.push(offset + i + 1);
+    if (flag === 1) usedRows.push(worksheetRow(i));
   });
   return { block: fill(values, used, rows, p), usedRows, skipped, skippedExamples };
 }
 
-function rejectBadCell({ cell, what, source }: Located, offset: number): void {
+/** `offset`: the cell's row within the chosen ranges; `row`: the worksheet row it is on. */
+function rejectBadCell({ cell, what, source }: Located, offset: number, row: number): void {
   if (cell.kind === 'number' || cell.kind === 'missing') return;
   const hint =
     cell.kind === 'text' && /^[-+]?[\d.,\s]+$/.test(cell.text)
       ? ' It looks like a number stored as text: re-enter it as a number without separators.'
       : ' Use a number, or leave the cell blank to skip the row.';
-  throw new EngineError('bad-value', `Row ${offset + 1} of the chosen ranges, cell ${place(source, offset)} ("${what}"), holds ${describeCell(cell)}.${hint}`);
+  throw new EngineError('bad-value', `Row ${row}, cell ${place(source, offset)} ("${what}"), holds ${describeCell(cell)}.${hint}`);
 }
 
 /** Second pass: the used rows only, x column-major, so no row-major copy is ever built. */

@@ -91,3 +91,15 @@ export function resolveRanges(choices: PaneChoices): { ranges?: ResolvedRanges; 
   if (problems.length > 0) return { problems };
   return { ranges: { response, predictorColumns, weights, newRows: newAreas.length > 0 ? newAreas : undefined }, problems };
 }
+
+const SINGLE_AREA_FIELDS: Partial<Record<keyof PaneChoices, string>> = { response: 'The response', weights: 'Weights' };
+
+/**
+ * A selection of several areas is fine for predictors and new rows (each area adds columns), but
+ * the response and the weights are one column each: say so rather than take the first area.
+ */
+export function singleAreaProblem(field: keyof PaneChoices, areas: readonly string[]): FieldProblem | undefined {
+  const what = SINGLE_AREA_FIELDS[field];
+  if (what === undefined || areas.length <= 1) return undefined;
+  return { field, message: `${what} must be one column, but the selection has ${areas.length} areas (${areas.join(', ')}): select one column only.` };
+}

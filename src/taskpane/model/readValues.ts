@@ -11,9 +11,3 @@ export function asCellGrid(values: readonly (readonly unknown[])[]): CellGrid {
 export function asCellValue(v: unknown): CellValue {
   return typeof v === 'number' || typeof v === 'string' || typeof v === 'boolean' ? v : null;
 }
-
-/** Side-by-side concatenation of single-column grids into one grid. */
-export function joinColumns(columns: readonly CellGrid[]): CellGrid {
-  const rows = columns[0]?.length ?? 0;
-  return Array.from({ length: rows }, (_, i) => columns.flatMap((c) => c[i] as CellValue[]));
-}

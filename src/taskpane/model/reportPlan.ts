@@ -1,7 +1,10 @@
 import { cellAddress, columnLetters, formatAbsolute, type RangeRef } from '../../addressing/a1';
+import { QQ_HEADER } from '../../cellGrids/qqGrid';
+import { RESIDUALS_HEADER } from '../../cellGrids/residualsGrid';
 import type { PaneChoices, ResolvedRanges } from './choices';
 import type { PaneAnalysis } from './analysis';
 import { cautionLines, modelEquation, settingsRows } from './reportParts';
+import { joinRuns, reportSources } from './reportSources';
 import { splitUnit } from './sentences';
 
 /** One cell the report writes. Labels are always written as text, never as formulas. */
@@ -39,53 +42,24 @@ export const REPORT_TITLE_PREFIX = 'Plumbline report';
 export const P_VALUE_FORMAT = '[<0.0001]"<0.0001";0.0000';
 export const SETTINGS_CELLS = { level: '$B$5', intercept: '$B$6', knownSigma: '$B$7', robust: '$B$8' } as const;
 
-const CHART_DATA_COLUMN = 19; // T: observed, then U..Y: fitted rows from PREDICT
-const QQ_COLUMN = 26; // AA..AC: the normal Q–Q points
-const GATHER_COLUMN = 36; // AK..: predictor columns gathered when they are not one block
+/** Column T: the normal Q–Q points (T:V), right of the charts. */
+const QQ_COLUMN = 19;
+/** Charts sit over columns K:R, one below the other, 19 rows apart. */
+const CHART_LEFT = 10;
+const CHART_RIGHT = 17;
+const CHART_STRIDE = 19;
 
-interface Layout {
-  y: string;
-  x: string;
-  base: string;
-  added: string | undefined;
-  gathered: { column: number; source: RangeRef }[];
+/** A column of PLUMB.RESIDUALS' table by its header, so the charts follow the table's layout. */
+function residualsColumn(header: string): number {
+  const column = RESIDUALS_HEADER.indexOf(header);
+  if (column < 0) throw new Error(`unreachable: the residual table has no "${header}" column`);
+  return column;
 }
 
-function sameBlock(columns: RangeRef[]): boolean {
-  return columns.every((c, j) => j === 0 || (c.sheet === columns[0].sheet && c.left === columns[0].left + j));
-}
-
-/**
- * Formulas read the data directly when the predictors are one block with any added set at its
- * right end; otherwise the report first gathers the columns, base ones then added ones, with plain
- * reference formulas, so every PLUMB formula still reads one contiguous, live range.
- */
-function layout(sheet: string, ranges: ResolvedRanges, added: readonly number[]): Layout {
-  const columns = ranges.predictorColumns;
-  const k = added.length;
-  const addedAtEnd = added.every((j) => j >= columns.length - k);
-  const y = formatAbsolute(ranges.response);
-  const block = (cols: RangeRef[]): RangeRef => ({ ...cols[0], right: cols[cols.length - 1].right });
-  if (sameBlock(columns) && addedAtEnd) {
-    return {
-      y,
-      x: formatAbsolute(block(columns)),
-      base: formatAbsolute(block(columns.slice(0, columns.length - k))),
-      added: k > 0 ? formatAbsolute(block(columns.slice(columns.length - k))) : undefined,
-      gathered: [],
-    };
-  }
-  const order = columns.map((_, j) => j).sort((a, b) => Number(added.includes(a)) - Number(added.includes(b)));
-  const rows = ranges.response.bottom - ranges.response.top;
-  const here = (left: number, right: number): RangeRef => ({ sheet, top: 0, bottom: rows, left, right });
-  const n = columns.length;
-  return {
-    y,
-    x: formatAbsolute(here(GATHER_COLUMN, GATHER_COLUMN + n - 1)).replace(/^.*!/, ''),
-    base: formatAbsolute(here(GATHER_COLUMN, GATHER_COLUMN + n - k - 1)).replace(/^.*!/, ''),
-    added: k > 0 ? formatAbsolute(here(GATHER_COLUMN + n - k, GATHER_COLUMN + n - 1)).replace(/^.*!/, '') : undefined,
-    gathered: order.map((j, position) => ({ column: GATHER_COLUMN + position, source: columns[j] })),
-  };
+function qqColumn(header: string): number {
+  const column = QQ_HEADER.indexOf(header);
+  if (column < 0) throw new Error(`unreachable: the Q–Q table has no "${header}" column`);
+  return QQ_COLUMN + column;
 }
 
 /** Decimals that show a quantity to about three significant digits of its standard error. */
@@ -114,13 +88,11 @@ export function planReport({ sheetName, ranges, choices, analysis, writtenAt }: 
   const label = (row: number, column: number, text: string, bold = false) => cells.push({ row, column, kind: 'label', text, bold });
 
   const { frame, fit } = analysis;
-  const l = layout(sheetName, ranges, choices.added);
+  const l = reportSources(sheetName, ranges, choices.added);
   // Weights sit between σ and the robust option; without them the argument is left empty.
   const weights = ranges.weights === undefined ? '' : formatAbsolute(ranges.weights);
   const settings = `${SETTINGS_CELLS.level}, ${SETTINGS_CELLS.intercept}, ${SETTINGS_CELLS.knownSigma}, ${weights}, ${SETTINGS_CELLS.robust}`;
-  const predictorText = sameBlock(ranges.predictorColumns)
-    ? formatAbsolute({ ...ranges.predictorColumns[0], right: ranges.predictorColumns[ranges.predictorColumns.length - 1].right })
-    : ranges.predictorColumns.map(formatAbsolute).join(', ');
+  const predictorText = joinRuns(ranges.predictorColumns).map(formatAbsolute).join(', ');
   const specification = `${frame.responseName} from ${l.y}; predictors ${predictorText}`;
   const date = writtenAt.toISOString().slice(0, 10);
 
@@ -168,19 +140,19 @@ export function planReport({ sheetName, ranges, choices, analysis, writtenAt }: 
     row += 11;
   }
 
-  if (ranges.newRows !== undefined) {
+  if (ranges.newRows !== undefined && l.newRows !== undefined) {
     const newRows = ranges.newRows[0];
     label(row, 0, 'What to expect for new cases', true);
     label(row, 1, 'Mean: where the average of many such cases should lie. New: where one new case should fall.');
-    cells.push({ row: row + 1, column: 0, kind: 'formula', formula: `=PLUMB.PREDICT(${l.y}, ${l.x}, ${formatAbsolute(newRows)}, ${settings})` });
+    cells.push({ row: row + 1, column: 0, kind: 'formula', formula: `=PLUMB.PREDICT(${l.y}, ${l.x}, ${l.newRows}, ${settings})` });
     const decimals = fixed(decimalsFor(fit?.sigma ?? 1));
     formats.push({ range: block(row + 1, 0, newRows.bottom - newRows.top + 2, 5), numberFormat: decimals });
     row += newRows.bottom - newRows.top + 5;
   }
 
-  const dataRows = ranges.response.bottom - ranges.response.top + 1;
-  const first = frame.hasHeader ? 1 : 0;
-  const usedRows = dataRows - first;
+  // The tables spill one line per row used; the charts cover every data row, so a later edit that
+  // brings a skipped row back still shows, and lines the tables leave empty are gaps.
+  const dataRows = ranges.response.bottom - ranges.response.top + 1 - (frame.hasHeader ? 1 : 0);
 
   label(row, 0, 'Can these numbers be trusted?', true);
   label(row, 1, 'Each check is read at 1 − level. The charts on the right show the same residuals.');
@@ -196,42 +168,53 @@ export function planReport({ sheetName, ranges, choices, analysis, writtenAt }: 
   label(row, 0, 'Every row used, with its residual and flags (high leverage: h > 2p/n; outlier: |studentized| > 3; influential: Cook > 4/n)', true);
   const residualsTop = row + 1;
   cells.push({ row: residualsTop, column: 0, kind: 'formula', formula: `=PLUMB.RESIDUALS(${l.y}, ${l.x}, ${settings})` });
-  const residualColumn = (offset: number) => block(residualsTop + 1, offset, usedRows, 1);
+  const residuals = (header: string) => block(residualsTop + 1, residualsColumn(header), dataRows, 1);
 
-  const chartTop = 3;
-  label(chartTop - 1, CHART_DATA_COLUMN, 'Chart data (live): observed and fitted for every data row');
-  cells.push({ row: chartTop, column: CHART_DATA_COLUMN, kind: 'formula', formula: `=${l.y}` });
-  cells.push({ row: chartTop, column: CHART_DATA_COLUMN + 1, kind: 'formula', formula: `=PLUMB.PREDICT(${l.y}, ${l.x}, ${l.x}, ${settings})` });
-  label(chartTop - 1, QQ_COLUMN, 'Normal Q–Q points (live)');
-  cells.push({ row: chartTop, column: QQ_COLUMN, kind: 'formula', formula: `=PLUMB.QQPOINTS(${l.y}, ${l.x}, ${settings})` });
+  const qqTop = 3;
+  label(qqTop - 1, QQ_COLUMN, 'Normal Q–Q points (live)');
+  cells.push({ row: qqTop, column: QQ_COLUMN, kind: 'formula', formula: `=PLUMB.QQPOINTS(${l.y}, ${l.x}, ${settings})` });
+  const qq = (header: string) => block(qqTop + 1, qqColumn(header), dataRows, 1);
 
+  // Every chart reads PLUMB results only: they skip blank and #N/A rows as the fit does, where
+  // a plain reference to the data would chart each blank as 0.
   const response = splitUnit(frame.responseName).name.toLowerCase();
-  const place = (index: number) => ({ topLeft: cellAddress(3 + index * 19, 10), bottomRight: cellAddress(20 + index * 19, 17) });
-  charts.push({
-    name: 'ObservedVsFitted',
-    title: `Observed vs fitted ${response}`,
-    x: block(chartTop + first, CHART_DATA_COLUMN + 1, usedRows, 1),
-    y: block(chartTop + first, CHART_DATA_COLUMN, usedRows, 1),
-    xTitle: 'Fitted',
-    yTitle: 'Observed',
-    ...place(0),
+  const place = (index: number) => ({
+    topLeft: cellAddress(3 + index * CHART_STRIDE, CHART_LEFT),
+    bottomRight: cellAddress(20 + index * CHART_STRIDE, CHART_RIGHT),
   });
-  charts.push({ name: 'ResidualsVsFitted', title: 'Residuals vs fitted: look for curves, funnels and lone points', x: residualColumn(1), y: residualColumn(2), xTitle: 'Fitted', yTitle: 'Residual', ...place(1) });
+  charts.push({ name: 'ObservedVsFitted', title: `Observed vs fitted ${response}`, x: residuals('Fitted'), y: residuals('Observed'), xTitle: 'Fitted', yTitle: 'Observed', ...place(0) });
+  charts.push({
+    name: 'ResidualsVsFitted',
+    title: 'Residuals vs fitted: look for curves, funnels and lone points',
+    x: residuals('Fitted'),
+    y: residuals('Residual'),
+    xTitle: 'Fitted',
+    yTitle: 'Residual',
+    ...place(1),
+  });
   charts.push({
     name: 'NormalQQ',
     title: 'Normal Q–Q of studentized residuals: a straight line means roughly normal',
-    x: block(chartTop + 1, QQ_COLUMN, usedRows, 1),
-    y: block(chartTop + 1, QQ_COLUMN + 1, usedRows, 1),
+    x: qq('Normal quantile'),
+    y: qq('Studentized residual'),
     xTitle: 'Normal quantile',
     yTitle: 'Studentized residual',
     ...place(2),
   });
-  charts.push({ name: 'CooksDistance', title: "Cook's distance by row: tall points steer the fit", x: residualColumn(0), y: residualColumn(6), xTitle: 'Row', yTitle: "Cook's distance", ...place(3) });
+  charts.push({
+    name: 'CooksDistance',
+    title: "Cook's distance by row: tall points steer the fit",
+    x: residuals('Row'),
+    y: residuals("Cook's distance"),
+    xTitle: 'Row',
+    yTitle: "Cook's distance",
+    ...place(3),
+  });
 
-  for (const g of l.gathered) {
-    cells.push({ row: 0, column: g.column, kind: 'formula', formula: `=${formatAbsolute(g.source)}` });
+  for (const { areas, block: gathered } of l.gathers) {
+    cells.push({ row: gathered.top, column: gathered.left, kind: 'formula', formula: `=PLUMB.GATHER(${areas.map(formatAbsolute).join(', ')})` });
+    label(gathered.top, gathered.left - 1, `Gathered at the data's own rows (${columnLetters(gathered.left)} onwards): ${areas.map(formatAbsolute).join(', ')}`);
   }
-  if (l.gathered.length > 0) label(0, GATHER_COLUMN - 1, `Model columns gathered from the data (${columnLetters(GATHER_COLUMN)} onwards)`);
 
   return { cells, formats, charts, specification };
 }

@@ -6,7 +6,7 @@ export const RESIDUAL_TABLE_HEADER = ['Row', 'Fitted', 'Residual'];
 
 /**
  * The second pass of a streamed report: one block's rows as [row, fitted, residual], the row
- * being its position in the chosen ranges. The block's columns are in sheet order; the fit's are
+ * being its worksheet row (sheet row 10 is row 10, wherever the chosen ranges start). The block's columns are in sheet order; the fit's are
  * base first and added last, so they are put in the fit's order first.
  */
 export function residualRows(converted: ConvertedBlock, analysis: StreamedAnalysis): number[][] {

@@ -90,3 +90,54 @@ describe('categorical coding', () => {
     ).toThrow('known_x row 3, column 1 ("Temp") holds the text "n/a".');
   });
 });
+
+describe('worksheet origins (issue 13, contract C5)', () => {
+  // "Custom functions parameter options", Detect the address of a parameter: the cell functions
+  // learn each range's address (e.g. Data!B9:B14); the pane knows its own. Header on sheet row 9.
+  const origins = {
+    y: { sheet: 'Data', row: 8, column: 1 },
+    x: [{ sheet: 'Data', row: 8, column: 3 }],
+    weights: { sheet: 'Data', row: 8, column: 6 },
+  };
+  const y = [['y'], [1], [2], [{ errorCode: '#N/A' }], [5], [6]];
+  const x = [[['a', 'b'], [10, 1], [null, 2], [30, 3], [40, 5], [50, 4]]];
+  const weights = [['w'], [1], [1], [1], [2], [1]];
+
+  it('numbers used and skipped rows by worksheet row', () => {
+    const frame = buildModelFrame({ y, x, weights, intercept: true, origins });
+    expect(frame.usedRows).toEqual([10, 13, 14]);
+    expect(frame.skipped).toEqual([
+      { row: 11, reason: 'blank in a' },
+      { row: 12, reason: '#N/A in y' },
+    ]);
+  });
+
+  it('names a bad cell by its worksheet address, in each range by its own origin', () => {
+    const badX = [[['a', 'b'], [10, 1], [20, 'n/a'], [30, 3], [40, 5], [50, 4]]];
+    expect(() => buildModelFrame({ y, x: badX, intercept: true, origins })).toThrow('known_x cell Data!E11 ("b") holds the text "n/a".');
+    const badY = [['y'], [1], [{ errorCode: '#DIV/0!' }], [3], [5], [6]];
+    expect(() => buildModelFrame({ y: badY, x, intercept: true, origins })).toThrow('known_y cell Data!B11 ("y") holds the error #DIV/0!.');
+    const badW = [['w'], [1], [1], [1], [-2], [1]];
+    expect(() => buildModelFrame({ y, x, weights: badW, intercept: true, origins })).toThrow('weights cell Data!G13 is -2; every weight must be a positive number.');
+  });
+
+  it('names a number over a predictor column by address when y has a header', () => {
+    expect(() => buildModelFrame({ y: [['y'], [1], [2]], x: [[[7], [1], [2]]], intercept: true, origins })).toThrow(
+      'known_y starts with a header but known_x cell Data!D9 holds 7',
+    );
+  });
+
+  it('several x blocks each use their own origin; a block without one is named by position', () => {
+    const twoBlocks = [
+      [['a'], [1], [2], [3], [4], [5]],
+      [['b'], [1], [2], [true], [4], [5]],
+    ];
+    const named = { ...origins, x: [origins.x[0], { sheet: 'Other sheet', row: 0, column: 25 }] };
+    expect(() => buildModelFrame({ y, x: twoBlocks, intercept: true, origins: named })).toThrow(`known_x cell 'Other sheet'!Z4 ("b") holds TRUE.`);
+    expect(() => buildModelFrame({ y, x: twoBlocks, intercept: true, origins: { y: origins.y } })).toThrow('known_x row 4, column 1 ("b") holds TRUE.');
+  });
+
+  it('without origins rows stay 1-based positions in the range', () => {
+    expect(buildModelFrame({ y, x, weights, intercept: true }).usedRows).toEqual([2, 5, 6]);
+  });
+});

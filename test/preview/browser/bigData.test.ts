@@ -7,7 +7,7 @@
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { fitModel } from '../../../src/engine';
 import { goTo as goToAddress, sheetNames as listSheets } from '../../support/previewPage';
-import { cellAddress } from '../../../src/addressing/a1';
+import { cellAddress, formatRange } from '../../../src/addressing/a1';
 import { headerAddresses, pieceAddress, tablePieces } from '../../../src/taskpane/model/residualTableLayout';
 import { type BrowserSession, chromiumAvailable, openPage } from '../../support/browser';
 
@@ -98,7 +98,9 @@ describe.skipIf(!available)('large data in the pane', { timeout: 1.5 * WAIT_MS }
     await page().getByRole('button', { name: 'Use selection for Response (one column)' }).click();
     await goTo(`Big!B1:D${ROWS + 1}`);
     await page().getByRole('button', { name: 'Use selection for Predictors' }).click();
-    await page().waitForFunction((wanted) => (document.querySelector('#predictors') as HTMLInputElement | null)?.value === wanted, `Big!B1:D${ROWS + 1}`);
+    // As Excel writes the address: a full sheet's rows are the whole columns, "Big!B:D".
+    const predictorField = formatRange({ sheet: 'Big', top: 0, left: 1, bottom: ROWS, right: 3 });
+    await page().waitForFunction((wanted) => (document.querySelector('#predictors') as HTMLInputElement | null)?.value === wanted, predictorField);
   }, 4.5 * WAIT_MS);
   afterAll(async () => {
     await session?.close();
@@ -225,5 +227,70 @@ describe.skipIf(!available)('large data in the pane', { timeout: 1.5 * WAIT_MS }
       freedCell,
     );
     expect(kept).toBe('my note');
+  });
+  it('freezes the values report, its residual table of every row included, though it is far more than one 5 MB request', async () => {
+    // "Resource limits and performance optimization for Office Add-ins": each request and response is capped at 5 MB.
+    await page().evaluate(() =>
+      Excel.run(async (context) => {
+        context.workbook.worksheets.getItem('Plumbline report').activate();
+        await context.sync();
+      }),
+    );
+    await page().getByRole('button', { name: 'Freeze a copy' }).click();
+    // Every cell of the report is read and the filled ones written again: the slowest step here.
+    await expect.poll(() => page().locator('.done').innerText(), { timeout: 3 * WAIT_MS }).toContain('Values-only copy written to "Plumbline report values"');
+    // The copy starts three rows lower, below its stamp; sampled entries of the table must match the report's.
+    const entries = [0, 99_999, ROWS - 2];
+    const { report, copy } = await page().evaluate(
+      ({ reportCells, copyCells }) =>
+        Excel.run(async (context) => {
+          const read = (sheet: string, addresses: string[]) => addresses.map((a) => context.workbook.worksheets.getItem(sheet).getRange(a).load('values'));
+          const fromReport = read('Plumbline report', reportCells);
+          const fromCopy = read('Plumbline report values', copyCells);
+          await context.sync();
+          return { report: fromReport.map((r) => r.values[0]), copy: fromCopy.map((r) => r.values[0]) };
+        }),
+      {
+        reportCells: entries.map((i) => pieceAddress(tablePieces(i, 1)[0])),
+        copyCells: entries.map((i) => {
+          const piece = tablePieces(i, 1)[0];
+          return pieceAddress({ ...piece, top: piece.top + 3 });
+        }),
+      },
+    );
+    expect(report.every((row) => typeof row[0] === 'number')).toBe(true);
+    expect(copy).toEqual(report);
+  }, 3.5 * WAIT_MS);
+
+  it('reads and fits 21 predictors over 12,000 rows, more than one 5 MB response, in blocks sized by payload', async () => {
+    const rows = 12_000;
+    const width = 22;
+    // Long decimals, so the table is heavy: 12,000 × 22 cells of about 20 characters each.
+    await page().evaluate(
+      async ({ rows, width }) => {
+        await Excel.run(async (context) => {
+          const sheet = context.workbook.worksheets.add('Wide');
+          sheet.getRange('A1:V1').values = [Array.from({ length: width }, (_, j) => (j === 0 ? 'y' : `w${j}`))];
+          await context.sync();
+          for (let start = 0; start < rows; start += 2_000) {
+            const block = Array.from({ length: 2_000 }, (_, k) => {
+              const i = start + k;
+              const x = Array.from({ length: width - 1 }, (_, j) => ((i * (j + 7)) % 997) / 13 + 1 / (j + 3));
+              return [x.reduce((sum, v, j) => sum + (j % 3) * v, 1) + ((i * 7919) % 101) / 101, ...x];
+            });
+            sheet.getRange(`A${start + 2}:V${start + 2_001}`).values = block;
+            await context.sync();
+          }
+        });
+      },
+      { rows, width },
+    );
+    await page().locator('#response').fill(`Wide!A1:A${rows + 1}`);
+    await page().locator('#response').dispatchEvent('change');
+    await page().locator('#predictors').fill(`Wide!B1:V${rows + 1}`);
+    await page().locator('#predictors').dispatchEvent('change');
+    await page().getByRole('button', { name: 'Read data and fit' }).click();
+    await expect.poll(() => page().locator('.data-summary').innerText(), { timeout: WAIT_MS }).toContain(`Rows used: ${rows.toLocaleString('en-US')}`);
+    expect(await page().locator('.pane .problem[role="alert"]').count()).toBe(0);
   });
 });

@@ -135,4 +135,28 @@ describe.skipIf(!available)('guided pane in the preview workbook', () => {
     expect(String(copy.values[0][0])).toContain('values only');
     expect(copy.values.flat()).toContain('Term');
   });
+
+  it('names a blanked row by its worksheet row, in the pane and in the live report', async () => {
+    // Sheet row 10 is "row 10" (common practice (no source): the number at the sheet's left edge).
+    await goTo('Batches!B10');
+    await page().fill('#formula-input', '');
+    await page().press('#formula-input', 'Enter');
+    await page().getByRole('button', { name: 'Read data and fit' }).click();
+    await expect.poll(() => page().locator('.data-summary').innerText()).toContain('Rows skipped: 1 (row 10: blank in Extraction yield (%))');
+    const report = await sheetSnapshot('Plumbline report');
+    const header = report.values.findIndex((r) => r[0] === 'Row' && r[1] === 'Observed');
+    expect(header).toBeGreaterThan(0);
+    const rows = report.values.slice(header + 1).map((r) => r[0]).filter((v) => typeof v === 'number');
+    expect(rows).toEqual([...Array.from({ length: 8 }, (_, i) => i + 2), ...Array.from({ length: 51 }, (_, i) => i + 11)]);
+    // The observed-vs-fitted chart reads the residual table, so the blanked response is a gap; a plain
+    // reference to the data would show it as 0 (in Excel a formula referring to an empty cell yields 0).
+    await page().evaluate(() =>
+      Excel.run(async (context) => {
+        context.workbook.worksheets.getItem('Plumbline report').activate();
+        await context.sync();
+      }),
+    );
+    await expect.poll(() => page().locator('[data-chart="ObservedVsFitted"] circle').count()).toBe(59);
+    expect(await page().locator('[data-chart="CooksDistance"] circle').count()).toBe(59);
+  });
 });

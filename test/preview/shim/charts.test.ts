@@ -5,6 +5,7 @@
  * against @types/office-js so tsc checks the calls match the real declarations.
  */
 import { beforeEach, describe, expect, it } from 'vitest';
+import { plotChart } from '../../../src/preview/workbook/chartData';
 import type { PreviewWorkbook } from '../../../src/preview/workbook/workbook';
 import { freshWorkbook, NOT_LOADED, officeError, thrownOfficeError } from './harness';
 
@@ -23,8 +24,8 @@ beforeEach(() => {
 
 const dataSheet = (context: Excel.RequestContext) => context.workbook.worksheets.getItem('Data');
 
-/** Adds a scatter chart of A1:B4 and returns the chart's name. */
-async function addChart(address = 'A1:B4', seriesBy?: Excel.ChartSeriesBy): Promise<string> {
+/** Adds a scatter chart of A2:B4 (series in columns) and returns the chart's name. */
+async function addChart(address = 'A2:B4', seriesBy: Excel.ChartSeriesBy = Excel.ChartSeriesBy.columns): Promise<string> {
   return Excel.run(async (context) => {
     const sheet = dataSheet(context);
     const chart = sheet.charts.add(Excel.ChartType.xyscatter, sheet.getRange(address), seriesBy);
@@ -41,17 +42,13 @@ const only = () => {
 };
 
 describe('charts.add', () => {
-  it('makes a scatter chart with X from the first column, Y from the second and the header as the series name', async () => {
+  it('makes a scatter chart with X from the first column and Y from the second, named Series1', async () => {
     const name = await addChart();
     expect(name).toBe('Chart 1');
     const chart = only();
     expect(chart.type).toBe('XYScatter');
     expect(chart.series).toEqual([
-      {
-        name: { sheet: 'Data', top: 0, left: 1, bottom: 0, right: 1 },
-        x: { sheet: 'Data', top: 1, left: 0, bottom: 3, right: 0 },
-        y: { sheet: 'Data', top: 1, left: 1, bottom: 3, right: 1 },
-      },
+      { name: 'Series1', x: { sheet: 'Data', top: 1, left: 0, bottom: 3, right: 0 }, y: { sheet: 'Data', top: 1, left: 1, bottom: 3, right: 1 } },
     ]);
     await Excel.run(async (context) => {
       const loaded = dataSheet(context).charts.getItem('Chart 1');
@@ -61,13 +58,14 @@ describe('charts.add', () => {
       await context.sync();
       expect(loaded.chartType).toBe('XYScatter');
       // Excel titles a one-series chart with the series name until the title is set.
-      expect(loaded.title.text).toBe('Yield (%)');
-      expect(series.name).toBe('Yield (%)');
+      expect(loaded.title.text).toBe('Series1');
+      expect(series.name).toBe('Series1');
     });
   });
 
-  it('makes one series per further column, sharing the X column, named SeriesN without a header', async () => {
-    model.setInputs('Data', 0, 0, [[1, 2, 3]]);
+  // Header rows as series names are Excel's own rule: the preview plots every source cell, so a
+  // report that relies on them shows wrong series here instead of passing.
+  it('never takes a text first row as series names: every cell of the source is data', async () => {
     await addChart('A1:C4', Excel.ChartSeriesBy.columns);
     const { series } = only();
     expect(series.map((s) => s.name)).toEqual(['Series1', 'Series2']);
@@ -81,6 +79,19 @@ describe('charts.add', () => {
       await context.sync();
       expect(title.text).toBe('Chart Title');
     });
+  });
+
+  // Excel.ChartSeriesBy: "auto" guesses from the shape on desktop and means columns on the web.
+  it.each([[undefined], ['Auto' as Excel.ChartSeriesBy]])('refuses seriesBy %s with InvalidArgument, since its layout differs by platform', async (seriesBy) => {
+    const error = await officeError(
+      Excel.run(async (context) => {
+        const sheet = dataSheet(context);
+        sheet.charts.add(Excel.ChartType.xyscatter, sheet.getRange('A2:B4'), seriesBy);
+        await context.sync();
+      }),
+    );
+    expect(error.code).toBe('InvalidArgument');
+    expect(model.charts('Data')).toEqual([]);
   });
 
   it('numbers new charts on and sizes them 360 by 216 points', async () => {
@@ -133,7 +144,7 @@ describe('reading chart properties', () => {
       chart.title.load('text');
       expect(thrownOfficeError(() => chart.title.text).code).toBe('PropertyNotLoaded');
       await context.sync();
-      expect(chart.title.text).toBe('Yield (%)');
+      expect(chart.title.text).toBe('Series1');
     });
   });
 
@@ -143,21 +154,17 @@ describe('reading chart properties', () => {
       const chart = dataSheet(context).charts.getItem('Chart 1');
       chart.load('title/text, axes/valueAxis/title/text, worksheet/name, series/items/name');
       await context.sync();
-      expect(chart.title.text).toBe('Yield (%)');
+      expect(chart.title.text).toBe('Series1');
       expect(chart.axes.valueAxis.title.text).toBe('');
       expect(chart.worksheet.name).toBe('Data');
-      expect(chart.series.items.map((s) => s.name)).toEqual(['Yield (%)']);
+      expect(chart.series.items.map((s) => s.name)).toEqual(['Series1']);
     });
   });
 
-  it('reads the series name live from its header cell', async () => {
+  it('plots its cells live: an edited Y cell shows in the chart without re-adding it', async () => {
     await addChart();
-    model.setInputs('Data', 0, 1, [['Extraction yield']]);
-    await Excel.run(async (context) => {
-      const series = dataSheet(context).charts.getItem('Chart 1').series.getItemAt(0).load('name');
-      await context.sync();
-      expect(series.name).toBe('Extraction yield');
-    });
+    model.setInputs('Data', 1, 1, [[99]]);
+    expect(plotChart(model, only()).series[0].points[0]).toEqual({ x: 12, y: 99 });
   });
 });
 
@@ -188,7 +195,7 @@ describe('series', () => {
       await context.sync();
     });
     expect(only().series[0]).toEqual({
-      name: { sheet: 'Data', top: 0, left: 1, bottom: 0, right: 1 },
+      name: 'Series1',
       x: { sheet: 'Data', top: 1, left: 2, bottom: 3, right: 2 },
       y: { sheet: 'Data', top: 1, left: 0, bottom: 3, right: 0 },
     });

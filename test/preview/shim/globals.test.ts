@@ -52,15 +52,20 @@ describe('CustomFunctions', () => {
     expect(registered).toEqual(['ONE', 'TWO']);
   });
 
-  it('Error carries its code and message, and a thrown one shows in the cell', () => {
+  // "Handle and return errors from your custom function": custom messages show only with #VALUE! and #N/A.
+  it('Error carries its code and message, and a thrown one shows in the cell (its message only for #VALUE! and #N/A)', () => {
     const model = freshWorkbook();
     const error = new CustomFunctions.Error(CustomFunctions.ErrorCode.notAvailable, 'No rows.');
     expect([error.code, error.message]).toEqual(['#N/A', 'No rows.']);
     CustomFunctions.associate('FAILS', () => {
       throw new CustomFunctions.Error(CustomFunctions.ErrorCode.invalidNumber, 'Too few rows.');
     });
-    model.setInputs('Sheet1', 0, 0, [['=PLUMB.FAILS()']]);
-    expect(model.valueAt({ sheet: 'Sheet1', row: 0, column: 0 })).toEqual({ error: '#NUM!', message: 'Too few rows.' });
+    CustomFunctions.associate('MISSING', () => {
+      throw new CustomFunctions.Error(CustomFunctions.ErrorCode.notAvailable, 'No rows.');
+    });
+    model.setInputs('Sheet1', 0, 0, [['=PLUMB.FAILS()'], ['=PLUMB.MISSING()']]);
+    expect(model.valueAt({ sheet: 'Sheet1', row: 0, column: 0 })).toEqual({ error: '#NUM!' });
+    expect(model.valueAt({ sheet: 'Sheet1', row: 1, column: 0 })).toEqual({ error: '#N/A', message: 'No rows.' });
   });
 
   it('ErrorCode has the codes Excel shows', () => {

@@ -2,6 +2,7 @@
  * Shared set-up for the shim suites: a fresh preview workbook with the shim installed over it,
  * and a way to get the OfficeExtension.Error a batch rejects with.
  */
+import type { ShimSettings } from '../../../src/preview/shim/hostSettings';
 import { installOfficeShim } from '../../../src/preview/shim/install';
 import { createWorkbook, type PreviewWorkbook } from '../../../src/preview/workbook/workbook';
 
@@ -9,6 +10,17 @@ export function freshWorkbook(onFunctionRegistered?: (id: string) => void): Prev
   const model = createWorkbook();
   installOfficeShim(model, onFunctionRegistered ? { onFunctionRegistered } : undefined);
   return model;
+}
+
+/** A fresh workbook and the shim's live settings (sync delay, payload limit, cell-edit error code). */
+export function freshHost(settings?: Partial<ShimSettings>): { model: PreviewWorkbook; settings: ShimSettings } {
+  const model = createWorkbook();
+  return { model, settings: installOfficeShim(model, { settings }) };
+}
+
+/** Lets pending timers and promises run, so a test can see that something has not settled yet. */
+export async function afterPendingWork(rounds = 5): Promise<void> {
+  for (let i = 0; i < rounds; i++) await new Promise((resolve) => setTimeout(resolve, 0));
 }
 
 /** The error a promise rejects with, checked to be the OfficeExtension.Error the API promises. */

@@ -206,14 +206,20 @@ describe('worksheet', () => {
 });
 
 describe('used range', () => {
-  it('spans A1 to the last used cell', async () => {
+  // "Excel.Worksheet" getUsedRange: "the smallest range that encompasses any cells that have a
+  // value or formatting assigned to them"; with valuesOnly, only cells with values count.
+  it('spans the first to the last used cell, counting formatting unless valuesOnly', async () => {
     model.setInputs('Sheet1', 3, 2, [['x']]);
-    const address = await Excel.run(async (context) => {
-      const used = context.workbook.worksheets.getItem('Sheet1').getUsedRange().load('address');
+    model.setInputs('Sheet1', 5, 3, [[1]]);
+    model.setNumberFormats('Sheet1', 9, 1, [['0.00']]);
+    const [all, values] = await Excel.run(async (context) => {
+      const sheet = context.workbook.worksheets.getItem('Sheet1');
+      const used = [sheet.getUsedRange().load('address'), sheet.getUsedRange(true).load('address')];
       await context.sync();
-      return used.address;
+      return used.map((range) => range.address);
     });
-    expect(address).toBe('Sheet1!A1:C4');
+    expect(all).toBe('Sheet1!B4:D10');
+    expect(values).toBe('Sheet1!C4:D6');
   });
 
   it('is A1 on an empty sheet, and a null object through getUsedRangeOrNullObject', async () => {

@@ -117,11 +117,15 @@ describe('plotChart', () => {
     expect(after.title).toBe('Extraction yield');
   });
 
-  it('leaves out points whose Y is blank, text or an error', () => {
+  // From memory: Excel leaves gaps for blank cells and #N/A in a scatter chart, and plots text
+  // (also "" returned by a formula) at zero, which is why charted cells must never hold "".
+  it('leaves out points whose Y is blank or an error, and plots text Y at zero', () => {
     const { wb, series } = setup();
     wb.setInputs('Data', 1, 1, [[null]]);
     wb.setInputs('Data', 2, 1, [['n/a']]);
     wb.addChart('Data', scatter([series]));
+    expect(plotChart(wb, wb.charts('Data')[0]).series[0].points).toEqual([{ x: 18, y: 0 }, { x: 24, y: 21.4 }]);
+    wb.setInputs('Data', 2, 1, [['=PLUMB.MISSING()']]);
     expect(plotChart(wb, wb.charts('Data')[0]).series[0].points).toEqual([{ x: 24, y: 21.4 }]);
   });
 

@@ -4,6 +4,7 @@
  * stand-ins registered for the test, so each expectation is computed by hand.
  */
 import { describe, expect, it } from 'vitest';
+import { CustomFunctionsError } from '../../../src/preview/workbook/customFunctionError';
 import { createWorkbook } from '../../../src/preview/workbook/workbook';
 
 function setup() {
@@ -16,7 +17,7 @@ function setup() {
   });
   wb.registerFunction('SCALE', (range: unknown, factor: unknown) => (range as number[][]).map((r) => r.map((v) => v * (factor as number))));
   wb.registerFunction('FAIL', () => {
-    throw { code: '#VALUE!', message: 'known_y is empty: select the column of responses.' };
+    throw new CustomFunctionsError('#VALUE!', 'known_y is empty: select the column of responses.');
   });
   wb.setFunctionShapes([{ id: 'SCALE', parameters: [{ dimensionality: 'matrix', optional: false }, { dimensionality: 'scalar', optional: false }] }]);
   wb.setInputs('Data', 0, 0, [[1, 2], [3, 4], [5, 6]]);
@@ -80,7 +81,9 @@ describe('preview workbook', () => {
     expect(wb.valueAt(at('Data', 1, 0))).toBe(6);
   });
 
-  it('passes blanks as "" and null results show as 0, as Excel does', () => {
+  // OfficeDev/office-js issue 1503 (by design): null in a returned array shows as 0. Blanks in
+  // range arguments arrive as null (issues 4702, 5262; test/preview/workbook/functionArguments.test.ts).
+  it('passes blanks as null and shows null results as 0, as Excel does', () => {
     const wb = createWorkbook('Data');
     let seen: unknown;
     wb.registerFunction('PEEK', (r: unknown) => {
@@ -89,9 +92,19 @@ describe('preview workbook', () => {
     });
     wb.setInputs('Data', 0, 0, [[1, null]]);
     wb.setInputs('Data', 2, 0, [['=PLUMB.PEEK(A1:B1)']]);
-    expect(seen).toEqual([[1, '']]);
+    expect(seen).toEqual([[1, null]]);
     expect(wb.valueAt(at('Data', 2, 0))).toBe(0);
     expect(wb.valueAt(at('Data', 2, 1))).toBe('x');
+  });
+
+  // Common practice (no source): in Excel "=B2" on an empty B2 shows 0, and so does every blank
+  // cell of a spilled "=B2:B4"; the report must not rely on such references to carry blanks.
+  it('shows a reference to an empty cell as 0, alone and inside a spilled range', () => {
+    const wb = createWorkbook('Data');
+    wb.setInputs('Data', 0, 1, [[5], [null], ['text']]);
+    wb.setInputs('Data', 0, 4, [['=B2', '=B1:B3']]);
+    expect(wb.valueAt(at('Data', 0, 4))).toBe(0);
+    expect([0, 1, 2].map((row) => wb.valueAt(at('Data', row, 5)))).toEqual([5, 0, 'text']);
   });
 
   it('keeps sheet names unique and valid, and never deletes the last sheet', () => {

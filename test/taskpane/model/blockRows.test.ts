@@ -1,6 +1,8 @@
 /**
  * One block of sheet values → the accumulator's block: the header decided as the cell functions
- * decide it, incomplete rows skipped and counted, bad cells named by their sheet address.
+ * decide it, incomplete rows skipped and counted, bad cells named by their sheet address, and
+ * rows numbered as the sheet numbers them (sheet row 10 is "row 10" wherever the range starts;
+ * common practice (no source): a user finds a row by the number at the sheet's left edge).
  */
 import { describe, expect, it } from 'vitest';
 import { buildModelFrame, type CellValue } from '../../../src/engine';
@@ -11,6 +13,16 @@ const sources: BlockSources = {
   predictors: [
     { sheet: 'Data', top: 0, bottom: 99, left: 1, right: 1 },
     { sheet: 'Data', top: 0, bottom: 99, left: 3, right: 3 },
+  ],
+  weights: undefined,
+};
+
+/** The same columns from sheet row 10 down, on a sheet whose name needs quotes. */
+const lower: BlockSources = {
+  response: { sheet: 'Batch log', top: 9, bottom: 108, left: 0, right: 0 },
+  predictors: [
+    { sheet: 'Batch log', top: 9, bottom: 108, left: 1, right: 1 },
+    { sheet: 'Batch log', top: 9, bottom: 108, left: 3, right: 3 },
   ],
   weights: undefined,
 };
@@ -47,14 +59,27 @@ describe('convertBlock', () => {
     expect(skippedExamples[2].reason).toBe('#N/A in b');
   });
 
-  it('uses the same rows as the model frame on the same cells', () => {
+  it('uses the same rows as the model frame on the same cells, numbered alike from the same origin', () => {
     const y: CellValue[] = ['y', 1, 2, '', 4, 5, 6];
     const a: CellValue[] = ['a', 10, null, 30, 40, '#N/A', 60];
     const b: CellValue[] = ['b', 100, 200, 300, 400, 500, 600];
-    const frame = buildModelFrame({ y: y.map((v) => [v]), x: [y.map((_, i) => [a[i], b[i]])], intercept: true });
-    const { block, skipped } = convertBlock(values(y, a, b), sources, header, 0);
+    const origin = (column: number) => ({ sheet: 'Batch log', row: 9, column });
+    const frame = buildModelFrame({ y: y.map((v) => [v]), x: [a.map((v) => [v]), b.map((v) => [v])], intercept: true, origins: { y: origin(0), x: [origin(1), origin(3)] } });
+    const { block, skipped, skippedExamples, usedRows } = convertBlock(values(y, a, b), lower, header, 0);
     expect(Array.from(block.y)).toEqual(frame.data.y);
     expect(skipped).toBe(frame.skipped.length);
+    expect(skippedExamples).toEqual(frame.skipped);
+    expect(usedRows).toEqual(frame.usedRows);
+    // Header on sheet row 10, so the first data row is sheet row 11; rows 12 and 13 (blank, "") and 15 (#N/A) are left out.
+    expect(usedRows).toEqual([11, 14, 16]);
+  });
+
+  it('numbers a range that starts below the top of the sheet by its worksheet rows', () => {
+    const { usedRows, skippedExamples } = convertBlock(values([1, '', 3], [2, 3, 4], [4, 5, 6]), lower, header, 20000);
+    // Block offset 20,000 within a range whose first row is sheet row 10.
+    expect(usedRows).toEqual([20010, 20012]);
+    expect(skippedExamples).toEqual([{ row: 20011, reason: 'blank in y' }]);
+    expect(() => convertBlock(values([1, 2], [3, 'abc'], [5, 6]), lower, header, 0)).toThrow(`Row 11, cell 'Batch log'!B11 ("a"), holds the text "abc".`);
   });
 
   it('treats a later block as data from its first row and numbers rows from the block offset', () => {
@@ -65,7 +90,7 @@ describe('convertBlock', () => {
 
   it('names the sheet cell of text in a numeric column', () => {
     expect(() => convertBlock(values([1, 2], [3, 'abc'], [5, 6]), sources, header, 40000)).toThrow(
-      'Row 40002 of the chosen ranges, cell Data!B40002 ("a"), holds the text "abc". Use a number, or leave the cell blank to skip the row.',
+      'Row 40002, cell Data!B40002 ("a"), holds the text "abc". Use a number, or leave the cell blank to skip the row.',
     );
   });
 

@@ -1,6 +1,6 @@
-/** The pane's address checks, each message worked out by hand. */
+/** The pane's address checks, each message worked out by hand (common practice (no source)). */
 import { describe, expect, it } from 'vitest';
-import { EMPTY_CHOICES, resolveRanges } from '../../../src/taskpane/model/choices';
+import { EMPTY_CHOICES, resolveRanges, singleAreaProblem } from '../../../src/taskpane/model/choices';
 
 const base = { ...EMPTY_CHOICES, response: 'Batches!$B$1:$B$61', predictors: 'Batches!$C$1:$E$61,Batches!$G$1:$G$61' };
 
@@ -28,5 +28,23 @@ describe('resolveRanges', () => {
 
   it('requires the sheet in every address', () => {
     expect(resolveRanges({ ...base, response: 'B1:B61' }).problems[0].message).toContain('with its sheet');
+  });
+});
+
+describe('singleAreaProblem', () => {
+  const two = ['Batches!B1:B61', 'Batches!D1:D61'];
+
+  it('refuses several areas for the response and the weights, naming them', () => {
+    expect(singleAreaProblem('response', two)).toEqual({
+      field: 'response',
+      message: 'The response must be one column, but the selection has 2 areas (Batches!B1:B61, Batches!D1:D61): select one column only.',
+    });
+    expect(singleAreaProblem('weights', two)?.field).toBe('weights');
+  });
+
+  it('takes several areas for predictors and new rows, and one area anywhere', () => {
+    expect(singleAreaProblem('predictors', two)).toBeUndefined();
+    expect(singleAreaProblem('newRows', two)).toBeUndefined();
+    expect(singleAreaProblem('response', two.slice(0, 1))).toBeUndefined();
   });
 });

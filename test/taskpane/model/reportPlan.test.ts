@@ -2,18 +2,27 @@
  * The report as planned data: formulas over absolute data references, labels as text, settings
  * cells referenced by every formula, and the layout for predictors that are not one block.
  * Fits use seeded random data; the statistics themselves are checked in test/engine.
+ *
+ * No cell of the report reads the data through a plain reference: in Excel a formula that refers
+ * to an empty cell yields 0 (common practice (no source); the preview host models it), so
+ * `=Data!C1:C21` would chart and fit every blank as 0. Data reach the sheet only through PLUMB
+ * functions.
  */
 import { describe, expect, it } from 'vitest';
 import { analyze } from '../../../src/taskpane/model/analysis';
 import { EMPTY_CHOICES, type PaneChoices, resolveRanges } from '../../../src/taskpane/model/choices';
-import { planReport, SETTINGS_CELLS } from '../../../src/taskpane/model/reportPlan';
+import { QQ_HEADER } from '../../../src/cellGrids/qqGrid';
+import { RESIDUALS_HEADER } from '../../../src/cellGrids/residualsGrid';
+import { planReport, type ReportCell, SETTINGS_CELLS } from '../../../src/taskpane/model/reportPlan';
 import { randomProblem } from '../../support/random';
 
 const { y, x } = randomProblem(91, 20, 3);
+const column = (left: number) => ({ sheet: 'Data', top: 0, bottom: 20, left, right: left });
 const data = {
   response: [['=danger'], ...y.map((v) => [v])],
   predictorColumns: [0, 1, 2].map((j) => [[['Alpha', 'Beta', '+Gamma'][j]], ...x.map((r) => [r[j]])]),
   weights: undefined,
+  sources: { response: column(0), predictors: [column(1), column(2), column(3)], weights: undefined },
 };
 
 function plan(choices: PaneChoices) {
@@ -23,6 +32,7 @@ function plan(choices: PaneChoices) {
 }
 
 const choices: PaneChoices = { ...EMPTY_CHOICES, response: 'Data!A1:A21', predictors: 'Data!B1:D21', added: [2] };
+const formulaCells = (cells: ReportCell[]) => cells.flatMap((c) => (c.kind === 'formula' ? [c] : []));
 
 describe('planReport', () => {
   it('writes every PLUMB formula over absolute data ranges and the settings cells', () => {
@@ -41,7 +51,7 @@ describe('planReport', () => {
     const labels = p.cells.flatMap((c) => (c.kind === 'label' ? [c.text] : []));
     expect(labels.some((t) => t.includes('=danger'))).toBe(true);
     const formulas = p.cells.flatMap((c) => (c.kind === 'formula' ? [c.formula] : []));
-    expect(formulas.every((f) => /^=(PLUMB\.|Data!)/.test(f))).toBe(true);
+    expect(formulas.every((f) => /^=PLUMB\./.test(f))).toBe(true);
     expect(labels.some((t) => t.startsWith('Does +Gamma add anything?'))).toBe(true);
   });
 
@@ -58,29 +68,80 @@ describe('planReport', () => {
   it('passes the weights column between σ and the robust cell when there is one', () => {
     const { ranges } = resolveRanges({ ...choices, weights: 'Data!E1:E21' });
     if (!ranges) throw new Error('bad test ranges');
-    const withWeights = planReport({ sheetName: 'R', ranges, choices, analysis: analyze({ ...data, weights: [['w'], ...y.map(() => [1])] }, choices), writtenAt: new Date() });
+    const withWeights = planReport({ sheetName: 'R', ranges, choices, analysis: analyze({ ...data, weights: [['w'], ...y.map(() => [1])], sources: { ...data.sources, weights: column(4) } }, choices), writtenAt: new Date() });
     const terms = withWeights.cells.find((c) => c.kind === 'formula' && c.formula.startsWith('=PLUMB.TERMS'));
     expect(terms).toMatchObject({ formula: '=PLUMB.TERMS(Data!$A$1:$A$21, Data!$B$1:$D$21, $B$5, $B$6, $B$7, Data!$E$1:$E$21, $B$8)' });
   });
 
-  it('gathers the columns, base then added, when the added set is not at the right end', () => {
+  it('gathers the columns, base then added, with PLUMB.GATHER when the added set is not at the right end', () => {
     const p = plan({ ...choices, added: [0] });
-    const gathered = p.cells.filter((c) => c.kind === 'formula' && c.row === 0);
-    expect(gathered.map((c) => (c.kind === 'formula' ? c.formula : ''))).toEqual(['=Data!$C$1:$C$21', '=Data!$D$1:$D$21', '=Data!$B$1:$B$21']);
-    const nested = p.cells.find((c) => c.kind === 'formula' && c.formula.startsWith('=PLUMB.NESTEDF'));
-    expect(nested).toMatchObject({ formula: expect.stringContaining('$AK$1:$AL$21, $AM$1:$AM$21') });
+    const gathers = formulaCells(p.cells).filter((c) => c.formula.startsWith('=PLUMB.GATHER'));
+    // Neighbouring columns travel as one area; the block sits at the data's own rows, from column Y.
+    expect(gathers).toEqual([{ row: 0, column: 24, kind: 'formula', formula: '=PLUMB.GATHER(Data!$C$1:$D$21, Data!$B$1:$B$21)' }]);
+    const nested = formulaCells(p.cells).find((c) => c.formula.startsWith('=PLUMB.NESTEDF'));
+    expect(nested?.formula).toContain('Data!$A$1:$A$21, $Y$1:$Z$21, $AA$1:$AA$21,');
+    const terms = formulaCells(p.cells).find((c) => c.formula.startsWith('=PLUMB.TERMS'));
+    expect(terms?.formula).toContain('Data!$A$1:$A$21, $Y$1:$AA$21,');
   });
 
-  it('binds the four charts to the report cells that the live formulas fill', () => {
+  it('places gathered areas at the worksheet rows they come from, so rows keep their sheet numbers', () => {
+    const lower: PaneChoices = { ...EMPTY_CHOICES, response: 'Data!A5:A25', predictors: 'Data!B5:B25,Data!D5:E25', added: [] };
+    const p = plan(lower);
+    const gathers = formulaCells(p.cells).filter((c) => c.formula.startsWith('=PLUMB.GATHER'));
+    expect(gathers).toEqual([{ row: 4, column: 24, kind: 'formula', formula: '=PLUMB.GATHER(Data!$B$5:$B$25, Data!$D$5:$E$25)' }]);
+    const residuals = formulaCells(p.cells).find((c) => c.formula.startsWith('=PLUMB.RESIDUALS'));
+    expect(residuals?.formula).toContain('Data!$A$5:$A$25, $Y$5:$AA$25,');
+    // The gathered block (rows 5–25, Y:AA) holds nothing else of the report.
+    const inBlock = p.cells.filter((c) => c.row >= 4 && c.row <= 24 && c.column >= 24 && c.column <= 26);
+    expect(inBlock).toEqual(gathers);
+    expect(p.specification).toContain('predictors Data!$B$5:$B$25, Data!$D$5:$E$25');
+  });
+
+  it('gathers several areas of new rows beside the predictors, and passes one area as it is', () => {
+    const two = plan({ ...choices, added: [0], newRows: 'Plan!B2:C4,Plan!E2:E4' });
+    const gathers = formulaCells(two.cells).filter((c) => c.formula.startsWith('=PLUMB.GATHER'));
+    expect(gathers.map((c) => [c.row, c.column, c.formula])).toEqual([
+      [0, 24, '=PLUMB.GATHER(Data!$C$1:$D$21, Data!$B$1:$B$21)'],
+      [1, 28, '=PLUMB.GATHER(Plan!$B$2:$C$4, Plan!$E$2:$E$4)'],
+    ]);
+    expect(formulaCells(two.cells).find((c) => c.formula.startsWith('=PLUMB.PREDICT'))?.formula).toContain('$Y$1:$AA$21, $AC$2:$AE$4,');
+    const one = plan({ ...choices, newRows: 'Plan!B2:D4' });
+    expect(formulaCells(one.cells).filter((c) => c.formula.startsWith('=PLUMB.GATHER'))).toEqual([]);
+    expect(formulaCells(one.cells).find((c) => c.formula.startsWith('=PLUMB.PREDICT'))?.formula).toContain('Data!$B$1:$D$21, Plan!$B$2:$D$4,');
+  });
+
+  it('binds every chart to PLUMB results: observed and fitted from the residual table, never to the data', () => {
     const p = plan(choices);
     const [observed, residuals, qq, cooks] = p.charts;
-    expect(observed.x).toMatchObject({ sheet: 'Plumbline report', left: 20, right: 20, top: 4, bottom: 23 });
-    expect(observed.y).toMatchObject({ left: 19, top: 4, bottom: 23 });
-    const residualTable = p.cells.find((c) => c.kind === 'formula' && c.formula.startsWith('=PLUMB.RESIDUALS'));
-    expect(residuals.x).toMatchObject({ left: 1, top: (residualTable?.row ?? -1) + 1, bottom: (residualTable?.row ?? -1) + 20 });
-    expect(residuals.y.left).toBe(2);
-    expect(cooks.x.left).toBe(0);
-    expect(cooks.y.left).toBe(6);
-    expect(qq.x).toMatchObject({ left: 26, top: 4, bottom: 23 });
+    const table = formulaCells(p.cells).find((c) => c.formula.startsWith('=PLUMB.RESIDUALS'));
+    const points = formulaCells(p.cells).find((c) => c.formula.startsWith('=PLUMB.QQPOINTS'));
+    if (table === undefined || points === undefined) throw new Error('the report has no residual table or Q–Q points');
+    // Under each table's header row, one line per data row (20 rows below the header).
+    const under = (cell: ReportCell, headers: readonly string[], header: string) => ({
+      sheet: 'Plumbline report',
+      left: cell.column + headers.indexOf(header),
+      right: cell.column + headers.indexOf(header),
+      top: cell.row + 1,
+      bottom: cell.row + 20,
+    });
+    expect(RESIDUALS_HEADER).toContain('Observed');
+    expect(observed.x).toEqual(under(table, RESIDUALS_HEADER, 'Fitted'));
+    expect(observed.y).toEqual(under(table, RESIDUALS_HEADER, 'Observed'));
+    expect(residuals.x).toEqual(under(table, RESIDUALS_HEADER, 'Fitted'));
+    expect(residuals.y).toEqual(under(table, RESIDUALS_HEADER, 'Residual'));
+    expect(cooks.x).toEqual(under(table, RESIDUALS_HEADER, 'Row'));
+    expect(cooks.y).toEqual(under(table, RESIDUALS_HEADER, "Cook's distance"));
+    expect(qq.x).toEqual(under(points, QQ_HEADER, 'Normal quantile'));
+    expect(qq.y).toEqual(under(points, QQ_HEADER, 'Studentized residual'));
+  });
+
+  it('keeps the charts clear of the tables they read', () => {
+    const p = plan({ ...choices, added: [0] });
+    const table = formulaCells(p.cells).find((c) => c.formula.startsWith('=PLUMB.RESIDUALS'));
+    const points = formulaCells(p.cells).find((c) => c.formula.startsWith('=PLUMB.QQPOINTS'));
+    // Charts cover K:R (columns 10–17); the residual table ends at J, the Q–Q points start at T.
+    expect((table?.column ?? 99) + RESIDUALS_HEADER.length - 1).toBeLessThan(10);
+    expect(points?.column).toBeGreaterThan(17);
+    for (const chart of p.charts) expect([chart.topLeft.replace(/\d+/, ''), chart.bottomRight.replace(/\d+/, '')]).toEqual(['K', 'R']);
   });
 });

@@ -31,6 +31,11 @@ const cells = {
   response: [['y'], ...y.map((v) => [v])],
   predictorColumns: [0, 1, 2].map((j) => [[['a', 'b', 'c'][j]], ...x.map((r) => [r[j]])]),
   weights: undefined,
+  sources: {
+    response: { sheet: 'Data', top: 0, bottom: n, left: 0, right: 0 },
+    predictors: [1, 2, 3].map((column) => ({ sheet: 'Data', top: 0, bottom: n, left: column, right: column })),
+    weights: undefined,
+  },
 };
 
 const close = (a: number, b: number) => expect(Math.abs(a - b)).toBeLessThanOrEqual(1e-9 * Math.max(1, Math.abs(b)));

@@ -50,4 +50,17 @@ describe('residualRows', () => {
       expect(Math.abs(residual - memory.residuals[i])).toBeLessThanOrEqual(1e-9 * memory.sigma);
     });
   });
+
+  it('names each row by its worksheet row when the data start further down the sheet', () => {
+    // The same cells with their header on sheet row 10: the blank y is on sheet row 16.
+    const lowerRef = (left: number) => ({ sheet: 'Data', top: 9, left, bottom: n + 9, right: left });
+    const lower = { response: lowerRef(0), predictors: [lowerRef(1), lowerRef(2), lowerRef(3)], weights: undefined };
+    const header = detectHeader(values, lower, n + 1);
+    const accumulator = new RegressionAccumulator(3, true);
+    for (const b of blocks(64)) accumulator.addBlock(convertBlock(b.values, lower, header, b.offset).block);
+    const analysis = analyzeStreamed({ header, accumulated: accumulator.result(), skipped: 1, skippedExamples: [] }, EMPTY_CHOICES);
+    const table = blocks(64).flatMap((b) => residualRows(convertBlock(b.values, lower, header, b.offset), analysis));
+    expect(table.slice(0, 6).map((r) => r[0])).toEqual([11, 12, 13, 14, 15, 17]);
+    expect(table[table.length - 1][0]).toBe(n + 10);
+  });
 });

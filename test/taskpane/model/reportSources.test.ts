@@ -1,0 +1,141 @@
+/**
+ * Where the live report's formulas read their data. Predictors that are not one block are brought
+ * together by PLUMB.GATHER at the data's own rows, never by plain references: in Excel a formula
+ * that refers to an empty cell yields 0 (the preview host models it; test/preview/shim), so a
+ * gathered `=Data!B4:B18` would fit every blank as 0.
+ *
+ * The check that matters is end to end in the preview host in Node, with the real PLUMB functions
+ * registered from the generated functions.json: the report over predictors in separate areas, with
+ * blank and #N/A cells, shows exactly the numbers of the report over the same cells in one block.
+ * The data are seeded random numbers; the statistics are checked against outside sources in
+ * test/engine.
+ */
+import { beforeAll, describe, expect, it } from 'vitest';
+import type { RangeRef } from '../../../src/addressing/a1';
+import { fitModel } from '../../../src/engine';
+import type { CellInput } from '../../../src/preview/workbook/types';
+import type { PreviewWorkbook } from '../../../src/preview/workbook/workbook';
+import { writeReport } from '../../../src/taskpane/excel/writeReport';
+import { analyze, type PaneAnalysis } from '../../../src/taskpane/model/analysis';
+import { EMPTY_CHOICES, type PaneChoices, resolveRanges } from '../../../src/taskpane/model/choices';
+import { planReport, type ReportPlan } from '../../../src/taskpane/model/reportPlan';
+import { joinRuns, reportSources } from '../../../src/taskpane/model/reportSources';
+import { readData } from '../../../src/taskpane/readData';
+import { NOT_AVAILABLE_CELL, plumbPreview } from '../../support/plumbPreview';
+import { randomProblem } from '../../support/random';
+
+const col = (left: number, right = left): RangeRef => ({ sheet: 'Data', top: 3, bottom: 17, left, right });
+
+describe('joinRuns', () => {
+  it('joins neighbouring columns in order and keeps separate ones apart', () => {
+    expect(joinRuns([col(1), col(2), col(4), col(3)])).toEqual([col(1, 2), col(4), col(3)]);
+    expect(joinRuns([col(1), { ...col(2), top: 4 }])).toHaveLength(2);
+  });
+});
+
+describe('reportSources', () => {
+  const ranges = (predictors: RangeRef[]) => ({ response: col(0), predictorColumns: predictors, weights: undefined, newRows: undefined });
+
+  it('reads one block of predictors where it is, with the added set split off its right end', () => {
+    const sources = reportSources('R', ranges([col(1), col(2), col(3)]), [2]);
+    expect(sources).toEqual({ y: 'Data!$A$4:$A$18', x: 'Data!$B$4:$D$18', base: 'Data!$B$4:$C$18', added: 'Data!$D$4:$D$18', newRows: undefined, gathers: [] });
+  });
+
+  it('gathers separate areas onto the report sheet at the rows they come from', () => {
+    const sources = reportSources('R', ranges([col(1), col(3)]), []);
+    expect(sources.gathers).toEqual([{ areas: [col(1), col(3)], block: { sheet: 'R', top: 3, bottom: 17, left: 24, right: 25 } }]);
+    expect(sources.x).toBe('$Y$4:$Z$18');
+  });
+});
+
+/** Sheet rows 4–18 hold the header and 14 data rows; three rows are incomplete. */
+const { y, x } = randomProblem(47, 14, 2);
+const BLANK_Y = 1; // sheet row 6
+const BLANK_A = 5; // sheet row 10
+const MISSING_B = 9; // sheet row 14, #N/A
+const cell = (i: number, j: number): CellInput => {
+  if (j === 0) return i === BLANK_Y ? null : y[i];
+  if (j === 1) return i === BLANK_A ? null : x[i][0];
+  return i === MISSING_B ? NOT_AVAILABLE_CELL : x[i][1];
+};
+
+describe('the live report in the preview host', () => {
+  let model: PreviewWorkbook;
+  const reports: Record<string, { sheet: string; plan: ReportPlan; analysis: PaneAnalysis }> = {};
+
+  async function report(name: string, choices: PaneChoices): Promise<void> {
+    const { ranges } = resolveRanges(choices);
+    if (ranges === undefined) throw new Error('bad test ranges');
+    const read = await readData(ranges, () => undefined, new AbortController().signal, false);
+    if (read.kind !== 'cells') throw new Error('expected the in-memory read');
+    const analysis = analyze(read.data, choices);
+    let planned: ReportPlan | undefined;
+    const sheet = await writeReport((sheetName) => {
+      planned = planReport({ sheetName, ranges, choices, analysis, writtenAt: new Date('2026-12-03T10:00:00Z') });
+      return planned;
+    });
+    if (planned === undefined) throw new Error('no plan');
+    reports[name] = { sheet, plan: planned, analysis };
+  }
+
+  /** The grid a PLUMB formula of a report fills, read from its anchor cell. */
+  function result(name: string, fn: string, rows: number, columns: number): unknown[][] {
+    const { sheet, plan } = reports[name];
+    const anchor = plan.cells.find((c) => c.kind === 'formula' && c.formula.startsWith(`=PLUMB.${fn}(`));
+    if (anchor === undefined) throw new Error(`${name} has no ${fn}`);
+    return Array.from({ length: rows }, (_, i) => Array.from({ length: columns }, (_, j) => model.valueAt({ sheet, row: anchor.row + i, column: anchor.column + j })));
+  }
+
+  beforeAll(async () => {
+    model = await plumbPreview('Batch log');
+    model.addSheet('Block');
+    // 'Batch log': y in A, a in B, notes in C, b in D (predictors in two areas). 'Block': the same y, a, b in A:C.
+    const header = [['Yield', 'Temp', 'note', 'Time']];
+    const rows = y.map((_, i) => [cell(i, 0), cell(i, 1), `batch ${i + 1}`, cell(i, 2)]);
+    model.setInputs('Batch log', 3, 0, [...header, ...rows]);
+    model.setInputs('Block', 3, 0, [...header, ...rows].map((r) => [r[0], r[1], r[3]]));
+    await report('areas', { ...EMPTY_CHOICES, response: "'Batch log'!A4:A18", predictors: "'Batch log'!B4:B18,'Batch log'!D4:D18" });
+    await report('block', { ...EMPTY_CHOICES, response: 'Block!A4:A18', predictors: 'Block!B4:C18' });
+  }, 60_000);
+
+  it('has the pane skip and count the blank and #N/A rows as it reads them, by worksheet row', () => {
+    expect(reports.areas.analysis.frame.skipped).toEqual([
+      { row: 6, reason: 'blank in Yield' },
+      { row: 10, reason: 'blank in Temp' },
+      { row: 14, reason: '#N/A in Time' },
+    ]);
+    expect(reports.block.analysis.frame.skipped).toEqual(reports.areas.analysis.frame.skipped);
+  });
+
+  it('gathers the two areas with PLUMB.GATHER and no plain reference to the data', () => {
+    const formulas = reports.areas.plan.cells.flatMap((c) => (c.kind === 'formula' ? [c.formula] : []));
+    expect(formulas).toContain("=PLUMB.GATHER('Batch log'!$B$4:$B$18, 'Batch log'!$D$4:$D$18)");
+    expect(formulas.every((f) => f.startsWith('=PLUMB.'))).toBe(true);
+  });
+
+  it('gives exactly the term table and fit statistics of the same data in one block', () => {
+    const terms = result('areas', 'TERMS', 4, 8);
+    expect(terms).toEqual(result('block', 'TERMS', 4, 8));
+    expect(result('areas', 'FITSTATS', 13, 2)).toEqual(result('block', 'FITSTATS', 13, 2));
+    expect(result('areas', 'CHECKS', 20, 6)).toEqual(result('block', 'CHECKS', 20, 6));
+    // And they are the fit of the 11 complete rows, as the engine computes it on those rows alone.
+    const complete = y.map((_, i) => i).filter((i) => ![BLANK_Y, BLANK_A, MISSING_B].includes(i));
+    const fit = fitModel({ y: complete.map((i) => y[i]), x: complete.map((i) => x[i]) });
+    expect(terms.slice(1).map((r) => r[1])).toEqual(fit.terms.map((t) => t.estimate));
+    expect(result('areas', 'FITSTATS', 2, 2)).toEqual([
+      ['Rows used', 11],
+      ['Rows skipped', 3],
+    ]);
+  });
+
+  it('numbers the residual table by worksheet row and charts observed against fitted from it', () => {
+    const table = result('areas', 'RESIDUALS', 12, 3);
+    expect(table[0]).toEqual(['Row', 'Observed', 'Fitted']);
+    expect(table.slice(1).map((r) => r[0])).toEqual([5, 7, 8, 9, 11, 12, 13, 15, 16, 17, 18]);
+    expect(table.slice(1).map((r) => r[1])).toEqual([0, 2, 3, 4, 6, 7, 8, 10, 11, 12, 13].map((i) => y[i]));
+    expect(table).toEqual(result('block', 'RESIDUALS', 12, 3));
+    const observed = model.charts(reports.areas.sheet).find((c) => c.name === 'ObservedVsFitted');
+    expect(observed?.series).toHaveLength(1);
+    expect(observed?.series[0].y?.sheet).toBe(reports.areas.sheet);
+  });
+});
