@@ -87,7 +87,9 @@ module.exports = (env = {}, argv = {}) => {
       runtimeChunk: "single",
       splitChunks: {
         cacheGroups: {
-          engine: { test: /[\\/]src[\\/]engine[\\/]|[\\/]node_modules[\\/]@stdlib[\\/]/, name: "engine", chunks: "all", enforce: true },
+          // @stdlib's gammaincinv pulls in `debug` (and its `ms`): they belong with the engine,
+          // not once in each of functions.js and taskpane.js.
+          engine: { test: /[\\/]src[\\/]engine[\\/]|[\\/]node_modules[\\/](@stdlib|debug|ms)[\\/]/, name: "engine", chunks: "all", enforce: true },
         },
       },
     },

@@ -7,16 +7,10 @@
  * own tests are in test/preview/. Data are invented (no source); the cells with errors come from a
  * registered stand-in that throws the error, as the preview has no error constants.
  */
-import { resolve } from 'node:path';
-import { generateCustomFunctionsMetadata } from 'custom-functions-metadata';
 import { beforeAll, describe, expect, it } from 'vitest';
-import { allowErrorsAsInput } from '../../scripts/build/functionsMetadata';
-import * as cellFunctions from '../../src/functions/functions';
-import { installOfficeShim } from '../../src/preview/shim/install';
 import type { CellInput, CellValue } from '../../src/preview/workbook/types';
-import { createWorkbook, type PreviewWorkbook } from '../../src/preview/workbook/workbook';
-
-const ERROR_STAND_IN = 'TEST_ERROR';
+import type { PreviewWorkbook } from '../../src/preview/workbook/workbook';
+import { errorCell, plumbPreview } from '../support/plumbPreview';
 
 // Data!B5:F13: header on sheet row 5; C and E are the predictors, D and F are other columns.
 // Row 8 has #N/A in y, row 10 a blank in E, row 12 a blank in C.
@@ -24,7 +18,7 @@ const DATA: CellInput[][] = [
   ['Yield', 'Steep', 'Note', 'Temp', 'Batch'],
   [10.1, 12, 'a', 90, 1],
   [11.3, 14, 'b', 91, 2],
-  ['=PLUMB.TEST_ERROR("#N/A")', 16, 'c', 90, 3],
+  [errorCell('#N/A'), 16, 'c', 90, 3],
   [12.9, 18, 'd', 93, 4],
   [14.4, 20, 'e', null, 5],
   [15.1, 22, 'f', 95, 6],
@@ -35,17 +29,7 @@ const DATA: CellInput[][] = [
 let model: PreviewWorkbook;
 
 beforeAll(async () => {
-  const generated = await generateCustomFunctionsMetadata(resolve(__dirname, '../../src/functions/functions.ts'));
-  expect(generated.errors).toEqual([]);
-  model = createWorkbook('Data');
-  installOfficeShim(model);
-  model.loadFunctionMetadata(JSON.parse(allowErrorsAsInput(generated.metadataJson)));
-  const exported = cellFunctions as Record<string, unknown>;
-  for (const { id, functionName } of generated.associate) CustomFunctions.associate(id, exported[functionName] as (...args: unknown[]) => unknown);
-  model.registerFunction(ERROR_STAND_IN, (code: unknown) => {
-    const byCode: Record<string, CustomFunctions.ErrorCode> = { '#N/A': CustomFunctions.ErrorCode.notAvailable, '#DIV/0!': CustomFunctions.ErrorCode.divisionByZero };
-    throw new CustomFunctions.Error(byCode[String(code)]);
-  });
+  model = await plumbPreview('Data');
   model.setInputs('Data', 4, 1, DATA);
   model.addSheet('Work');
 });
@@ -73,7 +57,7 @@ describe('the cell functions in the preview host', () => {
   });
 
   it('give #VALUE! naming a #DIV/0! cell by its worksheet address', () => {
-    model.setInputs('Data', 9, 2, [['=PLUMB.TEST_ERROR("#DIV/0!")']]);
+    model.setInputs('Data', 9, 2, [[errorCell('#DIV/0!')]]);
     model.setInputs('Work', 0, 0, [['=PLUMB.TERMS(Data!B5:B13, Data!C5:C13)']]);
     expect(valueAt('Work', 0, 0)).toEqual({
       error: '#VALUE!',

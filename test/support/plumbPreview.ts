@@ -12,12 +12,19 @@ import * as cellFunctions from '../../src/functions/functions';
 import { installOfficeShim } from '../../src/preview/shim/install';
 import { createWorkbook, type PreviewWorkbook } from '../../src/preview/workbook/workbook';
 
+/** The error codes a test can place in a cell through the stand-in below, by ErrorCode member. */
+const STAND_IN_CODES = { '#N/A': 'notAvailable', '#DIV/0!': 'divisionByZero' } as const;
+
 /**
- * The preview's formulas have no error constants; `=PLUMB.TEST_NOT_AVAILABLE()` stands in for a
- * cell holding #N/A ("Handle and return errors from your custom function": a thrown
- * CustomFunctions.Error with code #N/A shows #N/A in its cell).
+ * The preview's formulas have no error constants; `=PLUMB.TEST_ERROR("#N/A")` stands in for a
+ * cell holding that error ("Handle and return errors from your custom function": a thrown
+ * CustomFunctions.Error with a code shows that error in its cell).
  */
-export const NOT_AVAILABLE_CELL = '=PLUMB.TEST_NOT_AVAILABLE()';
+export function errorCell(code: keyof typeof STAND_IN_CODES): string {
+  return `=PLUMB.TEST_ERROR("${code}")`;
+}
+
+export const NOT_AVAILABLE_CELL = errorCell('#N/A');
 
 export async function plumbPreview(firstSheet: string): Promise<PreviewWorkbook> {
   const generated = await generateCustomFunctionsMetadata(resolve(__dirname, '../../src/functions/functions.ts'));
@@ -27,8 +34,10 @@ export async function plumbPreview(firstSheet: string): Promise<PreviewWorkbook>
   model.loadFunctionMetadata(JSON.parse(allowErrorsAsInput(generated.metadataJson)));
   const exported = cellFunctions as Record<string, unknown>;
   for (const { id, functionName } of generated.associate) CustomFunctions.associate(id, exported[functionName] as (...args: unknown[]) => unknown);
-  model.registerFunction('TEST_NOT_AVAILABLE', () => {
-    throw new CustomFunctions.Error(CustomFunctions.ErrorCode.notAvailable);
+  model.registerFunction('TEST_ERROR', (code: unknown) => {
+    const member = STAND_IN_CODES[String(code) as keyof typeof STAND_IN_CODES];
+    if (member === undefined) throw new Error(`TEST_ERROR has no stand-in for ${String(code)}.`);
+    throw new CustomFunctions.Error(CustomFunctions.ErrorCode[member]);
   });
   return model;
 }

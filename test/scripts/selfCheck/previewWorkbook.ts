@@ -1,38 +1,19 @@
 /**
  * The self-check workbook loaded into the preview host, with the real PLUMB functions registered
- * as the build registers them: functions.json generated from src/functions/functions.ts by
- * custom-functions-metadata and post-processed as the build does (scripts/build), and one
- * CustomFunctions.associate per function the generator lists.
+ * as the build registers them (test/support/plumbPreview.ts).
  */
-import { resolve } from 'node:path';
-import { generateCustomFunctionsMetadata } from 'custom-functions-metadata';
-import { allowErrorsAsInput } from '../../../scripts/build/functionsMetadata';
-import * as cellFunctions from '../../../src/functions/functions';
-import { installOfficeShim } from '../../../src/preview/shim/install';
 import type { CellInput } from '../../../src/preview/workbook/types';
-import { createWorkbook, type PreviewWorkbook } from '../../../src/preview/workbook/workbook';
+import type { PreviewWorkbook } from '../../../src/preview/workbook/workbook';
 import { columnIndex } from '../../../src/addressing/a1';
+import { NOT_AVAILABLE_CELL, plumbPreview } from '../../support/plumbPreview';
 import type { FileCell, FileSheet } from './xlsxCells';
-
-/**
- * The preview's formulas have no error constants, so a cell that holds the error value #N/A in
- * the file becomes a call to this stand-in, which shows #N/A in its cell as Excel shows the
- * constant ("Handle and return errors from your custom function": a thrown
- * CustomFunctions.Error with code #N/A shows #N/A).
- */
-const NOT_AVAILABLE_STAND_IN = 'SELFCHECK_NOT_AVAILABLE';
-
-async function plumbFunctionsMetadata(): Promise<{ metadata: unknown; associate: { id: string; functionName: string }[] }> {
-  const generated = await generateCustomFunctionsMetadata(resolve(__dirname, '../../../src/functions/functions.ts'));
-  if (generated.errors.length > 0) throw new Error(generated.errors.join('\n'));
-  return { metadata: JSON.parse(allowErrorsAsInput(generated.metadataJson)), associate: generated.associate };
-}
 
 function previewInput(cell: FileCell): CellInput {
   if ('value' in cell) return cell.value;
   if ('error' in cell) {
     if (cell.error !== '#N/A') throw new Error(`The self-check holds only #N/A errors, not ${cell.error}.`);
-    return `=PLUMB.${NOT_AVAILABLE_STAND_IN}()`;
+    // The preview's formulas have no error constants: a stand-in shows #N/A as the file's value does.
+    return NOT_AVAILABLE_CELL;
   }
   return `=${cell.formula}`;
 }
@@ -51,15 +32,7 @@ function grid(sheet: FileSheet): CellInput[][] {
 }
 
 export async function loadIntoPreview(sheets: FileSheet[]): Promise<PreviewWorkbook> {
-  const { metadata, associate } = await plumbFunctionsMetadata();
-  const model = createWorkbook(sheets[0].name);
-  installOfficeShim(model);
-  model.loadFunctionMetadata(metadata);
-  const exported = cellFunctions as Record<string, unknown>;
-  for (const { id, functionName } of associate) CustomFunctions.associate(id, exported[functionName] as (...args: unknown[]) => unknown);
-  model.registerFunction(NOT_AVAILABLE_STAND_IN, () => {
-    throw new CustomFunctions.Error(CustomFunctions.ErrorCode.notAvailable);
-  });
+  const model = await plumbPreview(sheets[0].name);
   for (const sheet of sheets.slice(1)) model.addSheet(sheet.name);
   for (const sheet of sheets) model.setInputs(sheet.name, 0, 0, grid(sheet));
   return model;
