@@ -18,7 +18,7 @@ const FUNCTIONS_SOURCE = join(ROOT, "src/functions/functions.ts");
 // Every PLUMB cell function spills a grid, so each result is a matrix in functions.json.
 const EXPECTED_FUNCTIONS: ReadonlyArray<{ id: string; dimensionality: string }> = [
   "TERMS", "ESTIMATES", "STDERRORS", "INTERVALS", "COVARIANCE", "FITSTATS", "NESTEDF", "PREDICT", "RESIDUALS", "QQPOINTS",
-  "COLLINEARITY", "CHECKS", "COMPARE", "GATHER",
+  "COLLINEARITY", "CHECKS", "COMPARE", "GATHER", "EQUATION",
 ].map((id) => ({ id, dimensionality: "matrix" }));
 
 const OFFICE_JS = "https://appsforoffice.microsoft.com/lib/1/hosted/office.js";

@@ -1,7 +1,7 @@
 /**
  * The NIST StRD sheets (Longley, Norris): the file's data and every certified value that a PLUMB
  * function returns directly: each estimate and its standard deviation, the residual standard
- * deviation, R², the residual df and sum of squares, and F.
+ * deviation, R², the residual df and sum of squares, and F with its two degrees of freedom.
  */
 import { FIT_STATS_LABELS } from '../../src/cellGrids/fitStatsGrid';
 import type { Check, DatasetSheetSpec } from './datasetSheet';
@@ -39,6 +39,8 @@ export function strdSheetSpec(name: StrdSheetName, file: StrdFile): DatasetSheet
     fit('Sigma-hat', file.residualSd),
     fit('R²', file.rSquared),
     fit('F (all slopes zero)', file.regression.f),
+    fit('F numerator df', file.regression.df, true),
+    fit('F denominator df', file.residual.df, true),
   ];
   const model = `y = B0 + ${predictors.map((x, k) => `B${k + 1}·${x}`).join(' + ')}`;
   return {
@@ -46,7 +48,7 @@ export function strdSheetSpec(name: StrdSheetName, file: StrdFile): DatasetSheet
     title: `NIST StRD ${name}: ${model}`,
     notes: [
       `Data and certified values: NIST/ITL Statistical Reference Datasets (StRD), linear least squares regression, ${name}, https://www.itl.nist.gov/div898/strd/lls/data/${name}.shtml (public domain: a work of the US government). Reference: ${file.reference}`,
-      'Compared: every certified estimate and standard deviation, the residual standard deviation (Sigma-hat), R², the residual df and sum of squares (RSS), and F, as Plumbline returns them in columns O onwards.',
+      'Compared: every certified estimate and standard deviation, the residual standard deviation (Sigma-hat), R², the residual df and sum of squares (RSS), and F with its two degrees of freedom, as Plumbline returns them in columns O onwards.',
     ],
     expectedHeading: 'Certified value (NIST)',
     headers: file.columns,

@@ -4,7 +4,7 @@
  * written by toothGrowth.R (R's lm() on the complete rows); this module only lays them out.
  */
 import { readFileSync } from 'node:fs';
-import { FIT_STATS_LABELS } from '../../src/cellGrids/fitStatsGrid';
+import { FIT_STATS_LABELS, type FitStatsLabel } from '../../src/cellGrids/fitStatsGrid';
 import { RESIDUALS_HEADER } from '../../src/cellGrids/residualsGrid';
 import { TERMS_HEADER } from '../../src/cellGrids/termsGrid';
 import { type Check, type DatasetSheetSpec, worksheetRowOf } from './datasetSheet';
@@ -45,23 +45,29 @@ export interface ToothGrowthReference {
 const R_TERMS = ['(Intercept)', 'suppVC', 'dose'];
 const TERMS = ['Intercept', 'supp: VC', 'dose'];
 
-/** Which reference value each FITSTATS row is checked against. */
-const FIT_STATS_REFERENCE: Record<(typeof FIT_STATS_LABELS)[number], keyof ToothGrowthReference> = {
-  'Rows used': 'rowsUsed',
-  'Rows skipped': 'rowsSkipped',
-  Parameters: 'parameters',
-  'Residual df': 'residualDf',
-  RSS: 'rss',
-  'Sigma-hat': 'sigma',
-  'R²': 'rSquared',
-  'Adjusted R²': 'adjustedRSquared',
-  'F (all slopes zero)': 'f',
-  'p-value of F': 'fPValue',
-  'Log-likelihood': 'logLikelihood',
-  AIC: 'aic',
-  BIC: 'bic',
+/**
+ * The reference value of each FITSTATS row. R's summary.lm reports the overall F test's degrees
+ * of freedom as (parameters − 1, residual df) for a model with an intercept, so those two rows
+ * are checked against the counts R gave.
+ */
+const FIT_STATS_REFERENCE: Record<FitStatsLabel, (reference: ToothGrowthReference) => number> = {
+  'Rows used': (r) => r.rowsUsed,
+  'Rows skipped': (r) => r.rowsSkipped,
+  Parameters: (r) => r.parameters,
+  'Sigma-hat': (r) => r.sigma,
+  'Residual df': (r) => r.residualDf,
+  RSS: (r) => r.rss,
+  'R²': (r) => r.rSquared,
+  'Adjusted R²': (r) => r.adjustedRSquared,
+  'F (all slopes zero)': (r) => r.f,
+  'F numerator df': (r) => r.parameters - 1,
+  'F denominator df': (r) => r.residualDf,
+  'p-value of F': (r) => r.fPValue,
+  'Log-likelihood': (r) => r.logLikelihood,
+  AIC: (r) => r.aic,
+  BIC: (r) => r.bic,
 };
-const COUNTS = new Set<string>(['Rows used', 'Rows skipped', 'Parameters', 'Residual df']);
+const COUNTS = new Set<string>(['Rows used', 'Rows skipped', 'Parameters', 'Residual df', 'F numerator df', 'F denominator df']);
 
 export function readToothGrowthReference(path: string): ToothGrowthReference {
   const reference = JSON.parse(readFileSync(path, 'utf8')) as ToothGrowthReference;
@@ -72,8 +78,8 @@ export function readToothGrowthReference(path: string): ToothGrowthReference {
 
 function fitStatsChecks(reference: ToothGrowthReference): Check[] {
   return FIT_STATS_LABELS.map((label) => {
-    const expected = reference[FIT_STATS_REFERENCE[label]];
-    if (typeof expected !== 'number') throw new Error(`toothGrowth.json has no number for ${label}.`);
+    const expected = FIT_STATS_REFERENCE[label](reference);
+    if (!Number.isFinite(expected)) throw new Error(`toothGrowth.json has no number for ${label}.`);
     return { label, expected, block: 'FITSTATS', row: fitStatsRow(label), column: 1, count: COUNTS.has(label) };
   });
 }

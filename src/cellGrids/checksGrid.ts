@@ -8,6 +8,7 @@ export function checksGrid(checks: AssumptionChecks, frame: ModelFrame): Grid {
     ['Durbin–Watson', finiteOrBlank(dw.statistic)],
     ['DW expected d', finiteOrBlank(dw.mean)],
     ['DW p-value (ρ > 0)', finiteOrBlank(dw.pPositive)],
+    ['DW p-value (two-sided)', finiteOrBlank(dw.pTwoSided)],
     ['DW reading', dw.reading],
     ['Breusch–Pagan LM', finiteOrBlank(bp.statistic)],
     ['BP df', finiteOrBlank(bp.df)],

@@ -5,9 +5,9 @@ export const COMPARE_HEADER = ['Candidate', 'Terms', 'Residual df', 'Sigma-hat',
 
 /**
  * One row per candidate, best BIC first. Candidate is the row's number in the candidates grid and
- * Terms names the source columns of known_x it includes, so every line traces back to its choice.
+ * Terms names the source columns of predictors it includes, so every line traces back to its choice.
  */
-/** Each candidate's source columns of known_x, ascending. */
+/** Each candidate's source columns of predictors, ascending. */
 export function compareGrid(results: readonly CandidateResult[], choices: readonly { sources: number[] }[], frame: ModelFrame): Grid {
   const rows = results.map((r) => [
     r.candidate + 1,

@@ -10,6 +10,6 @@ export function nestedGrid(result: NestedComparison): Grid {
     ['Critical F', finiteOrBlank(result.fCritical)],
     ['RSS base', finiteOrBlank(result.rssBase)],
     ['RSS full', finiteOrBlank(result.rssFull)],
-    ['Reading', result.addedHelp ? 'added terms help' : 'keep the smaller model'],
+    ['Reading', result.addedHelp ? 'added terms help' : 'no evidence they add anything: the smaller model is enough'],
   ];
 }

@@ -30,7 +30,7 @@ const REASON_TEXT: Record<UndefinedReason, string> = {
 
 /**
  * One row per used data row. Row is numbered as the frame numbers it (the worksheet row when the
- * frame knows where known_y sits, else the position in the input range, a header counting as
+ * frame knows where response sits, else the position in the input range, a header counting as
  * row 1), so rows skipped for blanks leave visible gaps and every line traces back to its data.
  * Observed is that row's response, so a chart of observed against fitted needs no reference to
  * the data (which would turn a blank into 0).

@@ -15,6 +15,7 @@ export {
   type UndefinedReason,
 } from './infer/influence';
 export { EngineError, type EngineErrorCode } from './errors';
+export { judgeNoiseSd, type NoiseSdVerdict } from './noiseSd';
 export type {
   CovarianceKind,
   FitSettings,
@@ -34,8 +35,8 @@ export { codeRow, type SourceColumn } from './design/categorical';
 export { classifyCell, describeCell, type Cell, type CellGrid, type CellValue, type CellErrorValue } from './design/cells';
 export { INTERCEPT_NAME } from './fit/design';
 export { collinearity, type Collinearity, type CollinearityReason, type TermCollinearity } from './infer/collinearity';
-export { assumptionChecks, type AssumptionChecks } from './infer/assumptionChecks';
-export { COLLINEARITY_REASON_TEXT, conditionReading } from './infer/checkReadings';
+export { assumptionChecks, type AssumptionChecks, type UnusualRow } from './infer/assumptionChecks';
+export { COLLINEARITY_REASON_TEXT, conditionReading, formatP, LARGE_VIF, unusualRowsReading } from './infer/checkReadings';
 export type { DurbinWatson, DurbinWatsonReason } from './infer/durbinWatson';
 export type { BreuschPagan, BreuschPaganReason } from './infer/breuschPagan';
 export type { JarqueBera } from './infer/jarqueBera';

@@ -2,11 +2,11 @@ import { type CellGrid, cellPlace, classifyCell, describeCell, EngineError, type
 
 /**
  * The candidates grid: one row per candidate model, one 0/1 (or FALSE/TRUE) cell per source
- * column of known_x, so a categorical column is switched on or off with all its indicators.
+ * column of predictors, so a categorical column is switched on or off with all its indicators.
  * A blank is not read as 0: a half-filled grid is more likely a mistake than a choice.
  */
 export interface CandidateChoice {
-  /** Columns of known_x included, ascending. */
+  /** Columns of predictors included, ascending. */
   sources: number[];
   /** The columns of the frame's design (frame.data.x) those bring in. */
   terms: number[];
@@ -16,13 +16,13 @@ export interface CandidateChoice {
 export function readCandidates(grid: CellGrid, frame: ModelFrame, origin?: RangeOrigin): CandidateChoice[] {
   const width = frame.columns.length;
   if (grid.length === 0 || grid.every((row) => row.length === 0)) {
-    throw new EngineError('shape', `candidates is empty: give one row per candidate model, with a 1 or 0 for each of the ${width} columns of known_x.`);
+    throw new EngineError('shape', `candidates is empty: give one row per candidate model, with a 1 or 0 for each of the ${width} columns of predictors.`);
   }
   return grid.map((row, i) => {
     if (row.length !== width) {
       throw new EngineError(
         'shape',
-        `candidates has ${row.length} columns but known_x has ${width}: give one 1/0 column per column of known_x, ` +
+        `candidates has ${row.length} columns but predictors has ${width}: give one 1/0 column per column of predictors, ` +
           'in the same order (a text column counts once, whatever its number of levels).',
       );
     }
@@ -33,7 +33,7 @@ export function readCandidates(grid: CellGrid, frame: ModelFrame, origin?: Range
       throw new EngineError(
         'bad-value',
         `${cellPlace('candidates', origin, i, j, false)} ("${frame.columns[j].name}") holds ${describeCell(cell)}: ` +
-          'use 1 or TRUE to include that column of known_x, 0 or FALSE to leave it out.',
+          'use 1 or TRUE to include that column of predictors, 0 or FALSE to leave it out.',
       );
     });
     return {

@@ -3,7 +3,7 @@
  * engine's neutral cell values and settings. This is the only module that accepts `unknown`
  * cells from the host.
  */
-import { type CellGrid, type CellValue, type CovarianceKind, EngineError, type FitSettings } from '../engine';
+import { type CellGrid, type CellValue, type CovarianceKind, EngineError, type FitSettings, judgeNoiseSd, type NoiseSdVerdict } from '../engine';
 
 /** A range argument as Excel passes it: row-major, blanks as "", null or 0, errors as objects. */
 export type RangeArgument = unknown[][];
@@ -96,8 +96,9 @@ function isUnset(value: unknown): boolean {
 
 /**
  * The shared settings, in the same order at the end of every PLUMB function:
- * level, intercept, known_sigma, weights, robust. An unset level, known σ or robust (omitted,
- * blank, or 0 as a blank reference arrives in desktop Excel) means the default.
+ * level, intercept, noise_sd, weights, robust. An unset level or robust (omitted, blank, or 0
+ * as a blank reference arrives in desktop Excel) means the default; an unset noise_sd (omitted
+ * or blank) means σ is estimated, and 0 there is refused.
  */
 export function parseSettings(levelArg: unknown, interceptArg: unknown, sigmaArg: unknown, robustArg?: unknown): FitSettings {
   const level = scalar(levelArg);
@@ -105,7 +106,7 @@ export function parseSettings(levelArg: unknown, interceptArg: unknown, sigmaArg
   const sigma = scalar(sigmaArg);
   rejectErrorSetting('level', level);
   rejectErrorSetting('intercept', intercept);
-  rejectErrorSetting('known_sigma', sigma);
+  rejectErrorSetting('noise_sd', sigma);
   rejectErrorSetting('robust', scalar(robustArg));
   const settings: FitSettings = {};
   if (!isUnset(level) && level !== 0) {
@@ -119,15 +120,31 @@ export function parseSettings(levelArg: unknown, interceptArg: unknown, sigmaArg
     else if (intercept === false || intercept === 0) settings.intercept = false;
     else throw new EngineError('bad-setting', `intercept must be TRUE or FALSE; got ${shown(intercept)}.`);
   }
-  if (!isUnset(sigma) && sigma !== 0) {
-    if (typeof sigma !== 'number' || !(sigma > 0) || !Number.isFinite(sigma)) {
-      throw new EngineError('bad-setting', `known_sigma must be a positive number, or left empty to estimate σ; got ${shown(sigma)}.`);
-    }
-    settings.knownSigma = sigma;
-  }
+  const knownSigma = parseNoiseSd(sigma);
+  if (knownSigma !== undefined) settings.knownSigma = knownSigma;
   const covariance = parseRobust(scalar(robustArg));
   if (covariance !== undefined) settings.covariance = covariance;
   return settings;
+}
+
+/**
+ * noise_sd by the rule the pane applies too (engine/noiseSd.ts): empty estimates σ, and 0 is an
+ * error rather than a second way of saying "estimate".
+ */
+function parseNoiseSd(sigma: unknown): number | undefined {
+  const verdict: NoiseSdVerdict = typeof sigma === 'number' || typeof sigma === 'string' ? judgeNoiseSd(sigma) : isUnset(sigma) ? { kind: 'estimate' } : { kind: 'not-a-number' };
+  switch (verdict.kind) {
+    case 'estimate':
+      return undefined;
+    case 'known':
+      return verdict.sigma;
+    case 'zero':
+      throw new EngineError('bad-setting', 'noise_sd is 0, but a noise standard deviation must be positive: leave noise_sd empty to estimate σ from the data.');
+    case 'decimal-comma':
+      throw new EngineError('bad-setting', `noise_sd must be a number written with a point as the decimal separator, such as 0.35; got the text ${shown(sigma)}.`);
+    default:
+      throw new EngineError('bad-setting', `noise_sd must be a positive number, or left empty to estimate σ; got ${shown(sigma)}.`);
+  }
 }
 
 const COVARIANCE_NAMES = new Map<string, CovarianceKind>([

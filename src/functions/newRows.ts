@@ -6,16 +6,16 @@ export interface NewRows {
 }
 
 /**
- * new_x in the layout of known_x: the same source columns, categorical ones as level text. A
- * first row that repeats known_x's headers is taken as a header and skipped. origin: where new_x
+ * new_rows in the layout of predictors: the same source columns, categorical ones as level text. A
+ * first row that repeats predictors' headers is taken as a header and skipped. origin: where new_rows
  * sits on its worksheet, so messages name its cells by address.
  */
 export function readNewRows(grid: CellGrid, frame: ModelFrame, origin?: RangeOrigin): NewRows {
   const width = frame.columns.length;
-  if (grid.length === 0) throw new EngineError('shape', 'new_x is empty: select the rows to predict.');
+  if (grid.length === 0) throw new EngineError('shape', 'new_rows is empty: select the rows to predict.');
   grid.forEach((row, i) => {
     if (row.length !== width) {
-      throw new EngineError('shape', `new_x row ${rowNumber(origin, i)} has ${row.length} columns; known_x has ${width}. Lay new rows out like known_x.`);
+      throw new EngineError('shape', `new_rows row ${rowNumber(origin, i)} has ${row.length} columns; predictors has ${width}. Lay new rows out like predictors.`);
     }
   });
   const repeatsHeader = (row: CellGrid[number]): boolean =>
@@ -35,7 +35,7 @@ export function readNewRows(grid: CellGrid, frame: ModelFrame, origin?: RangeOri
       if (cell.kind === 'text' && column.kind === 'categorical') return cell.text;
       throw new EngineError(
         'bad-value',
-        `${cellPlace('new_x', origin, k + start, j, false)} ("${column.name}") holds ${describeCell(cell)}; ` +
+        `${cellPlace('new_rows', origin, k + start, j, false)} ("${column.name}") holds ${describeCell(cell)}; ` +
           (column.kind === 'numeric' ? 'it needs a number.' : `it needs one of the levels ${column.levels.join(', ')}.`),
       );
     });

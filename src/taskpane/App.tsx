@@ -3,12 +3,15 @@ import { freezeActiveReport } from './excel/freezeCopy';
 import { ReadCancelled } from './excel/readRowBlocks';
 import { selectedAreas } from './excel/selection';
 import { clipChoiceAddresses } from './excel/usedRows';
+import { sheetsOf, watchSheets } from './excel/watchData';
 import { writeReport } from './excel/writeReport';
 import { analyze } from './model/analysis';
 import { EMPTY_CHOICES, type FieldProblem, type PaneChoices, type ResolvedRanges, resolveRanges, singleAreaProblem } from './model/choices';
+import { noiseSdProblem } from './model/noiseSdField';
 import { planReport } from './model/reportPlan';
 import { analyzeStreamed } from './model/streamedAnalysis';
 import { type PaneData, readData } from './readData';
+import { changedReadInputs, staleMessage } from './staleness';
 import { refreshValuesReport, type SavedValuesReport, writeValuesReport } from './valuesReport';
 import { DataSummary } from './views/DataSummary';
 import { RangeField } from './views/RangeField';
@@ -23,12 +26,26 @@ function failure(error: unknown): string {
   return error instanceof Error ? error.message : String(error);
 }
 
+/** The one analysis of read data under the current choices: the cards show it and Write report writes it. */
+function analysisOf(data: PaneData, choices: PaneChoices) {
+  try {
+    return data.kind === 'cells' ? analyze(data.data, choices) : analyzeStreamed(data.data, choices);
+  } catch (error) {
+    return failure(error);
+  }
+}
+
 /** The guided pane: data, settings, comparison and prediction choices, results in words, and the report. */
 export function App() {
   useOfficeTheme();
   const [choices, setChoices] = useState<PaneChoices>(EMPTY_CHOICES);
   const [problems, setProblems] = useState<FieldProblem[]>([]);
   const [data, setData] = useState<PaneData | undefined>(undefined);
+  /** The (clipped) choices the data were read with: a later change of a range makes the results stale. */
+  const [readChoices, setReadChoices] = useState<PaneChoices | undefined>(undefined);
+  /** Set when cells on the data's sheets change after the read. */
+  const [dataChanged, setDataChanged] = useState(false);
+  const stopWatching = useRef<(() => Promise<void>) | undefined>(undefined);
   const [status, setStatus] = useState<Status>({ kind: 'idle' });
   const [reading, setReading] = useState<{ read: number; total: number } | undefined>(undefined);
   const [saved, setSaved] = useState<SavedValuesReport | undefined>(undefined);
@@ -36,14 +53,10 @@ export function App() {
 
   const update = (patch: Partial<PaneChoices>) => setChoices((c) => ({ ...c, ...patch }));
   const problemFor = (field: keyof PaneChoices) => problems.find((p) => p.field === field)?.message;
-  const analysis = useMemo(() => {
-    if (data === undefined) return undefined;
-    try {
-      return data.kind === 'cells' ? analyze(data.data, choices) : analyzeStreamed(data.data, choices);
-    } catch (error) {
-      return failure(error);
-    }
-  }, [data, choices]);
+  const analysis = useMemo(() => (data === undefined ? undefined : analysisOf(data, choices)), [data, choices]);
+  const stale = readChoices === undefined ? undefined : staleMessage(changedReadInputs(readChoices, choices), dataChanged);
+  // Checked as the user types, by the rule noise_sd follows in the cells.
+  const sigmaProblem = noiseSdProblem(choices.knownSigma);
 
   const useSelection = (field: 'response' | 'predictors' | 'weights' | 'newRows', append = false) => async () => {
     try {
@@ -87,14 +100,41 @@ export function App() {
     }
   };
 
+  /** Reads the chosen ranges; the results then describe exactly these choices. */
+  const readChosen = async ({ ranges, chosen }: { ranges: ResolvedRanges; chosen: PaneChoices }): Promise<PaneData | undefined> => {
+    let read: PaneData | undefined;
+    await withReading(async (progress, signal) => {
+      read = await readData(ranges, progress, signal);
+    });
+    if (read !== undefined) {
+      setData(read);
+      setReadChoices(chosen);
+      setDataChanged(false);
+      await watchDataSheets(ranges);
+    }
+    return read;
+  };
+
+  /** Watches the sheets just read, and no longer those of an earlier read. */
+  const watchDataSheets = async (ranges: ResolvedRanges) => {
+    try {
+      await stopWatching.current?.();
+      stopWatching.current = undefined;
+      stopWatching.current = await watchSheets(sheetsOf(ranges), () => setDataChanged(true));
+    } catch {
+      // Without change events the pane cannot flag data edits; Write report still reads the data
+      // again first, so the report and the cards agree regardless.
+      stopWatching.current = undefined;
+    }
+  };
+
   const readAndFit = async () => {
     const resolved = await resolveChosen();
     if (resolved === undefined) return;
     setData(undefined);
+    setReadChoices(undefined);
     setStatus({ kind: 'idle' });
-    await withReading(async (progress, signal) => {
-      setData(await readData(resolved.ranges, progress, signal));
-    });
+    await readChosen(resolved);
   };
 
   const report = async () => {
@@ -102,16 +142,25 @@ export function App() {
     const resolved = await resolveChosen();
     if (resolved === undefined) return;
     const { ranges, chosen } = resolved;
+    // The data are read again first, so the cards show exactly what the report writes even after
+    // a range or a data cell changed.
+    const current = await readChosen(resolved);
+    if (current === undefined) return;
+    const written = analysisOf(current, chosen);
+    if (typeof written === 'string') {
+      setStatus({ kind: 'failed', message: `No report was written: ${written}` });
+      return;
+    }
     setStatus({ kind: 'busy', what: 'Writing the report…' });
     try {
-      if ('kind' in analysis && data.kind === 'streamed') {
-        const written = await writeValuesReport(ranges, chosen, analysis, data.dataRows);
-        setSaved(written);
-        setStatus({ kind: 'done', message: `Report written to the new sheet "${written.sheetName}" as values: the data are too large for live formulas. Use Refresh after the data change.` });
+      if ('kind' in written && current.kind === 'streamed') {
+        const valuesReport = await writeValuesReport(ranges, chosen, written, current.dataRows);
+        setSaved(valuesReport);
+        setStatus({ kind: 'done', message: `Report written to the new sheet "${valuesReport.sheetName}" as values: the data are too large for live formulas. Use Refresh after the data change.` });
         return;
       }
-      if ('kind' in analysis) return;
-      const name = await writeReport((sheetName) => planReport({ sheetName, ranges, choices: chosen, analysis, writtenAt: new Date() }));
+      if ('kind' in written) return;
+      const name = await writeReport((sheetName) => planReport({ sheetName, ranges, choices: chosen, analysis: written, writtenAt: new Date() }));
       setStatus({ kind: 'done', message: `Report written to the new sheet "${name}". Its formulas stay live: edit the data or its settings cells and it recalculates.` });
     } catch (error) {
       setStatus({ kind: 'failed', message: `No report was written: ${failure(error)}` });
@@ -193,8 +242,20 @@ export function App() {
         </div>
         <div class="field">
           <label for="known-sigma">Known σ (leave empty to estimate it)</label>
-          <input id="known-sigma" type="text" inputMode="decimal" value={choices.knownSigma} onChange={(e) => update({ knownSigma: (e.currentTarget as HTMLInputElement).value })} />
-          {problemFor('knownSigma') && <p class="problem" role="alert">{problemFor('knownSigma')}</p>}
+          <input
+            id="known-sigma"
+            type="text"
+            inputMode="decimal"
+            value={choices.knownSigma}
+            aria-invalid={sigmaProblem !== undefined}
+            aria-describedby={sigmaProblem === undefined ? undefined : 'known-sigma-problem'}
+            onInput={(e) => update({ knownSigma: (e.currentTarget as HTMLInputElement).value })}
+          />
+          {sigmaProblem !== undefined && (
+            <p id="known-sigma-problem" class="problem" role="alert">
+              {sigmaProblem}
+            </p>
+          )}
         </div>
         <div class="field">
           <label for="robust">Standard errors</label>
@@ -237,6 +298,11 @@ export function App() {
 
       <section aria-labelledby="results-heading" aria-live="polite">
         <h2 id="results-heading">Results</h2>
+        {stale !== undefined && typeof analysis === 'object' && (
+          <p class="stale" role="status">
+            {stale}
+          </p>
+        )}
         {typeof analysis === 'object' ? (
           <ResultCards analysis={analysis} level={choices.level} onUseRobust={choices.robust === 'classical' ? () => update({ robust: 'HC3' }) : undefined} />
         ) : (

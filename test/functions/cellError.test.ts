@@ -34,9 +34,9 @@ describe.each([
 ])('cell errors %s', (_, install, fromRuntime) => {
   it('a failure is #VALUE! with its message', () => {
     install();
-    const error = toCellError(new EngineError('bad-value', 'known_x cell Data!C5 holds the error #DIV/0!.'));
+    const error = toCellError(new EngineError('bad-value', 'predictors cell Data!C5 holds the error #DIV/0!.'));
     expect(error.code).toBe('#VALUE!');
-    expect(error.message).toBe('known_x cell Data!C5 holds the error #DIV/0!.');
+    expect(error.message).toBe('predictors cell Data!C5 holds the error #DIV/0!.');
   });
 
   it('an error value keeps a returnable code and carries no message', () => {

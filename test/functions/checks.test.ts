@@ -14,6 +14,7 @@ const CHECK_LABELS = [
   'Durbin–Watson',
   'DW expected d',
   'DW p-value (ρ > 0)',
+  'DW p-value (two-sided)',
   'DW reading',
   'Breusch–Pagan LM',
   'BP df',
@@ -72,8 +73,13 @@ describe('PLUMB.COLLINEARITY', () => {
     const w = x.map((_, i) => 1 + (i % 3));
     const engine = engineCollinearity(x, undefined, w, { intercept: false });
     const grid = collinearity(x, null, false, null, column(undefined, w));
+    // Without an intercept both VIFs, labelled: the centered one (the standard error's inflation) first.
+    expect(grid[0]).toEqual(['Term', 'VIF (centered)', 'Tolerance', 'VIF (uncentered)']);
     expect(grid.slice(1, -1).map((r) => r[1])).toEqual(engine.terms.map((t) => t.vif));
+    expect(grid.slice(1, -1).map((r) => r[3])).toEqual(engine.terms.map((t) => t.uncenteredVif));
+    expect(grid.slice(1, -1).map((r) => r[1])).toEqual(engineCollinearity(x, undefined, w).terms.map((t) => t.vif));
     expect(grid[grid.length - 1][1]).toBe(engine.conditionNumber);
+    expectOnlyFiniteNumbersOrText(grid, 4);
     const withHeader = collinearity(columns(['a', 'b', 'c'], x), null, false, null, column('w', w));
     expect(withHeader.slice(1, -1).map((r) => r[0])).toEqual(['a', 'b', 'c']);
     expect(withHeader.slice(1, -1).map((r) => r[1])).toEqual(engine.terms.map((t) => t.vif));
@@ -98,9 +104,9 @@ describe('PLUMB.COLLINEARITY', () => {
   it('fails like every PLUMB function: #VALUE! with the message', () => {
     const empty = thrownBy(() => collinearity([]));
     expect(empty.code).toBe('#VALUE!');
-    expect(empty.message).toMatch(/known_x is empty/);
+    expect(empty.message).toMatch(/predictors is empty/);
     const mismatch = thrownBy(() => collinearity([[1], [2], [3]], null, null, null, [[1], [2]]));
-    expect(mismatch.message).toBe('known_x has 3 rows but weights has 2; select the same rows for both.');
+    expect(mismatch.message).toBe('predictors has 3 rows but weights has 2; select the same rows for both.');
   });
 });
 
@@ -112,6 +118,7 @@ describe('PLUMB.CHECKS', () => {
     const engine = assumptionChecks({ y, x });
     expect(valueOf(grid, 'Durbin–Watson')).toBe(engine.durbinWatson.statistic);
     expect(valueOf(grid, 'DW p-value (ρ > 0)')).toBe(engine.durbinWatson.pPositive);
+    expect(valueOf(grid, 'DW p-value (two-sided)')).toBe(engine.durbinWatson.pTwoSided);
     expect(valueOf(grid, 'Breusch–Pagan LM')).toBe(engine.breuschPagan.statistic);
     expect(valueOf(grid, 'BP df')).toBe(2);
     expect(valueOf(grid, 'Jarque–Bera')).toBe(engine.jarqueBera.statistic);
@@ -150,6 +157,36 @@ describe('PLUMB.CHECKS', () => {
     expect(valueOf(grid, 'Largest VIF')).toBe('');
     expect(valueOf(grid, 'for term')).toBe('a (perfectly collinear: an exact combination of the other terms)');
     expectOnlyFiniteNumbersOrText(grid, 2);
+  });
+
+  // Both p-values of d, each labelled; the reading says it uses the two-sided one, the p that
+  // tests autocorrelation of either sign (Durbin & Watson 1950 tabulate one-sided bounds, so the
+  // one-sided p is shown too).
+  it('Durbin–Watson: both p-values labelled, and the reading says which it uses', () => {
+    const { y, x } = randomProblem(85, 40, 1);
+    const grid = checks(column(undefined, y), x);
+    const oneSided = valueOf(grid, 'DW p-value (ρ > 0)') as number;
+    const twoSided = valueOf(grid, 'DW p-value (two-sided)') as number;
+    expect(twoSided).toBeCloseTo(Math.min(1, 2 * Math.min(oneSided, 1 - oneSided)), 12);
+    expect(valueOf(grid, 'DW reading')).toMatch(/read on the two-sided p [=<] /);
+  });
+
+  // One response typed far off (studentized residual far past 3, the flag of RESIDUALS): the
+  // overall reading names that row first, by worksheet row, and says it can cause the other
+  // signals (Cook & Weisberg 1982: one outlier distorts the residuals every other check reads;
+  // common practice, no source).
+  it('an obvious outlier is named first in the overall reading, by worksheet row', () => {
+    const x = Array.from({ length: 40 }, (_, i) => [1 + (i % 10)]);
+    const wobble = [0.3, -0.2, 0.1, -0.4, 0.2, 0.0, -0.1, 0.4, -0.3, 0.1];
+    const y = x.map(([v], i) => 5 + 2 * v + wobble[(i * 3) % 10]);
+    y[16] += 25;
+    // Response from row 3 of its sheet: a header at row 3, data index 16 at worksheet row 20.
+    const grid = checks(column('Yield', y), columns(['Dose'], x), null, null, null, undefined, null, {
+      parameterAddresses: ['Data!B3:B43', 'Data!C3:C43', '', '', '', '', ''],
+    });
+    const overall = String(valueOf(grid, 'Overall reading'));
+    expect(overall).toMatch(/^worth a look first: row 20 \(studentized residual \d+\.\d/);
+    expect(overall).toContain('can cause the other signals');
   });
 
   it('level moves the line between a concern and none', () => {

@@ -62,7 +62,7 @@ describe('PLUMB.COMPARE', () => {
     expect(alone.residualDf).toBe(n - 4);
   });
 
-  it('fits every candidate on the rows complete in all of known_x, even columns it leaves out', () => {
+  it('fits every candidate on the rows complete in all of predictors, even columns it leaves out', () => {
     // Row 3's Temp is blank: the Steep-only candidate must still drop that row, so its likelihood
     // is comparable with the candidates that use Temp.
     const holed = xCells.map((r, i) => (i === 3 ? [r[0], '', r[2]] : r));
@@ -84,26 +84,26 @@ describe('PLUMB.COMPARE', () => {
 describe('PLUMB.COMPARE input errors', () => {
   const cases: [string, unknown[][] | null, string][] = [
     [
-      'a grid narrower than known_x',
+      'a grid narrower than predictors',
       [[1, 0]],
-      'candidates has 2 columns but known_x has 3: give one 1/0 column per column of known_x, in the same order (a text column counts once, whatever its number of levels).',
+      'candidates has 2 columns but predictors has 3: give one 1/0 column per column of predictors, in the same order (a text column counts once, whatever its number of levels).',
     ],
-    ['an empty grid', [], 'candidates is empty: give one row per candidate model, with a 1 or 0 for each of the 3 columns of known_x.'],
-    ['an omitted grid', null, 'candidates is empty: give one row per candidate model, with a 1 or 0 for each of the 3 columns of known_x.'],
+    ['an empty grid', [], 'candidates is empty: give one row per candidate model, with a 1 or 0 for each of the 3 columns of predictors.'],
+    ['an omitted grid', null, 'candidates is empty: give one row per candidate model, with a 1 or 0 for each of the 3 columns of predictors.'],
     [
       'a 2',
       [[1, 0, 0], [1, 2, 0]],
-      'candidates row 2, column 2 ("Temp") holds 2: use 1 or TRUE to include that column of known_x, 0 or FALSE to leave it out.',
+      'candidates row 2, column 2 ("Temp") holds 2: use 1 or TRUE to include that column of predictors, 0 or FALSE to leave it out.',
     ],
     [
       'a text',
       [[1, 'yes', 0]],
-      'candidates row 1, column 2 ("Temp") holds the text "yes": use 1 or TRUE to include that column of known_x, 0 or FALSE to leave it out.',
+      'candidates row 1, column 2 ("Temp") holds the text "yes": use 1 or TRUE to include that column of predictors, 0 or FALSE to leave it out.',
     ],
     [
       'a blank',
       [[1, 0, '']],
-      'candidates row 1, column 3 ("Origin") holds a blank: use 1 or TRUE to include that column of known_x, 0 or FALSE to leave it out.',
+      'candidates row 1, column 3 ("Origin") holds a blank: use 1 or TRUE to include that column of predictors, 0 or FALSE to leave it out.',
     ],
   ];
 

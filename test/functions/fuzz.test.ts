@@ -163,7 +163,7 @@ interface Settings {
 interface FuzzCase {
   y: unknown[][];
   x: unknown[][];
-  /** Predictors for a second block (added_x) with the same rows. */
+  /** Predictors for a second block (added) with the same rows. */
   added: unknown[][];
   newX: unknown[][];
   candidates: unknown[][];

@@ -44,8 +44,8 @@ describe('PLUMB.GATHER', () => {
   });
 
   it('passes a #VALUE! or #N/A message on, and drops one that another code cannot carry', () => {
-    const grid = gather([[[{ code: '#VALUE!', message: 'known_y is empty' }], [{ code: '#DIV/0!', message: 'ignored' }]]]);
-    expect((grid[0][0] as { message?: string }).message).toBe('known_y is empty');
+    const grid = gather([[[{ code: '#VALUE!', message: 'response is empty' }], [{ code: '#DIV/0!', message: 'ignored' }]]]);
+    expect((grid[0][0] as { message?: string }).message).toBe('response is empty');
     expect((grid[1][0] as { message?: string }).message ?? '').toBe('');
   });
 

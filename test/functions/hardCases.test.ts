@@ -120,7 +120,7 @@ describe('hard cases', () => {
   it('"1,234" typed as text in a numeric cell: the number-stored-as-text message', () => {
     const x = [[12], [14], ['1,234'], [18], [20]];
     expect(thrownBy(() => terms(column([1, 2, 3, 4, 5]), x)).message).toBe(
-      'known_x row 3, column 1 ("x1") holds the text "1,234". It looks like a number stored as text: re-enter it as a number without separators.',
+      'predictors row 3, column 1 ("x1") holds the text "1,234". It looks like a number stored as text: re-enter it as a number without separators.',
     );
   });
 });

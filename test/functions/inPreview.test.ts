@@ -61,7 +61,7 @@ describe('the cell functions in the preview host', () => {
     model.setInputs('Work', 0, 0, [['=PLUMB.TERMS(Data!B5:B13, Data!C5:C13)']]);
     expect(valueAt('Work', 0, 0)).toEqual({
       error: '#VALUE!',
-      message: 'known_x cell Data!C10 ("Steep") holds the error #DIV/0!. Use a number, or leave the cell blank to skip the row.',
+      message: 'predictors cell Data!C10 ("Steep") holds the error #DIV/0!. Use a number, or leave the cell blank to skip the row.',
     });
     model.setInputs('Data', 9, 2, [[20]]);
   });

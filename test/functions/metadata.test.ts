@@ -24,21 +24,22 @@ interface FunctionMetadata {
 }
 
 const DATA_ARGUMENTS: Record<string, string[]> = {
-  TERMS: ['known_y', 'known_x'],
-  ESTIMATES: ['known_y', 'known_x'],
-  STDERRORS: ['known_y', 'known_x'],
-  INTERVALS: ['known_y', 'known_x'],
-  COVARIANCE: ['known_y', 'known_x'],
-  FITSTATS: ['known_y', 'known_x'],
-  NESTEDF: ['known_y', 'base_x', 'added_x'],
-  PREDICT: ['known_y', 'known_x', 'new_x'],
-  RESIDUALS: ['known_y', 'known_x'],
-  QQPOINTS: ['known_y', 'known_x'],
-  COLLINEARITY: ['known_x'],
-  CHECKS: ['known_y', 'known_x'],
-  COMPARE: ['known_y', 'known_x', 'candidates'],
+  TERMS: ['response', 'predictors'],
+  ESTIMATES: ['response', 'predictors'],
+  STDERRORS: ['response', 'predictors'],
+  INTERVALS: ['response', 'predictors'],
+  COVARIANCE: ['response', 'predictors'],
+  FITSTATS: ['response', 'predictors'],
+  EQUATION: ['response', 'predictors'],
+  NESTEDF: ['response', 'base', 'added'],
+  PREDICT: ['response', 'predictors', 'new_rows'],
+  RESIDUALS: ['response', 'predictors'],
+  QQPOINTS: ['response', 'predictors'],
+  COLLINEARITY: ['predictors'],
+  CHECKS: ['response', 'predictors'],
+  COMPARE: ['response', 'predictors', 'candidates'],
 };
-const SETTINGS = ['level', 'intercept', 'known_sigma', 'weights', 'robust'];
+const SETTINGS = ['level', 'intercept', 'noise_sd', 'weights', 'robust'];
 
 let functions: FunctionMetadata[];
 
@@ -49,7 +50,7 @@ beforeAll(async () => {
 });
 
 describe('generated function metadata', () => {
-  it('lists exactly the fourteen PLUMB functions', () => {
+  it('lists exactly the fifteen PLUMB functions', () => {
     expect(functions.map((f) => f.id).sort()).toEqual([...Object.keys(DATA_ARGUMENTS), 'GATHER'].sort());
   });
 
@@ -75,7 +76,7 @@ describe('generated function metadata', () => {
     expect(areas.description?.length ?? 0).toBeGreaterThan(10);
   });
 
-  it.each(Object.entries(DATA_ARGUMENTS))('%s: data ranges, then level, intercept, known_sigma, weights, robust', (id, data) => {
+  it.each(Object.entries(DATA_ARGUMENTS))('%s: data ranges, then level, intercept, noise_sd, weights, robust', (id, data) => {
     const fn = functions.find((f) => f.id === id)!;
     expect(fn.description?.length ?? 0).toBeGreaterThan(30);
     expect(fn.parameters.map((p) => p.name)).toEqual([...data, ...SETTINGS]);
@@ -90,5 +91,18 @@ describe('generated function metadata', () => {
     expect(robust.dimensionality ?? 'scalar').toBe('scalar');
     expect(weights.dimensionality).toBe('matrix');
     expect(fn.result.dimensionality).toBe('matrix');
+  });
+
+  // Our own names (issue #14): the argument names of the spreadsheet's built-in regression
+  // functions, and names built on them, appear in no parameter name and no help text.
+  it('uses none of the built-in regression functions\' argument names', () => {
+    const borrowed = ['known_y', 'known_x', 'new_x', 'base_x', 'added_x', 'known_sigma'];
+    for (const fn of functions) {
+      for (const p of fn.parameters) {
+        expect(borrowed).not.toContain(p.name);
+        for (const name of borrowed) expect(p.description ?? '').not.toContain(name);
+      }
+      for (const name of borrowed) expect(fn.description ?? '').not.toContain(name);
+    }
   });
 });

@@ -97,7 +97,7 @@ describe('PLUMB.RESIDUALS', () => {
     expectOnlyFiniteNumbersOrText(grid);
   });
 
-  it('known_sigma and weights reach the diagnostics: the standardized column scales as √w/σ', () => {
+  it('noise_sd and weights reach the diagnostics: the standardized column scales as √w/σ', () => {
     const { y, x } = randomProblem(24, 12, 1);
     const weights = column(undefined, y.map((_, i) => (i === 0 ? 4 : 1)));
     const plain = residuals(column(undefined, y), x, null, null, 2);
@@ -119,7 +119,7 @@ describe('PLUMB.RESIDUALS', () => {
     expect(grid.slice(1).map((r) => r[OBSERVED])).toEqual([3.1, 4.2, 5.5, 4.8, 6.1, 3.3]);
   });
 
-  it('without addresses (an array constant) rows keep their place in known_y', () => {
+  it('without addresses (an array constant) rows keep their place in response', () => {
     // Same page: an argument that is no reference has no address ("" or nothing).
     const y = [[3.1], [4.2], [2.9], [5.5]];
     const x = [[1], [2], [1.5], [3]];

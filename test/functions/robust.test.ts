@@ -52,7 +52,7 @@ describe('robust, the fifth setting', () => {
     expect(covariance(yCells, xCells, none, none, none, undefined, true)).not.toEqual(covariance(yCells, xCells));
   });
 
-  it('with known_sigma the robust SEs win and TERMS still says t', () => {
+  it('with noise_sd the robust SEs win and TERMS still says t', () => {
     const table = terms(yCells, xCells, none, none, 3, undefined, true);
     expect(table[0].slice(2, 4)).toEqual(['Std error (HC3)', 't']);
     expect(table.slice(1).map((r) => r[2])).toEqual(engine('HC3').terms.map((t) => t.standardError));

@@ -27,12 +27,22 @@ const { y, x } = randomProblem(71, 30, 3);
 const yCells = y.map((v) => [v]);
 
 describe('settings', () => {
-  it('omitted, null, "" and 0 all mean the default level and known σ', () => {
+  it('omitted, null and "" mean the default level and an estimated σ; 0 is the default level only', () => {
     const base = intervals(yCells, x);
     expect(intervals(yCells, x, null, null, null, OMITTED)).toEqual(base);
     expect(intervals(yCells, x, '', '', '', OMITTED)).toEqual(base);
-    expect(intervals(yCells, x, 0, true, 0)).toEqual(base);
+    expect(intervals(yCells, x, 0, true, null)).toEqual(base);
     expect(intervals(yCells, x, [[0.95]])).toEqual(base);
+  });
+
+  // The noise_sd rule shared with the pane (src/engine/noiseSd.ts): empty estimates σ; anything
+  // else must be a positive finite number with a point as decimal separator. Common practice (no source).
+  it('noise_sd refuses 0, negatives, text and a decimal comma, each saying why', () => {
+    expect(thrownBy(() => terms(yCells, x, null, null, 0)).message).toBe('noise_sd is 0, but a noise standard deviation must be positive: leave noise_sd empty to estimate σ from the data.');
+    expect(thrownBy(() => terms(yCells, x, null, null, -1)).message).toBe('noise_sd must be a positive number, or left empty to estimate σ; got -1.');
+    expect(thrownBy(() => terms(yCells, x, null, null, 'abc')).message).toBe('noise_sd must be a positive number, or left empty to estimate σ; got abc.');
+    expect(thrownBy(() => terms(yCells, x, null, null, '0,35')).message).toBe('noise_sd must be a number written with a point as the decimal separator, such as 0.35; got the text 0,35.');
+    expect(terms(yCells, x, null, null, '0.35')).toEqual(terms(yCells, x, null, null, 0.35));
   });
 
   it('level widens the intervals of TERMS, INTERVALS and PREDICT alike', () => {
@@ -55,7 +65,7 @@ describe('settings', () => {
     expect(estimates(yCells, x, null, false).map((r) => r[0])).toEqual(engine.terms.map((t) => t.estimate));
   });
 
-  it('known_sigma switches TERMS to z and fixes the standard errors at σ·√diag((XᵀX)⁻¹)', () => {
+  it('noise_sd switches TERMS to z and fixes the standard errors at σ·√diag((XᵀX)⁻¹)', () => {
     const table = terms(yCells, x, null, null, 2);
     expect(table[0][3]).toBe('z');
     const engine = fitModel({ y, x }, { knownSigma: 2 });

@@ -9,7 +9,7 @@ export interface FrameInput {
   y: CellGrid;
   /** One or more blocks of predictor columns, side by side, each with the rows of y. */
   x: readonly CellGrid[];
-  /** How each block is named in messages (default known_x). */
+  /** How each block is named in messages (default predictors). */
   xArguments?: readonly string[];
   weights?: CellGrid;
   intercept: boolean;
@@ -68,12 +68,12 @@ interface Located {
 
 export function buildModelFrame(input: FrameInput): ModelFrame {
   const rowCount = input.y.length;
-  if (rowCount === 0) throw new EngineError('no-rows', 'known_y is empty: select the column of responses.');
-  requireRectangular(input.y, 'known_y');
+  if (rowCount === 0) throw new EngineError('no-rows', 'response is empty: select the column of responses.');
+  requireRectangular(input.y, 'response');
   if (input.y[0].length !== 1) {
-    throw new EngineError('shape', `known_y has ${input.y[0].length} columns; select a single column of responses.`);
+    throw new EngineError('shape', `response has ${input.y[0].length} columns; select a single column of responses.`);
   }
-  const blockArgument = (b: number): string => input.xArguments?.[b] ?? 'known_x';
+  const blockArgument = (b: number): string => input.xArguments?.[b] ?? 'predictors';
   const origins = input.origins ?? {};
   input.x.forEach((block, b) => requireRows(block, rowCount, blockArgument(b)));
   if (input.weights !== undefined) {
@@ -106,7 +106,7 @@ export function buildModelFrame(input: FrameInput): ModelFrame {
   const numericX: (number | string)[][] = [];
   const weights: number[] = [];
   const xPlaces = xColumns.map((_, j) => located(j, names[j], categorical[j]));
-  const yPlace: Located = { argument: 'known_y', origin: origins.y, column: 0, singleColumn: true, name: responseName, categorical: false };
+  const yPlace: Located = { argument: 'response', origin: origins.y, column: 0, singleColumn: true, name: responseName, categorical: false };
   const wPlace: Located = { argument: 'weights', origin: origins.weights, column: 0, singleColumn: true, name: 'weight', categorical: false };
   for (let k = 0; k < rowCount - firstData; k++) {
     const position = k + firstData;
@@ -166,7 +166,7 @@ function headerName(cell: Cell | undefined, j: number, where: Located): string {
   if (cell.kind === 'text') return shortName(cell.text);
   throw new EngineError(
     'bad-value',
-    `known_y starts with a header but ${placeOf(where, 0)} holds ${describeCell(cell)}: ` +
+    `response starts with a header but ${placeOf(where, 0)} holds ${describeCell(cell)}: ` +
       'give every predictor column a text header, or select the ranges without headers.',
   );
 }
@@ -192,7 +192,7 @@ function requireRectangular(grid: CellGrid, argument: string): void {
 
 function requireRows(grid: CellGrid, rowCount: number, argument: string): void {
   if (grid.length !== rowCount) {
-    throw new EngineError('shape', `known_y has ${rowCount} rows but ${argument} has ${grid.length}; select the same rows for both.`);
+    throw new EngineError('shape', `response has ${rowCount} rows but ${argument} has ${grid.length}; select the same rows for both.`);
   }
   requireRectangular(grid, argument);
 }

@@ -40,9 +40,9 @@ export function worksheetAddress(origin: RangeOrigin, row: number, column: numbe
 }
 
 /**
- * How a message names one cell of an argument: "known_x cell Data!C5" when the range's origin
- * is known, else "known_x row 4, column 1" by position (the column left out for single-column
- * arguments such as known_y and weights).
+ * How a message names one cell of an argument: "predictors cell Data!C5" when the range's origin
+ * is known, else "predictors row 4, column 1" by position (the column left out for single-column
+ * arguments such as response and weights).
  */
 export function cellPlace(argument: string, origin: RangeOrigin | undefined, row: number, column: number, singleColumn: boolean): string {
   if (origin !== undefined) return `${argument} cell ${worksheetAddress(origin, row, column)}`;

@@ -1,3 +1,4 @@
+import type { UnusualRow } from './assumptionChecks';
 import type { BreuschPagan } from './breuschPagan';
 import type { CollinearityReason } from './collinearity';
 import type { DurbinWatson } from './durbinWatson';
@@ -16,10 +17,14 @@ export function formatP(p: number): string {
 
 const EXACT_FIT = 'exact fit: every residual is 0, so there is nothing to test';
 
+/**
+ * Read on the two-sided p (autocorrelation of either sign is a concern) and says so; CHECKS shows
+ * the one-sided p for ρ > 0 beside it, labelled as such.
+ */
 export function durbinWatsonReading(dw: DurbinWatson, alpha: number): string {
   if (dw.undefinedBecause === 'exact-fit') return EXACT_FIT;
   if (dw.undefinedBecause === 'fixed-by-design') return 'rows = parameters + 1: d is fixed by the design and cannot be tested';
-  const p = `two-sided ${formatP(dw.pTwoSided)}`;
+  const p = `read on the two-sided ${formatP(dw.pTwoSided)}`;
   if (dw.pTwoSided >= alpha) return `no sign of autocorrelation in row order (${p})`;
   return dw.statistic < dw.mean
     ? `neighbouring residuals move together: positive autocorrelation (${p}); standard errors are likely too small`
@@ -55,9 +60,27 @@ export function jarqueBeraReading(jb: JarqueBera, alpha: number): string {
   return `residuals depart from a normal shape (${formatP(jb.pValue)})${described}; intervals rely on normality most when rows are few`;
 }
 
+/** Rows shown by number in a reading; the rest are counted. */
+const NAMED_ROWS = 5;
+
+/** "row 12 (studentized residual 21.5, Cook's distance 3.2) stands out…", with the caution that such rows can cause the other signals. */
+export function unusualRowsReading(rows: readonly UnusualRow[]): string {
+  const named = rows.slice(0, NAMED_ROWS).map((u) => {
+    const parts = [
+      Number.isFinite(u.studentized) ? `studentized residual ${u.studentized.toFixed(1)}` : u.outlier ? 'the other rows fit it exactly' : undefined,
+      u.influential ? `Cook's distance ${u.cooksDistance.toFixed(2)}` : undefined,
+    ].filter((t): t is string => t !== undefined);
+    return `row ${u.row} (${parts.join(', ')})`;
+  });
+  const more = rows.length > NAMED_ROWS ? ` and ${rows.length - NAMED_ROWS} more` : '';
+  const one = rows.length === 1;
+  return `${named.join(', ')}${more} ${one ? 'stands' : 'stand'} out: check ${one ? 'its' : 'their'} data first, since ${one ? 'such a row' : 'such rows'} can cause the other signals`;
+}
+
 export const COLLINEARITY_REASON_TEXT: Record<CollinearityReason, string> = {
   constant: 'constant: the column does not vary',
   collinear: 'perfectly collinear: an exact combination of the other terms',
+  'spans-intercept': 'with other terms it sums to a constant, standing in for the intercept: no centered VIF',
 };
 
 /**

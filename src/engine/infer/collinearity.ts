@@ -11,12 +11,16 @@ import type { FitSettings } from '../types';
 /**
  * How far each predictor term is explained by the others, and how close the design is to singular.
  *
- * VIF_j = 1/(1 − R²_j), R²_j from regressing term j on the other terms. With an intercept in the
- * model (the default) that regression has one too and R²_j is centered, the usual definition.
- * Without one it has none and R²_j is uncentered: the VIF is then still the factor by which
- * var(β̂_j) exceeds its value for a column orthogonal to the rest of that model, and a full set of
- * category indicators (which sum to the absent intercept) is not reported as collinear. It is
- * computed as TSS_j / RSS_j, which avoids forming 1 − R²_j by subtraction, from the engine's QR:
+ * VIF_j = 1/(1 − R²_j), R²_j from regressing term j on the other terms and a constant: R²_j is
+ * centered, the usual definition, and VIF_j is the factor by which collinearity inflates var(β̂_j)
+ * over that of a term uncorrelated with the others. Every reading and warning uses this one.
+ * Without an intercept the model's own auxiliary regressions have none and give the uncentered
+ * VIF, also returned (uncenteredVif): it compares var(β̂_j) with that of a column orthogonal to the
+ * rest, mean included, so a predictor far from 0 shows a large uncentered VIF even when its
+ * standard error is that of the model with an intercept. A term that, with the others, spans the
+ * constant (a full set of category indicators, or a constant column) has no centered VIF: the
+ * model is then the model with an intercept, written differently (reason 'spans-intercept').
+ * Each VIF is computed as TSS_j / RSS_j, which avoids forming 1 − R²_j by subtraction, from the engine's QR:
  * RSS_j = 1/((XᵀX)⁻¹)_jj = 1/‖row j of R⁻¹‖², or, when the design is rank deficient, the squared
  * last diagonal of R for the columns reordered with j last. XᵀX is never formed.
  *
@@ -37,13 +41,17 @@ export interface TermCollinearity {
   /** 1/VIF: the share of the term's variation the other terms leave unexplained; 0 when VIF is ∞. */
   tolerance: number;
   undefinedBecause: CollinearityReason | undefined;
+  /** Without an intercept only: the VIF of the model's own auxiliary regressions, R²_j uncentered. */
+  uncenteredVif?: number;
 }
 
 /**
  * - constant: the column does not vary (with an intercept), or is all zero (without one).
  * - collinear: the column is an exact linear combination of the other terms (and the intercept).
+ * - spans-intercept: without an intercept, the column and other terms sum to a constant, so no
+ *   centered VIF exists (vif and tolerance NaN); the model is the one with an intercept.
  */
-export type CollinearityReason = 'constant' | 'collinear';
+export type CollinearityReason = 'constant' | 'collinear' | 'spans-intercept';
 
 export interface Collinearity {
   terms: TermCollinearity[];
@@ -57,6 +65,23 @@ export interface Collinearity {
 export function collinearity(x: number[][], names?: string[], weights?: number[], settings?: FitSettings): Collinearity {
   const { intercept } = resolveSettings(settings);
   if (x.length === 0) throw new EngineError('no-rows', 'There are no rows of predictors to examine.');
+  const own = termVifs(x, names, weights, intercept);
+  if (intercept) return { ...own, hasIntercept: true };
+  const centered = termVifs(x, names, weights, true).terms;
+  const terms = own.terms.map((u, j): TermCollinearity => {
+    const c = centered[j];
+    if (u.undefinedBecause !== undefined) return { ...u, uncenteredVif: u.vif };
+    // Defined without the constant, undefined with it: the constant is what it spans.
+    if (c.undefinedBecause !== undefined) {
+      return { name: u.name, vif: Number.NaN, tolerance: Number.NaN, undefinedBecause: 'spans-intercept', uncenteredVif: u.vif };
+    }
+    return { ...c, uncenteredVif: u.vif };
+  });
+  return { terms, conditionNumber: own.conditionNumber, singularValues: own.singularValues, hasIntercept: false };
+}
+
+/** The VIFs of the auxiliary regressions of the design with or without the intercept, and that design's conditioning. */
+function termVifs(x: number[][], names: string[] | undefined, weights: number[] | undefined, intercept: boolean): Omit<Collinearity, 'hasIntercept'> {
   const design = buildDesign(new Array<number>(x.length).fill(0), x, intercept, names, weights);
   const n = design.matrix.rows;
   const q = design.matrix.cols;
@@ -92,7 +117,7 @@ export function collinearity(x: number[][], names?: string[], weights?: number[]
     const vif = Math.max(1, total / rss);
     return { name, vif, tolerance: 1 / vif, undefinedBecause: undefined };
   });
-  return { terms, conditionNumber, singularValues: values, hasIntercept: intercept };
+  return { terms, conditionNumber, singularValues: values };
 }
 
 function undefinedTerm(name: string, reason: CollinearityReason): TermCollinearity {

@@ -28,9 +28,9 @@ export function loadDemo(wb: PreviewWorkbook): void {
   wb.setInputs('Model', 11, 0, [[`=PLUMB.FITSTATS(${y}, ${x})`]]);
   wb.setInputs('Model', 10, 3, [['Does bean age add anything?']]);
   wb.setInputs('Model', 11, 3, [[`=PLUMB.NESTEDF(${y}, ${base}, ${added})`]]);
-  wb.setInputs('Model', 25, 0, [['What to expect for the planned batches']]);
-  wb.setInputs('Model', 26, 0, [[`=PLUMB.PREDICT(${y}, ${x}, ${newX})`]]);
-  wb.setInputs('Model', 33, 0, [
+  wb.setInputs('Model', 27, 0, [['What to expect for the planned batches']]);
+  wb.setInputs('Model', 28, 0, [[`=PLUMB.PREDICT(${y}, ${x}, ${newX})`]]);
+  wb.setInputs('Model', 35, 0, [
     ['Cautions: these are associations in logged data, not proof of cause; predictions far outside the logged ranges are extrapolations; check the residuals before relying on the intervals.'],
   ]);
   // t to two decimals and CV % to one; estimates and p-values keep their significant digits.

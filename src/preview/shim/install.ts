@@ -33,7 +33,7 @@
  *   getRange(A1, A1:B2 or whole columns B:D, $ allowed, sheet-qualified), getCell,
  *   getUsedRange(valuesOnly?) and getUsedRangeOrNullObject(valuesOnly?) (the smallest range
  *   around cells with values, or also formats and styles without valuesOnly), activate, delete,
- *   charts.
+ *   charts, onChanged.add(handler) → EventHandlerResult.remove() (worksheetChangedEvent.ts).
  * - Range: address and addressLocal (sheet names quoted as Excel writes them, whole columns as
  *   "Sheet1!B:B"), values,
  *   formulas, numberFormat (read and write, 2-D arrays of the range's shape; null leaves a cell
@@ -80,7 +80,7 @@
  * - The five-million-cell read limit on its own (reads that large exceed 5 MB anyway).
  * - Whole-sheet ranges (getRange() with no address), whole rows ("1:1"), RangeAreas methods
  *   and format, Worksheet.getRanges,
- *   named items, tables, events (onChanged, onSelectionChanged), protection, calculation
+ *   named items, tables, events other than Worksheet.onChanged (worksheetChangedEvent.ts), protection, calculation
  *   control, context.trackedObjects, Office.context.document, Office.addin, Office.actions,
  *   Office.initialize, worksheet ids, and writing a single scalar to a multi-cell range.
  * - Range.text follows General and plain numeric formats only, and ignores column width.

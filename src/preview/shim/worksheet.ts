@@ -6,6 +6,7 @@ import { invalidArgument, invalidOperation, itemAlreadyExists } from './officeEr
 import { rangeTarget, ShimRange, type RangeTarget } from './range';
 import type { SheetHandle, ShimRequestContext } from './requestContext';
 import { isValidSheetName } from './sheetNames';
+import { ShimWorksheetChangedEvent } from './worksheetChangedEvent';
 
 const WORKSHEET_SCALARS = ['name', 'position', 'visibility'] as const;
 
@@ -13,6 +14,7 @@ export class ShimWorksheet extends ShimClientObject<SheetHandle> {
   protected readonly typeName = 'Worksheet';
   protected readonly scalarNames: readonly string[] = WORKSHEET_SCALARS;
   private chartsProxy: ShimChartCollection | undefined;
+  private changedEvent: ShimWorksheetChangedEvent | undefined;
 
   /** `location` undefined: the handle is already known (collection items), nothing to queue. */
   constructor(
@@ -37,6 +39,16 @@ export class ShimWorksheet extends ShimClientObject<SheetHandle> {
   get charts(): ShimChartCollection {
     this.chartsProxy ??= new ShimChartCollection(this.context, () => this.target('Worksheet.charts'));
     return this.chartsProxy;
+  }
+
+  /** Registering a handler needs no load; see worksheetChangedEvent.ts for what is raised. */
+  get onChanged(): ShimWorksheetChangedEvent {
+    this.changedEvent ??= new ShimWorksheetChangedEvent(this.context, (location) => {
+      const handle = this.target(location);
+      this.context.liveSheet(handle, location);
+      return handle;
+    });
+    return this.changedEvent;
   }
 
   protected readScalar(name: string, handle: SheetHandle): unknown {

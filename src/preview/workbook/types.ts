@@ -132,4 +132,7 @@ export interface WorkbookModel {
 
   /** Called after every change (edit, recalculation, formatting, charts, sheet added/removed, selection). */
   subscribe(listener: () => void): () => void;
+
+  /** Called after cells are entered or cleared (by the user or through the API, never by recalculation), with the area. */
+  onCellsEdited(listener: (edited: RangeRef) => void): () => void;
 }

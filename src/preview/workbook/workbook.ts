@@ -70,6 +70,7 @@ export class PreviewWorkbook implements WorkbookModel {
   private readonly shapes = new Map<string, FunctionShape>();
   private behaviour: CalculationBehaviour = CURRENT_EXCEL;
   private readonly listeners = new Set<() => void>();
+  private readonly editListeners = new Set<(edited: RangeRef) => void>();
   private chartsAdded = 0;
 
   constructor(firstSheet = 'Sheet1') {
@@ -168,6 +169,7 @@ export class PreviewWorkbook implements WorkbookModel {
     this.formulasSpillingInto(changed).forEach((f) => dirty.add(f));
     this.recalculate(dirty);
     this.notify();
+    for (const listener of this.editListeners) listener(changed);
   }
 
   numberFormatAt(p: CellPosition): string {
@@ -331,6 +333,11 @@ export class PreviewWorkbook implements WorkbookModel {
     this.behaviour = { ...this.behaviour, ...change };
     this.recalculate(new Set(this.everyFormula()));
     this.notify();
+  }
+
+  onCellsEdited(listener: (edited: RangeRef) => void): () => void {
+    this.editListeners.add(listener);
+    return () => this.editListeners.delete(listener);
   }
 
   subscribe(listener: () => void): () => void {

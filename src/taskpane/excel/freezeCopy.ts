@@ -1,23 +1,38 @@
 import { formatRange, type RangeRef } from '../../addressing/a1';
-import { REPORT_TITLE_PREFIX } from '../model/reportPlan';
+import { LIVE_NOTE, LIVE_QQ_LABEL, LIVE_SETTINGS_HEADING, REPORT_TITLE_PREFIX } from '../model/reportPlan';
 import { inPieces } from './inPieces';
 import { longRun } from './longRun';
 import { jsonBytes } from './payload';
 import { readRowBlocks } from './readRowBlocks';
 import { uniqueSheetName } from './uniqueSheetName';
 
-/** The copy starts below its two-line stamp and an empty row. */
-const COPY_TOP = 3;
+/** The copy's title, in A1 as the report's: what the copy is, of which report, as of when. */
+export function frozenTitle(title: string, reportName: string, asOf: string): string {
+  return `${title}: frozen copy of "${reportName}", values as of ${asOf} UTC`;
+}
+
+/** What the copy says where the live report speaks of itself: no line promises formulas or cells that recalculate. */
+export function frozenText(text: string, asOf: string): string {
+  if (text === LIVE_SETTINGS_HEADING) return `Settings used (as of ${asOf} UTC; editing them here changes nothing)`;
+  if (text === LIVE_QQ_LABEL) return 'Normal Q–Q points';
+  if (text.endsWith(LIVE_NOTE)) return `${text.slice(0, -LIVE_NOTE.length)}Every number below is a value as of ${asOf} UTC, not a formula: nothing here recalculates.`;
+  return text;
+}
+
+/** Bold read and written in pieces of this many cells: each cell's answer is a few bytes. */
+const BOLD_CELL_BYTES = 200;
 
 /**
  * Writes a values-only copy of the active report sheet for colleagues without the add-in (in
- * whose Excel the PLUMB formulas would show #NAME?). Every string is written under the text
- * format, so nothing copied can turn into a formula; the stamp says what it is and when. A values
- * report with its residual table can fill a million rows, so the report is read and the copy
- * written block by block, each request sized by payload; if any step fails the copy is removed.
+ * whose Excel the PLUMB formulas would show #NAME?), cell for cell at the report's own places,
+ * with its number formats and its bold headings. Every string is written under the text format,
+ * so nothing copied can turn into a formula, and the report's statements about itself are
+ * rewritten for a copy (frozenText). A values report with its residual table can fill a million
+ * rows, so the report is read and the copy written block by block, each request sized by payload;
+ * if any step fails the copy is removed.
  */
 export async function freezeActiveReport(now: Date): Promise<string> {
-  const { reportName, heading, used, name } = await longRun(async (context) => {
+  const { reportName, used, name } = await longRun(async (context) => {
     const report = context.workbook.worksheets.getActiveWorksheet();
     const title = report.getRange('A1');
     const usedRange = report.getUsedRange(true);
@@ -41,18 +56,26 @@ export async function freezeActiveReport(now: Date): Promise<string> {
       bottom: usedRange.rowIndex + usedRange.rowCount - 1,
       right: usedRange.columnIndex + usedRange.columnCount - 1,
     };
-    return { reportName: report.name, heading: text, used: extent, name: copyName };
+    return { reportName: report.name, used: extent, name: copyName };
   });
+  const asOf = now.toISOString().slice(0, 16).replace('T', ' ');
+  const labelRows: number[] = [];
   try {
-    await longRun(async (context) => {
-      const copy = context.workbook.worksheets.getItem(name);
-      const stamp = copy.getRange('A1:A2');
-      stamp.numberFormat = [['@'], ['@']];
-      stamp.values = [[`Frozen copy of "${reportName}" made ${now.toISOString().slice(0, 16).replace('T', ' ')} UTC: values only, no live formulas.`], [heading]];
-      copy.getRange('A1').format.font.bold = true;
-      await context.sync();
-    });
-    await readRowBlocks([used], ({ values, numberFormats, offset }) => copyBlock(name, COPY_TOP + offset, values[0], (numberFormats ?? [])[0] ?? []), { numberFormats: true });
+    await readRowBlocks(
+      [used],
+      ({ values, numberFormats, offset }) => {
+        const top = used.top + offset;
+        // Headings are text in the report's first column; only those cells are asked for bold.
+        values[0].forEach((row, i) => {
+          if (typeof row[0] === 'string' && row[0] !== '') labelRows.push(top + i);
+        });
+        const isTitle = (i: number, j: number) => top + i === 0 && used.left + j === 0;
+        const text = values[0].map((row, i) => row.map((v, j) => (typeof v !== 'string' ? v : isTitle(i, j) ? frozenTitle(v, reportName, asOf) : frozenText(v, asOf))));
+        return copyBlock(name, top, used.left, text, (numberFormats ?? [])[0] ?? []);
+      },
+      { numberFormats: true },
+    );
+    await copyBold(reportName, name, used.left, labelRows);
     await longRun(async (context) => {
       const copy = context.workbook.worksheets.getItem(name);
       copy.getRange('A1').format.columnWidth = 170;
@@ -72,11 +95,38 @@ export async function freezeActiveReport(now: Date): Promise<string> {
 const isBlank = (value: unknown) => value === '' || value === null;
 
 /**
- * One block of the report onto the copy at sheet row `top`, strings under the text format. Only
- * the columns holding something in this block are written: the copy is a new sheet, already
- * blank, and a values report's residual table runs a million rows below a report ten columns wide.
+ * Bold, cell by cell, from the report's first-column labels to the same cells of the copy: a
+ * range's font.bold reads null over cells that differ, so each label is asked on its own.
  */
-async function copyBlock(sheetName: string, top: number, values: unknown[][], numberFormats: unknown[][]): Promise<void> {
+async function copyBold(reportName: string, copyName: string, column: number, rows: readonly number[]): Promise<void> {
+  await inPieces(
+    rows.length,
+    () => BOLD_CELL_BYTES,
+    (start, count) =>
+      longRun(async (context) => {
+        const report = context.workbook.worksheets.getItem(reportName);
+        const fonts = rows.slice(start, start + count).map((row) => {
+          const font = report.getRange(formatRange({ sheet: reportName, top: row, left: column, bottom: row, right: column }, false)).format.font;
+          font.load('bold');
+          return { row, font };
+        });
+        await context.sync();
+        const copy = context.workbook.worksheets.getItem(copyName);
+        for (const { row, font } of fonts) {
+          if (font.bold) copy.getRange(formatRange({ sheet: copyName, top: row, left: column, bottom: row, right: column }, false)).format.font.bold = true;
+        }
+        await context.sync();
+      }),
+  );
+}
+
+/**
+ * One block of the report onto the copy at sheet row `top`, its first column at `firstColumn`,
+ * strings under the text format. Only the columns holding something in this block are written:
+ * the copy is a new sheet, already blank, and a values report's residual table runs a million
+ * rows below a report ten columns wide.
+ */
+async function copyBlock(sheetName: string, top: number, firstColumn: number, values: unknown[][], numberFormats: unknown[][]): Promise<void> {
   let left = Number.POSITIVE_INFINITY;
   let right = -1;
   for (const row of values) {
@@ -96,7 +146,7 @@ async function copyBlock(sheetName: string, top: number, values: unknown[][], nu
       longRun(async (context) => {
         const target = context.workbook.worksheets
           .getItem(sheetName)
-          .getRange(formatRange({ sheet: sheetName, top: top + start, left, bottom: top + start + count - 1, right }, false));
+          .getRange(formatRange({ sheet: sheetName, top: top + start, left: firstColumn + left, bottom: top + start + count - 1, right: firstColumn + right }, false));
         target.numberFormat = formats.slice(start, start + count);
         target.values = cells.slice(start, start + count);
         await context.sync();

@@ -15,6 +15,7 @@ import {
 import type { RangeRef } from '../../addressing/a1';
 import type { BlockSources } from './blockRows';
 import type { PaneChoices } from './choices';
+import { knownSigmaOf } from './noiseSdField';
 import { dataWarnings } from './warnings';
 
 /** The cells the pane has read, one grid per chosen range, and the ranges they were read from. */
@@ -38,11 +39,10 @@ export interface PaneAnalysis {
 }
 
 export function settingsOf(choices: PaneChoices): FitSettings {
-  const sigma = Number(choices.knownSigma);
   return {
     level: choices.level,
     intercept: choices.intercept,
-    knownSigma: choices.knownSigma.trim() !== '' && sigma > 0 ? sigma : undefined,
+    knownSigma: knownSigmaOf(choices.knownSigma),
     covariance: choices.robust,
   };
 }
@@ -100,7 +100,7 @@ export function analyze(data: ReadData, choices: PaneChoices): PaneAnalysis {
   let checks: AssumptionChecks | undefined;
   if (fit !== undefined) {
     try {
-      checks = assumptionChecks(frame.data, settings);
+      checks = assumptionChecks(frame.data, settings, frame.usedRows);
     } catch {
       // The checks need what the fit needed; when they cannot run, the fit's own message stands.
       checks = undefined;

@@ -1,4 +1,4 @@
-import type { AssumptionChecks } from '../../engine';
+import { type AssumptionChecks, formatP, LARGE_VIF, unusualRowsReading } from '../../engine';
 
 export interface CheckWarning {
   text: string;
@@ -8,31 +8,36 @@ export interface CheckWarning {
 
 /** Largest Cook's distance past which one row steers the fit (Cook & Weisberg 1982). */
 const LARGE_COOKS = 1;
-/** VIF past which a term's standard error is inflated enough to say so (common practice). */
-const LARGE_VIF = 10;
 
-/** The checks that failed, in words, for the pane's result cards. */
+/**
+ * The checks that failed, in words, for the pane's result cards. Outlying and influential rows
+ * come first, named by worksheet row (the checks were given the frame's rows), since one such row
+ * can produce every other signal.
+ */
 export function checkWarnings(checks: AssumptionChecks, usedRows: readonly number[]): CheckWarning[] {
   const warnings: CheckWarning[] = [];
   const failed = (p: number) => Number.isFinite(p) && p < checks.alpha;
+  if (checks.unusualRows.length > 0) {
+    const reading = unusualRowsReading(checks.unusualRows);
+    warnings.push({ text: `${reading[0].toUpperCase()}${reading.slice(1)}.`, suggestsRobust: false });
+  }
   if (failed(checks.breuschPagan.pValue)) {
-    warnings.push({ text: `Residual spread changes with the predictors (Breusch–Pagan ${pText(checks.breuschPagan.pValue)}): consider robust standard errors.`, suggestsRobust: true });
+    warnings.push({ text: `Residual spread changes with the predictors (Breusch–Pagan ${formatP(checks.breuschPagan.pValue)}): consider robust standard errors.`, suggestsRobust: true });
   }
   if (failed(checks.durbinWatson.pTwoSided)) {
-    warnings.push({ text: `Residuals in neighbouring rows are related (Durbin–Watson d = ${checks.durbinWatson.statistic.toFixed(2)}, ${pText(checks.durbinWatson.pTwoSided)}): standard errors may be too small.`, suggestsRobust: false });
+    // The same two-sided p, in the same format, as CHECKS' "DW p-value (two-sided)" row and its reading.
+    warnings.push({ text: `Residuals in neighbouring rows are related (Durbin–Watson d = ${checks.durbinWatson.statistic.toFixed(2)}, two-sided ${formatP(checks.durbinWatson.pTwoSided)}): standard errors may be too small.`, suggestsRobust: false });
   }
   if (failed(checks.jarqueBera.pValue)) {
-    warnings.push({ text: `Residuals depart from a normal shape (Jarque–Bera ${pText(checks.jarqueBera.pValue)}): read intervals with care, most of all with few rows.`, suggestsRobust: false });
+    warnings.push({ text: `Residuals depart from a normal shape (Jarque–Bera ${formatP(checks.jarqueBera.pValue)}): read intervals with care, most of all with few rows.`, suggestsRobust: false });
   }
-  if (checks.largestCooksDistance > LARGE_COOKS && checks.largestCooksRow >= 0) {
+  // A row already named above is not named twice.
+  if (checks.largestCooksDistance > LARGE_COOKS && checks.largestCooksRow >= 0 && !checks.unusualRows.some((u) => u.index === checks.largestCooksRow)) {
     warnings.push({ text: `Row ${usedRows[checks.largestCooksRow]} steers the fit (Cook's distance ${checks.largestCooksDistance.toFixed(2)}): check that row's data.`, suggestsRobust: false });
   }
   if (checks.largestVif > LARGE_VIF) {
-    warnings.push({ text: `${checks.largestVifTerm ?? 'A term'} is largely explained by the other predictors (VIF ${Number.isFinite(checks.largestVif) ? checks.largestVif.toFixed(1) : '∞'}): its standard error is inflated.`, suggestsRobust: false });
+    // largestVif is the centered VIF, the factor by which collinearity inflates the variance.
+    warnings.push({ text: `${checks.largestVifTerm ?? 'A term'} is largely explained by the other predictors (centered VIF ${Number.isFinite(checks.largestVif) ? checks.largestVif.toFixed(1) : '∞'}): its standard error is inflated.`, suggestsRobust: false });
   }
   return warnings;
-}
-
-function pText(p: number): string {
-  return p < 0.001 ? 'p < 0.001' : `p = ${p.toPrecision(2)}`;
 }

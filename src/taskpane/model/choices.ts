@@ -1,5 +1,6 @@
 import { columnsOf, parseRange, type RangeRef, splitAreas } from '../../addressing/a1';
 import type { CovarianceKind } from '../../engine';
+import { noiseSdProblem } from './noiseSdField';
 
 /** What the user has chosen in the pane, as addresses: the pane's whole input. */
 export interface PaneChoices {
@@ -84,9 +85,8 @@ export function resolveRanges(choices: PaneChoices): { ranges?: ResolvedRanges; 
   if (newAreas.length > 0 && newAreas.reduce((n, a) => n + a.right - a.left + 1, 0) !== predictorColumns.length) {
     problems.push({ field: 'newRows', message: `New rows need ${predictorColumns.length} columns, one per predictor, in the same order.` });
   }
-  if (choices.knownSigma.trim() !== '' && !(Number(choices.knownSigma) > 0)) {
-    problems.push({ field: 'knownSigma', message: 'Known σ must be a positive number, or left empty to estimate it.' });
-  }
+  const sigmaProblem = noiseSdProblem(choices.knownSigma);
+  if (sigmaProblem !== undefined) problems.push({ field: 'knownSigma', message: sigmaProblem });
   if (!(choices.level > 0 && choices.level < 1)) problems.push({ field: 'level', message: 'The confidence level must be between 0 and 1, such as 0.95.' });
   if (problems.length > 0) return { problems };
   return { ranges: { response, predictorColumns, weights, newRows: newAreas.length > 0 ? newAreas : undefined }, problems };

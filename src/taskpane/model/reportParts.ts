@@ -2,11 +2,13 @@ import type { ReportCell } from './reportPlan';
 
 /**
  * Pieces both report kinds write alike: the settings rows (label in A, value in B) and the model
- * equation with the user's column names.
+ * equation with the user's column names. Weights are a row only where the report lists the
+ * settings it used; the live report names them with its data, since its formulas hold the range
+ * itself and no cell could switch it.
  */
 export function settingsRows(
   top: number,
-  settings: { level: number; intercept: boolean; knownSigma: number | undefined; standardErrors: { label: string; value: string }; weights: string },
+  settings: { level: number; intercept: boolean; knownSigma: number | undefined; standardErrors: { label: string; value: string }; weights?: string },
 ): ReportCell[] {
   const label = (row: number, column: number, text: string): ReportCell => ({ row, column, kind: 'label', text, bold: false });
   return [
@@ -18,8 +20,7 @@ export function settingsRows(
     { row: top + 2, column: 1, kind: 'value', value: settings.knownSigma ?? '' },
     label(top + 3, 0, settings.standardErrors.label),
     label(top + 3, 1, settings.standardErrors.value),
-    label(top + 4, 0, 'Weights'),
-    label(top + 4, 1, settings.weights),
+    ...(settings.weights === undefined ? [] : [label(top + 4, 0, 'Weights'), label(top + 4, 1, settings.weights)]),
   ];
 }
 

@@ -1,9 +1,12 @@
 import { cellAddress, columnLetters, formatAbsolute, type RangeRef } from '../../addressing/a1';
+import { FIT_STATS_LABELS, type FitStatsLabel } from '../../cellGrids/fitStatsGrid';
 import { QQ_HEADER } from '../../cellGrids/qqGrid';
 import { RESIDUALS_HEADER } from '../../cellGrids/residualsGrid';
 import type { PaneChoices, ResolvedRanges } from './choices';
 import type { PaneAnalysis } from './analysis';
-import { cautionLines, modelEquation, settingsRows } from './reportParts';
+import { decimalsFor, fixedFormat } from '../../cellGrids/decimals';
+import { fitModel } from '../../engine';
+import { cautionLines, settingsRows } from './reportParts';
 import { joinRuns, reportSources } from './reportSources';
 import { splitUnit } from './sentences';
 
@@ -40,6 +43,29 @@ export interface ReportPlan {
 export const REPORT_TITLE_PREFIX = 'Plumbline report';
 /** p-values: four decimals, and "<0.0001" rather than a row of zeros. */
 export const P_VALUE_FORMAT = '[<0.0001]"<0.0001";0.0000';
+/** The number format of each FITSTATS row, by label so that it follows the rows wherever they sit. */
+const FIT_STATS_FORMATS: Record<FitStatsLabel, string> = {
+  'Rows used': '0',
+  'Rows skipped': '0',
+  Parameters: '0',
+  'Sigma-hat': 'General',
+  'Residual df': '0',
+  RSS: 'General',
+  'R²': '0.0000',
+  'Adjusted R²': '0.0000',
+  'F (all slopes zero)': '0.00',
+  'F numerator df': '0',
+  'F denominator df': '0',
+  'p-value of F': P_VALUE_FORMAT,
+  'Log-likelihood': '0.00',
+  AIC: '0.00',
+  BIC: '0.00',
+};
+/** The live report's own statements about itself, which a frozen copy rewrites (excel/freezeCopy.ts). */
+export const LIVE_NOTE = 'Every number below is a live formula over those cells.';
+export const LIVE_SETTINGS_HEADING = 'Settings: edit these cells and every result below recalculates';
+export const LIVE_QQ_LABEL = 'Normal Q–Q points (live)';
+const EQUATION_NOTE = 'Each coefficient rounded to about three significant digits of its standard error; the Estimates in the next table carry every digit.';
 export const SETTINGS_CELLS = { level: '$B$5', intercept: '$B$6', knownSigma: '$B$7', robust: '$B$8' } as const;
 
 /** Column T: the normal Q–Q points (T:V), right of the charts. */
@@ -62,13 +88,23 @@ function qqColumn(header: string): number {
   return QQ_COLUMN + column;
 }
 
-/** Decimals that show a quantity to about three significant digits of its standard error. */
-export function decimalsFor(standardError: number): number {
-  if (!(standardError > 0) || !Number.isFinite(standardError)) return 4;
-  return Math.min(10, Math.max(2, 2 - Math.floor(Math.log10(standardError))));
+/**
+ * The decimals of the term table's estimate, standard error and interval columns, one count per
+ * column so that it suits whichever term a row shows: editing the intercept cell moves every term
+ * up or down a row. It is the most any term needs in either intercept setting, so each row shows
+ * at least three significant digits of its standard error. The other setting is fitted on the
+ * same coded columns; with a categorical column PLUMB.TERMS then codes one level more, whose
+ * standard error is on the scale of the intercept's.
+ */
+function termDecimals({ frame, fit, settings }: PaneAnalysis): number {
+  const standardErrors = (fit?.terms ?? []).map((t) => t.standardError);
+  try {
+    standardErrors.push(...fitModel(frame.data, { ...settings, intercept: !settings.intercept }).terms.map((t) => t.standardError));
+  } catch {
+    // The other setting cannot be fitted (too few rows for one more parameter): the current one decides.
+  }
+  return Math.max(2, ...standardErrors.map(decimalsFor));
 }
-
-const fixed = (decimals: number): string => (decimals <= 0 ? '0' : `0.${'0'.repeat(decimals)}`);
 
 export interface PlanInput {
   sheetName: string;
@@ -77,6 +113,16 @@ export interface PlanInput {
   analysis: PaneAnalysis;
   writtenAt: Date;
 }
+
+/**
+ * Which standard errors each section uses, said beside it: only the terms follow the robust
+ * setting; σ̂, the F tests and prediction intervals are classical whatever it says.
+ */
+export const STANDARD_ERRORS_NOTE = {
+  terms: `Standard errors: those set in ${SETTINGS_CELLS.robust.replace(/\$/g, '')} (classical or robust).`,
+  classical: `Classical standard errors, whatever ${SETTINGS_CELLS.robust.replace(/\$/g, '')} sets: robust ones change only the terms' table.`,
+  checks: 'The checks use the residuals, not the standard errors.',
+} as const;
 
 /** The whole report sheet as data: written by one adapter, checked by tests without Excel. */
 export function planReport({ sheetName, ranges, choices, analysis, writtenAt }: PlanInput): ReportPlan {
@@ -93,48 +139,51 @@ export function planReport({ sheetName, ranges, choices, analysis, writtenAt }: 
   const weights = ranges.weights === undefined ? '' : formatAbsolute(ranges.weights);
   const settings = `${SETTINGS_CELLS.level}, ${SETTINGS_CELLS.intercept}, ${SETTINGS_CELLS.knownSigma}, ${weights}, ${SETTINGS_CELLS.robust}`;
   const predictorText = joinRuns(ranges.predictorColumns).map(formatAbsolute).join(', ');
-  const specification = `${frame.responseName} from ${l.y}; predictors ${predictorText}`;
+  // The weights range is written into every formula, so it belongs with the data, not with the cells to edit.
+  const weightsText = ranges.weights === undefined ? 'no weights' : `weights ${formatAbsolute(ranges.weights)} (fixed in this report: write a new one to change them)`;
+  const specification = `${frame.responseName} from ${l.y}; predictors ${predictorText}; ${weightsText}`;
   const date = writtenAt.toISOString().slice(0, 10);
 
   label(0, 0, `${REPORT_TITLE_PREFIX}: ${frame.responseName}`, true);
-  label(1, 0, `Written ${date}. ${specification}. Every number below is a live formula over those cells.`);
-  label(3, 0, 'Settings: edit these cells and every result below recalculates', true);
+  label(1, 0, `Written ${date}. ${specification}. ${LIVE_NOTE}`);
+  label(3, 0, LIVE_SETTINGS_HEADING, true);
   cells.push(
     ...settingsRows(4, {
       level: choices.level,
       intercept: choices.intercept,
       knownSigma: analysis.settings.knownSigma,
       standardErrors: { label: 'Standard errors (classical, HC3, HC1 or HC0)', value: choices.robust },
-      weights: ranges.weights === undefined ? 'none' : formatAbsolute(ranges.weights),
     }),
   );
 
   label(10, 0, 'The model', true);
-  label(11, 0, modelEquation(frame.responseName, frame.termNames, choices.intercept));
-  label(12, 0, 'The b values are the Estimates in the next table, in the same order.');
+  // A live formula, so the equation follows the settings cells and the data as the tables do.
+  cells.push({ row: 11, column: 0, kind: 'formula', formula: `=PLUMB.EQUATION(${l.y}, ${l.x}, ${settings})` });
+  label(12, 0, EQUATION_NOTE);
 
   let row = 14;
   const termRows = frame.termNames.length;
+  // Formats reach one row past the table: the other intercept setting can show one term more.
+  const formattedRows = termRows + 1;
   label(row, 0, 'Which terms matter?', true);
-  label(row, 1, 'A term is clear of zero when its interval excludes 0; roughly, when |estimate| > 2 × std error.');
+  label(row, 1, `A term is clear of zero when its interval excludes 0; roughly, when |estimate| > 2 × std error. ${STANDARD_ERRORS_NOTE.terms}`);
   cells.push({ row: row + 1, column: 0, kind: 'formula', formula: `=PLUMB.TERMS(${l.y}, ${l.x}, ${settings})` });
-  (fit?.terms ?? []).forEach((t, i) => {
-    const decimals = fixed(decimalsFor(t.standardError));
-    for (const c of [1, 2, 5, 6]) formats.push({ range: at(row + 2 + i, c), numberFormat: decimals });
-  });
-  formats.push({ range: block(row + 2, 3, termRows, 1), numberFormat: '0.00' });
-  formats.push({ range: block(row + 2, 4, termRows, 1), numberFormat: P_VALUE_FORMAT });
-  formats.push({ range: block(row + 2, 7, termRows, 1), numberFormat: '0.0' });
+  const estimateFormat = fixedFormat(termDecimals(analysis));
+  for (const c of [1, 2, 5, 6]) formats.push({ range: block(row + 2, c, formattedRows, 1), numberFormat: estimateFormat });
+  formats.push({ range: block(row + 2, 3, formattedRows, 1), numberFormat: '0.00' });
+  formats.push({ range: block(row + 2, 4, formattedRows, 1), numberFormat: P_VALUE_FORMAT });
+  formats.push({ range: block(row + 2, 7, formattedRows, 1), numberFormat: '0.0' });
   row += termRows + 4;
 
   label(row, 0, 'How well does it fit?', true);
+  label(row, 1, STANDARD_ERRORS_NOTE.classical);
   cells.push({ row: row + 1, column: 0, kind: 'formula', formula: `=PLUMB.FITSTATS(${l.y}, ${l.x}, ${settings})` });
-  const statFormats = ['0', '0', '0', '0', 'General', 'General', '0.0000', '0.0000', '0.00', P_VALUE_FORMAT, '0.00', '0.00', '0.00'];
-  statFormats.forEach((f, i) => formats.push({ range: at(row + 1 + i, 1), numberFormat: f }));
-  row += statFormats.length + 3;
+  FIT_STATS_LABELS.forEach((name, i) => formats.push({ range: at(row + 1 + i, 1), numberFormat: FIT_STATS_FORMATS[name] }));
+  row += FIT_STATS_LABELS.length + 3;
 
   if (l.added !== undefined) {
     label(row, 0, `Does ${analysis.addedNames.join(', ')} add anything?`, true);
+    label(row, 1, STANDARD_ERRORS_NOTE.classical);
     cells.push({ row: row + 1, column: 0, kind: 'formula', formula: `=PLUMB.NESTEDF(${l.y}, ${l.base}, ${l.added}, ${settings})` });
     ['0.00', '0', '0', P_VALUE_FORMAT, '0.00', 'General', 'General'].forEach((f, i) => formats.push({ range: at(row + 1 + i, 1), numberFormat: f }));
     row += 11;
@@ -143,9 +192,9 @@ export function planReport({ sheetName, ranges, choices, analysis, writtenAt }: 
   if (ranges.newRows !== undefined && l.newRows !== undefined) {
     const newRows = ranges.newRows[0];
     label(row, 0, 'What to expect for new cases', true);
-    label(row, 1, 'Mean: where the average of many such cases should lie. New: where one new case should fall.');
+    label(row, 1, `Mean: where the average of many such cases should lie. New: where one new case should fall. ${STANDARD_ERRORS_NOTE.classical}`);
     cells.push({ row: row + 1, column: 0, kind: 'formula', formula: `=PLUMB.PREDICT(${l.y}, ${l.x}, ${l.newRows}, ${settings})` });
-    const decimals = fixed(decimalsFor(fit?.sigma ?? 1));
+    const decimals = fixedFormat(decimalsFor(fit?.sigma ?? 1));
     formats.push({ range: block(row + 1, 0, newRows.bottom - newRows.top + 2, 5), numberFormat: decimals });
     row += newRows.bottom - newRows.top + 5;
   }
@@ -155,7 +204,7 @@ export function planReport({ sheetName, ranges, choices, analysis, writtenAt }: 
   const dataRows = ranges.response.bottom - ranges.response.top + 1 - (frame.hasHeader ? 1 : 0);
 
   label(row, 0, 'Can these numbers be trusted?', true);
-  label(row, 1, 'Each check is read at 1 − level. The charts on the right show the same residuals.');
+  label(row, 1, `Each check is read at 1 − level. The charts on the right show the same residuals. ${STANDARD_ERRORS_NOTE.checks}`);
   cells.push({ row: row + 1, column: 0, kind: 'formula', formula: `=PLUMB.CHECKS(${l.y}, ${l.x}, ${settings})` });
   row += 22;
 
@@ -171,7 +220,7 @@ export function planReport({ sheetName, ranges, choices, analysis, writtenAt }: 
   const residuals = (header: string) => block(residualsTop + 1, residualsColumn(header), dataRows, 1);
 
   const qqTop = 3;
-  label(qqTop - 1, QQ_COLUMN, 'Normal Q–Q points (live)');
+  label(qqTop - 1, QQ_COLUMN, LIVE_QQ_LABEL);
   cells.push({ row: qqTop, column: QQ_COLUMN, kind: 'formula', formula: `=PLUMB.QQPOINTS(${l.y}, ${l.x}, ${settings})` });
   const qq = (header: string) => block(qqTop + 1, qqColumn(header), dataRows, 1);
 

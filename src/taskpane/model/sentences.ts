@@ -48,12 +48,13 @@ export function termSentence(term: TermEstimate, frame: SentenceFrame, level: nu
   if (category !== undefined && category.kind === 'categorical') {
     const levelName = term.name.slice(category.name.length + 2);
     const against = category.reference === undefined ? 'zero' : category.reference;
-    const direction = term.estimate >= 0 ? 'higher' : 'lower';
-    return `${category.name} ${levelName} vs ${against}: ${response.name.toLowerCase()} is ${direction} by ${responseAmount(readable(Math.abs(term.estimate)), response.unit)} (${ci}). ${verdict}`;
+    // Signed like its interval, so the size and the interval never read in opposite directions.
+    return `${category.name} ${levelName} vs ${against}: ${response.name.toLowerCase()} differs by ${responseAmount(signed(term.estimate), response.unit)}, other predictors held fixed (${ci}). ${verdict}`;
   }
   const predictor = splitUnit(term.name);
   const step = predictor.unit === undefined ? 'each extra unit' : `each extra ${unitWord(predictor.unit)}`;
-  return `${predictor.name}: ${step} changes ${response.name.toLowerCase()} by ${responseAmount(signed(term.estimate), response.unit)} (${ci}). ${verdict}`;
+  // An association within the data, not an effect of changing the predictor: say so in the sentence.
+  return `${predictor.name}: ${step} is associated with ${responseAmount(signed(term.estimate), response.unit)} of ${response.name.toLowerCase()}, other predictors held fixed (${ci}). ${verdict}`;
 }
 
 const UNIT_WORDS: Record<string, string> = { h: 'hour', min: 'minute', s: 'second', days: 'day', d: 'day' };
@@ -65,13 +66,33 @@ export function fitSentence(fit: ModelFit, frame: SentenceFrame): string {
   const response = splitUnit(frame.responseName);
   const skipped = frame.skipped.length > 0 ? ` (${frame.skipped.length.toLocaleString('en-US')} skipped)` : '';
   const sigma = `typical scatter σ̂ = ${responseAmount(readable(fit.sigma), response.unit)}`;
-  return `Fitted on ${fit.n.toLocaleString('en-US')} rows${skipped}: R² = ${readable(fit.rSquared)}, adjusted ${readable(fit.adjustedRSquared)}; ${sigma}. All slopes zero? F = ${readable(fit.fStatistic)}, ${pValueText(fit.fPValue)}.`;
+  // Without an intercept R² compares with Σy², not with the spread about the mean: label it, and
+  // never round it to a bare 1 that reads as a perfect fit.
+  const rSquared = fit.settings.intercept
+    ? `R² = ${readable(fit.rSquared)}, adjusted ${readable(fit.adjustedRSquared)}`
+    : `uncentered R² (no intercept, measured from 0) = ${fraction(fit.rSquared)}, adjusted ${fraction(fit.adjustedRSquared)}`;
+  return `Fitted on ${fit.n.toLocaleString('en-US')} rows${skipped}: ${rSquared}; ${sigma}. All slopes zero? F = ${readable(fit.fStatistic)}, ${pValueText(fit.fPValue)}${classicalNote(fit)}.`;
 }
 
-export function nestedSentence(result: NestedComparison, addedNames: readonly string[], level: number): string {
+/** A share near 1 with enough digits that it never shows as a bare 1 unless it is exactly 1. */
+function fraction(value: number): string {
+  if (!Number.isFinite(value) || value === 1 || value < 0.999) return readable(value);
+  const digits = Math.min(12, Math.ceil(-Math.log10(1 - value)) + 2);
+  return value.toFixed(digits);
+}
+
+/** Under robust standard errors the F tests stay classical; say so beside them. */
+export function classicalNote(fit: ModelFit): string {
+  return fit.covarianceKind === 'classical' ? '' : ` (classical standard errors, not ${fit.covarianceKind})`;
+}
+
+/** `fit` is the larger model's: its covariance kind says whether the note on classical standard errors is due. */
+export function nestedSentence(result: NestedComparison, addedNames: readonly string[], level: number, fit?: ModelFit): string {
   const what = addedNames.join(', ');
-  const numbers = `F = ${readable(result.f)} on ${result.dfNumerator} and ${Number.isFinite(result.dfDenominator) ? result.dfDenominator : '∞'} df, ${pValueText(result.pValue)}; critical F at ${Math.round(level * 100)}% is ${readable(result.fCritical)}`;
+  const classical = fit === undefined ? '' : classicalNote(fit);
+  const numbers = `F = ${readable(result.f)} on ${result.dfNumerator} and ${Number.isFinite(result.dfDenominator) ? result.dfDenominator : '∞'} df, ${pValueText(result.pValue)}; critical F at ${Math.round(level * 100)}% is ${readable(result.fCritical)}${classical}`;
+  // A test that does not reject shows no evidence of an effect, not that the effect is absent.
   return result.addedHelp
     ? `${what} earns its place: ${numbers}. The added terms help.`
-    : `${what} does not earn its place: ${numbers}. Keep the smaller model.`;
+    : `No evidence that ${what} adds anything: ${numbers}. The smaller model is enough.`;
 }

@@ -1,12 +1,12 @@
 import { formatAbsolute } from '../../addressing/a1';
-import { FIT_STATS_LABELS } from '../../cellGrids/fitStatsGrid';
+import { FIT_STATS_LABELS, fitStatsRows } from '../../cellGrids/fitStatsGrid';
 import type { Grid } from '../../cellGrids/gridCell';
-import { finiteOrBlank } from '../../cellGrids/gridCell';
 import { nestedGrid } from '../../cellGrids/nestedGrid';
 import { predictGrid } from '../../cellGrids/predictGrid';
 import { termsGrid } from '../../cellGrids/termsGrid';
 import type { PaneChoices, ResolvedRanges } from './choices';
-import { decimalsFor, P_VALUE_FORMAT, REPORT_TITLE_PREFIX, type ReportCell, type ReportFormat, type ReportPlan } from './reportPlan';
+import { decimalsFor, fixedFormat } from '../../cellGrids/decimals';
+import { P_VALUE_FORMAT, REPORT_TITLE_PREFIX, type ReportCell, type ReportFormat, type ReportPlan } from './reportPlan';
 import { cautionLines, modelEquation, settingsRows } from './reportParts';
 import type { StreamedAnalysis } from './streamedAnalysis';
 import type { StreamedPredictions } from './streamedPredict';
@@ -33,7 +33,6 @@ export const LEFT_OUT_NOTE =
   'The fitted value and residual of every row are in the table on the right, computed block by block. Left out for data this large: leverage and the flags, ' +
   'the checks (Durbin–Watson, Breusch–Pagan, Jarque–Bera, Cook’s distance) and the charts, which need every row in memory at once; fit a live report on a subset of the rows to see them.';
 
-const fixed = (decimals: number): string => (decimals <= 0 ? '0' : `0.${'0'.repeat(decimals)}`);
 
 /**
  * The report of a streamed fit, all as values: the same tables as the live report (built by the
@@ -76,15 +75,14 @@ export function planValuesReport({ sheetName, ranges, choices, analysis, predict
   label(row, 1, 'A term is clear of zero when its interval excludes 0; roughly, when |estimate| > 2 × std error.');
   put(row + 1, termsGrid(fit));
   fit.terms.forEach((t, i) => {
-    for (const c of [1, 2, 5, 6]) formats.push({ range: cell(row + 2 + i, c), numberFormat: fixed(decimalsFor(t.standardError)) });
+    for (const c of [1, 2, 5, 6]) formats.push({ range: cell(row + 2 + i, c), numberFormat: fixedFormat(decimalsFor(t.standardError)) });
     formats.push({ range: cell(row + 2 + i, 4), numberFormat: P_VALUE_FORMAT });
   });
   row += fit.terms.length + 4;
 
   label(row, 0, 'How well does it fit?', true);
-  const stats = [fit.n, analysis.skipped, fit.parameters, fit.residualDf, fit.rss, fit.sigma, fit.rSquared, fit.adjustedRSquared, fit.fStatistic, fit.fPValue, fit.logLikelihood, fit.aic, fit.bic];
-  put(row + 1, FIT_STATS_LABELS.map((name, i) => [name, finiteOrBlank(stats[i])]));
-  formats.push({ range: cell(row + 10, 1), numberFormat: P_VALUE_FORMAT });
+  put(row + 1, fitStatsRows(fit, analysis.skipped));
+  formats.push({ range: cell(row + 1 + FIT_STATS_LABELS.indexOf('p-value of F'), 1), numberFormat: P_VALUE_FORMAT });
   row += FIT_STATS_LABELS.length + 3;
 
   if (analysis.nested !== undefined || analysis.nestedError !== undefined) {

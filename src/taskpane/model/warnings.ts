@@ -17,6 +17,12 @@ export function dataWarnings(frame: ModelFrame, fit: ModelFit | undefined): stri
     }
   }
   if (fit !== undefined) {
+    const spanning = fit.settings.intercept ? undefined : frame.columns.find((c) => c.kind === 'categorical' && c.reference === undefined);
+    if (spanning !== undefined) {
+      warnings.push(
+        `Without an intercept, ${spanning.name} keeps one indicator per level and they sum to 1: this is the same model as with an intercept (same fitted values, same estimates and standard errors for the other predictors), written with one mean per level; only R² and F are measured from 0 instead of from the mean.`,
+      );
+    }
     if (fit.residualDf < FEW_RESIDUAL_DF) {
       warnings.push(`Only ${fit.n} rows for ${fit.rank} parameters: with ${fit.residualDf} residual degrees of freedom every interval is very wide.`);
     }

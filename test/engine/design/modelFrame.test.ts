@@ -29,7 +29,7 @@ describe('header detection', () => {
 
   it('a header over y with a number over an x column is an error that names the cell', () => {
     expect(() => buildModelFrame({ y: [['Yield'], [1], [2]], x: [[[7], [1], [2]]], intercept: true })).toThrow(
-      'known_y starts with a header but known_x row 1, column 1 holds 7',
+      'response starts with a header but predictors row 1, column 1 holds 7',
     );
   });
 });
@@ -87,7 +87,7 @@ describe('categorical coding', () => {
   it('text in a mostly numeric column is a bad value, not a category', () => {
     expect(() =>
       buildModelFrame({ y, x: [[['Temp'], [90], ['n/a'], [94], [91], [93]]], intercept: true }),
-    ).toThrow('known_x row 3, column 1 ("Temp") holds the text "n/a".');
+    ).toThrow('predictors row 3, column 1 ("Temp") holds the text "n/a".');
   });
 });
 
@@ -114,16 +114,16 @@ describe('worksheet origins (issue 13, contract C5)', () => {
 
   it('names a bad cell by its worksheet address, in each range by its own origin', () => {
     const badX = [[['a', 'b'], [10, 1], [20, 'n/a'], [30, 3], [40, 5], [50, 4]]];
-    expect(() => buildModelFrame({ y, x: badX, intercept: true, origins })).toThrow('known_x cell Data!E11 ("b") holds the text "n/a".');
+    expect(() => buildModelFrame({ y, x: badX, intercept: true, origins })).toThrow('predictors cell Data!E11 ("b") holds the text "n/a".');
     const badY = [['y'], [1], [{ errorCode: '#DIV/0!' }], [3], [5], [6]];
-    expect(() => buildModelFrame({ y: badY, x, intercept: true, origins })).toThrow('known_y cell Data!B11 ("y") holds the error #DIV/0!.');
+    expect(() => buildModelFrame({ y: badY, x, intercept: true, origins })).toThrow('response cell Data!B11 ("y") holds the error #DIV/0!.');
     const badW = [['w'], [1], [1], [1], [-2], [1]];
     expect(() => buildModelFrame({ y, x, weights: badW, intercept: true, origins })).toThrow('weights cell Data!G13 is -2; every weight must be a positive number.');
   });
 
   it('names a number over a predictor column by address when y has a header', () => {
     expect(() => buildModelFrame({ y: [['y'], [1], [2]], x: [[[7], [1], [2]]], intercept: true, origins })).toThrow(
-      'known_y starts with a header but known_x cell Data!D9 holds 7',
+      'response starts with a header but predictors cell Data!D9 holds 7',
     );
   });
 
@@ -133,8 +133,8 @@ describe('worksheet origins (issue 13, contract C5)', () => {
       [['b'], [1], [2], [true], [4], [5]],
     ];
     const named = { ...origins, x: [origins.x[0], { sheet: 'Other sheet', row: 0, column: 25 }] };
-    expect(() => buildModelFrame({ y, x: twoBlocks, intercept: true, origins: named })).toThrow(`known_x cell 'Other sheet'!Z4 ("b") holds TRUE.`);
-    expect(() => buildModelFrame({ y, x: twoBlocks, intercept: true, origins: { y: origins.y } })).toThrow('known_x row 4, column 1 ("b") holds TRUE.');
+    expect(() => buildModelFrame({ y, x: twoBlocks, intercept: true, origins: named })).toThrow(`predictors cell 'Other sheet'!Z4 ("b") holds TRUE.`);
+    expect(() => buildModelFrame({ y, x: twoBlocks, intercept: true, origins: { y: origins.y } })).toThrow('predictors row 4, column 1 ("b") holds TRUE.');
   });
 
   it('without origins rows stay 1-based positions in the range', () => {

@@ -29,8 +29,8 @@ describe('worksheetAddress', () => {
 
 describe('cellPlace and rowNumber', () => {
   it('name by address with an origin, by position without', () => {
-    expect(cellPlace('known_x', { sheet: 'Data', row: 0, column: 2 }, 4, 0, false)).toBe('known_x cell Data!C5');
-    expect(cellPlace('known_x', undefined, 4, 0, false)).toBe('known_x row 5, column 1');
+    expect(cellPlace('predictors', { sheet: 'Data', row: 0, column: 2 }, 4, 0, false)).toBe('predictors cell Data!C5');
+    expect(cellPlace('predictors', undefined, 4, 0, false)).toBe('predictors row 5, column 1');
     expect(cellPlace('weights', undefined, 4, 0, true)).toBe('weights row 5');
     expect(rowNumber({ row: 9, column: 0 }, 0)).toBe(10);
     expect(rowNumber(undefined, 0)).toBe(1);

@@ -138,14 +138,31 @@ describe('Durbin–Watson', () => {
     expect(dw.pTwoSided).toBeCloseTo(2 * Math.min(dw.pPositive, dw.pNegative), 12);
   });
 
+  // One response typed far off: its studentized residual is far past 3 (the RESIDUALS flag) and it
+  // alone makes the residuals look non-normal; the overall reading names it before any other signal
+  // (Cook & Weisberg 1982 on single-row influence; common practice, no source).
+  it('names an outlying row first, by the row number given, with the note that it can cause the other signals', () => {
+    const normal = gaussian(mulberry32(44));
+    const x = Array.from({ length: 60 }, (_, i) => [1 + (i % 12) / 2]);
+    const y = x.map(([v]) => 3 + 2 * v + 0.3 * normal());
+    y[23] += 25;
+    const rowNumbers = x.map((_, i) => i + 5);
+    const checks = assumptionChecks({ y, x }, undefined, rowNumbers);
+    expect(checks.jarqueBera.pValue).toBeLessThan(0.05);
+    expect(checks.unusualRows[0]).toMatchObject({ index: 23, row: 28, outlier: true });
+    expect(checks.unusualRows[0].studentized).toBeGreaterThan(10);
+    expect(checks.overall).toMatch(/^worth a look first: row 28 \(studentized residual \d+\.\d, Cook's distance \d\.\d\d\) stands out: check its data first, since such a row can cause the other signals; then .*non-normal residuals/);
+    expect(assumptionChecks({ y, x }).unusualRows[0].row).toBe(24);
+  });
+
   it('finds strong positive autocorrelation and reads it; independent noise reads as none', () => {
     const correlated = assumptionChecks(ar1Problem(36, 60, 2, 0.8));
     expect(correlated.durbinWatson.pPositive).toBeLessThan(0.001);
-    expect(correlated.durbinWatson.reading).toMatch(/^neighbouring residuals move together: positive autocorrelation \(two-sided p < 0\.001\)/);
+    expect(correlated.durbinWatson.reading).toMatch(/^neighbouring residuals move together: positive autocorrelation \(read on the two-sided p < 0\.001\)/);
     expect(correlated.overall).toContain('positive autocorrelation');
     const independent = assumptionChecks(ar1Problem(37, 60, 2, 0));
     expect(independent.durbinWatson.pTwoSided).toBeGreaterThan(0.05);
-    expect(independent.durbinWatson.reading).toMatch(/^no sign of autocorrelation in row order \(two-sided p = 0\.\d\d\)$/);
+    expect(independent.durbinWatson.reading).toMatch(/^no sign of autocorrelation in row order \(read on the two-sided p = 0\.\d\d\)$/);
   });
 
   it('alternating residuals read as negative autocorrelation', () => {

@@ -79,10 +79,16 @@ describe('collinearity: VIF and tolerance', () => {
     expect(Math.abs(result.terms[1].vif - unweighted.terms[1].vif)).toBeGreaterThan(1e-3);
   });
 
-  it('without an intercept the auxiliary regressions have none either, and R² is uncentered', () => {
+  // The centered VIF is the factor by which collinearity inflates var(β̂_j) (Belsley, Kuh & Welsch
+  // 1980, from memory); the uncentered one also counts a predictor's distance from 0.
+  it('without an intercept the VIF is still the centered one; the uncentered VIF is given beside it', () => {
     const x = correlatedPredictors(4, 25);
     const result = collinearity(x, undefined, undefined, { intercept: false });
-    result.terms.forEach((t, j) => expectRelative(t.vif, referenceVif(x, j, false)));
+    result.terms.forEach((t, j) => {
+      expectRelative(t.vif, referenceVif(x, j, true));
+      expectRelative(t.uncenteredVif ?? Number.NaN, referenceVif(x, j, false));
+    });
+    expect(collinearity(x).terms[0].uncenteredVif).toBeUndefined();
   });
 
   it('two predictors with correlation r: both VIFs are 1/(1 − r²)', () => {
@@ -100,7 +106,7 @@ describe('collinearity: VIF and tolerance', () => {
     const x = correlatedPredictors(6, 10).map((row) => [row[0]]);
     for (const intercept of [true, false]) {
       const [term] = collinearity(x, undefined, undefined, { intercept }).terms;
-      expect(term).toEqual({ name: 'x1', vif: 1, tolerance: 1, undefinedBecause: undefined });
+      expect(term).toMatchObject({ name: 'x1', vif: 1, tolerance: 1, undefinedBecause: undefined });
     }
   });
 
@@ -118,7 +124,7 @@ describe('collinearity: VIF and tolerance', () => {
     expect(result.conditionNumber).toBe(Infinity);
   });
 
-  it('a constant column is collinear with the intercept; without an intercept only an all-zero column is', () => {
+  it('a constant column is collinear with the intercept; without an intercept it stands in for it, and an all-zero column is constant', () => {
     const base = correlatedPredictors(8, 20);
     const x = base.map((r) => [r[0], 5, r[2]]);
     const withIntercept = collinearity(x);
@@ -126,8 +132,10 @@ describe('collinearity: VIF and tolerance', () => {
     // The constant adds nothing beyond the intercept, so x1's VIF is that of x1 on x3 alone.
     expectRelative(withIntercept.terms[0].vif, referenceVif(base.map((r) => [r[0], r[2]]), 0, true));
     const noIntercept = collinearity(x, undefined, undefined, { intercept: false });
-    expect(noIntercept.terms[1].undefinedBecause).toBeUndefined();
-    expectRelative(noIntercept.terms[1].vif, referenceVif(x, 1, false));
+    expect(noIntercept.terms[1]).toMatchObject({ vif: NaN, tolerance: NaN, undefinedBecause: 'spans-intercept' });
+    expectRelative(noIntercept.terms[1].uncenteredVif ?? Number.NaN, referenceVif(x, 1, false));
+    // With the constant column standing in for the intercept, x1's VIF is that of the model with one.
+    expectRelative(noIntercept.terms[0].vif, withIntercept.terms[0].vif);
     const zero = collinearity(base.map((r) => [r[0], 0]), undefined, undefined, { intercept: false });
     expect(zero.terms[1]).toMatchObject({ vif: Infinity, undefinedBecause: 'constant' });
   });
@@ -138,8 +146,27 @@ describe('collinearity: VIF and tolerance', () => {
     const normal = gaussian(mulberry32(9));
     const x = levels.map((l) => [l === 0 ? 1 : 0, l === 1 ? 1 : 0, l === 2 ? 1 : 0, normal()]);
     const result = collinearity(x, undefined, undefined, { intercept: false });
-    result.terms.forEach((t, j) => expectRelative(t.vif, referenceVif(x, j, false)));
+    result.terms.forEach((t, j) => expectRelative(t.uncenteredVif ?? Number.NaN, referenceVif(x, j, false)));
+    result.terms.slice(0, 3).forEach((t) => expect(t.undefinedBecause).toBe('spans-intercept'));
     expect(result.conditionNumber).toBeLessThan(Infinity);
+  });
+
+  it('a predictor far from 0 beside a full set of indicators, no intercept: its VIF is that of the model with an intercept', () => {
+    // The indicators span the intercept, so the model and x's standard error are those of the
+    // model with an intercept and two indicators; only the uncentered VIF grows with x's mean.
+    const levels = [0, 1, 2, 0, 1, 2, 0, 0, 1, 2, 1, 2, 0, 1, 2];
+    const normal = gaussian(mulberry32(21));
+    const grind = levels.map((l) => 300 + 4 * l + 5 * normal());
+    const noIntercept = collinearity(
+      levels.map((l, i) => [l === 0 ? 1 : 0, l === 1 ? 1 : 0, l === 2 ? 1 : 0, grind[i]]),
+      undefined,
+      undefined,
+      { intercept: false },
+    );
+    const withIntercept = levels.map((l, i) => [l === 1 ? 1 : 0, l === 2 ? 1 : 0, grind[i]]);
+    const centered = referenceVif(withIntercept, 2, true);
+    expectRelative(noIntercept.terms[3].vif, centered);
+    expect(noIntercept.terms[3].uncenteredVif).toBeGreaterThan(10 * centered);
   });
 
   it('does not change when a column is multiplied by 1e200', () => {

@@ -89,7 +89,7 @@ describe.skipIf(!available)('preview workbook in Chromium', () => {
     expect(await cellText('K12')).toBe('#VALUE!');
     await session.page.locator('[data-cell="K12"]').click();
     await expect.poll(() => session.page.locator('.status-line').innerText()).toContain(
-      'known_y has 61 rows but known_x has 50; select the same rows for both.',
+      'response has 61 rows but predictors has 50; select the same rows for both.',
     );
     await screenshot(session.page, 'preview-error');
   });

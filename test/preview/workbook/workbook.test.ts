@@ -17,7 +17,7 @@ function setup() {
   });
   wb.registerFunction('SCALE', (range: unknown, factor: unknown) => (range as number[][]).map((r) => r.map((v) => v * (factor as number))));
   wb.registerFunction('FAIL', () => {
-    throw new CustomFunctionsError('#VALUE!', 'known_y is empty: select the column of responses.');
+    throw new CustomFunctionsError('#VALUE!', 'response is empty: select the column of responses.');
   });
   wb.setFunctionShapes([{ id: 'SCALE', parameters: [{ dimensionality: 'matrix', optional: false }, { dimensionality: 'scalar', optional: false }] }]);
   wb.setInputs('Data', 0, 0, [[1, 2], [3, 4], [5, 6]]);
@@ -67,7 +67,7 @@ describe('preview workbook', () => {
   it('shows a thrown error with its message, an unknown function as #NAME?, a bad sheet as #REF!', () => {
     const wb = setup();
     wb.setInputs('Data', 0, 3, [['=PLUMB.FAIL()'], ['=PLUMB.NOPE(A1)'], ['=PLUMB.SUMCOL(Nowhere!A1:A2)'], ['=PLUMB.SUMCOL(A1:']]);
-    expect(wb.valueAt(at('Data', 0, 3))).toEqual({ error: '#VALUE!', message: 'known_y is empty: select the column of responses.' });
+    expect(wb.valueAt(at('Data', 0, 3))).toEqual({ error: '#VALUE!', message: 'response is empty: select the column of responses.' });
     expect(wb.valueAt(at('Data', 1, 3))).toMatchObject({ error: '#NAME?' });
     expect(wb.valueAt(at('Data', 2, 3))).toMatchObject({ error: '#REF!' });
     expect(wb.valueAt(at('Data', 3, 3))).toMatchObject({ error: '#NAME?' });

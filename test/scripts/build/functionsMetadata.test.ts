@@ -21,8 +21,8 @@ const generated: Fixture = {
       name: 'ESTIMATES',
       options: { requiresParameterAddresses: true },
       parameters: [
-        { name: 'known_y', type: 'any', dimensionality: 'matrix' },
-        { name: 'known_x', type: 'any', dimensionality: 'matrix' },
+        { name: 'response', type: 'any', dimensionality: 'matrix' },
+        { name: 'predictors', type: 'any', dimensionality: 'matrix' },
         { name: 'level', type: 'any', optional: true },
       ],
       result: { dimensionality: 'matrix' },

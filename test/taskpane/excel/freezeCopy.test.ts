@@ -8,6 +8,13 @@ import { describe, expect, it } from 'vitest';
 import { PAYLOAD_LIMIT_BYTES } from '../../../src/preview/shim/hostSettings';
 import { freezeActiveReport } from '../../../src/taskpane/excel/freezeCopy';
 import type { PreviewWorkbook } from '../../../src/preview/workbook/workbook';
+import { writeReport } from '../../../src/taskpane/excel/writeReport';
+import { analyze } from '../../../src/taskpane/model/analysis';
+import { EMPTY_CHOICES, type PaneChoices, resolveRanges } from '../../../src/taskpane/model/choices';
+import { LIVE_NOTE, LIVE_QQ_LABEL, LIVE_SETTINGS_HEADING, planReport, REPORT_TITLE_PREFIX, type ReportPlan } from '../../../src/taskpane/model/reportPlan';
+import { readData } from '../../../src/taskpane/readData';
+import { plumbPreview } from '../../support/plumbPreview';
+import { randomProblem } from '../../support/random';
 import { afterPendingWork, freshHost } from '../../preview/shim/harness';
 
 const NOW = new Date('2026-01-02T03:04:00Z');
@@ -33,15 +40,15 @@ describe('freezeActiveReport against the strict host', () => {
     expect(JSON.stringify(values).length + JSON.stringify(formats).length).toBeGreaterThan(PAYLOAD_LIMIT_BYTES);
     const name = await freezeActiveReport(NOW);
     expect(name).toBe('Plumbline report values');
-    // The copy starts in row 4, below the stamp.
+    // Every cell at its place in the report, the title once.
     for (const i of [0, 7_000, rows - 1]) {
-      expect(model.valueAt({ sheet: name, row: 4 + i, column: 0 })).toBe(`label ${i}`);
-      expect(model.numberFormatAt({ sheet: name, row: 4 + i, column: 0 })).toBe('@');
-      expect(model.valueAt({ sheet: name, row: 4 + i, column: 11 })).toBe(value(i, 10));
-      expect(model.numberFormatAt({ sheet: name, row: 4 + i, column: 11 })).toBe('0.000');
+      expect(model.valueAt({ sheet: name, row: 1 + i, column: 0 })).toBe(`label ${i}`);
+      expect(model.numberFormatAt({ sheet: name, row: 1 + i, column: 0 })).toBe('@');
+      expect(model.valueAt({ sheet: name, row: 1 + i, column: 11 })).toBe(value(i, 10));
+      expect(model.numberFormatAt({ sheet: name, row: 1 + i, column: 11 })).toBe('0.000');
     }
-    expect(model.valueAt({ sheet: name, row: 3, column: 0 })).toBe('Plumbline report: invented');
-    expect(model.usedExtent(name)).toEqual({ rows: rows + 4, columns: 12 });
+    expect(model.valueAt({ sheet: name, row: 0, column: 0 })).toBe('Plumbline report: invented: frozen copy of "Plumbline report", values as of 2026-01-02 03:04 UTC');
+    expect(model.usedExtent(name)).toEqual({ rows: rows + 1, columns: 12 });
   });
 
   it('keeps every cell in its column when whole blocks of columns are blank, as beside a residual table', async () => {
@@ -51,10 +58,10 @@ describe('freezeActiveReport against the strict host', () => {
     model.setInputs('Plumbline report', 9, 10, [[11, 1.5, -0.25], [12, 2.5, 0.75]]);
     model.activateSheet('Plumbline report');
     const name = await freezeActiveReport(NOW);
-    expect(model.valueAt({ sheet: name, row: 3, column: 0 })).toBe('Plumbline report: invented');
-    expect([10, 11, 12].map((column) => model.valueAt({ sheet: name, row: 12, column }))).toEqual([11, 1.5, -0.25]);
-    expect([10, 11, 12].map((column) => model.valueAt({ sheet: name, row: 13, column }))).toEqual([12, 2.5, 0.75]);
-    expect(model.usedExtent(name)).toEqual({ rows: 14, columns: 13 });
+    expect(String(model.valueAt({ sheet: name, row: 0, column: 0 }))).toMatch(/^Plumbline report: invented: frozen copy/);
+    expect([10, 11, 12].map((column) => model.valueAt({ sheet: name, row: 9, column }))).toEqual([11, 1.5, -0.25]);
+    expect([10, 11, 12].map((column) => model.valueAt({ sheet: name, row: 10, column }))).toEqual([12, 2.5, 0.75]);
+    expect(model.usedExtent(name)).toEqual({ rows: 11, columns: 13 });
   });
 
   it('waits while the user edits a cell, adding no sheet, and copies once the edit ends', async () => {
@@ -85,4 +92,52 @@ describe('freezeActiveReport against the strict host', () => {
     }
     expect(model.sheetNames()).toEqual(before);
   });
+});
+
+describe('freezeActiveReport of a live report', () => {
+  // The report written by the pane over invented seeded data, with the real PLUMB functions
+  // registered in the preview host (test/support/plumbPreview.ts). Issue #14: the copy must say
+  // what it is, show its title once and keep the report's bold headings and number formats.
+  it('says it holds values as of its time, shows the title once and keeps bold headings and number formats', async () => {
+    const model = await plumbPreview('Data');
+    const { y, x } = randomProblem(23, 15, 2);
+    model.setInputs('Data', 0, 0, [['Yield', 'Temp', 'Time'], ...y.map((v, i) => [v, ...x[i]])]);
+    const choices: PaneChoices = { ...EMPTY_CHOICES, response: 'Data!A1:A16', predictors: 'Data!B1:C16' };
+    const { ranges } = resolveRanges(choices);
+    if (ranges === undefined) throw new Error('bad test ranges');
+    const read = await readData(ranges, () => undefined, new AbortController().signal, false);
+    if (read.kind !== 'cells') throw new Error('expected the in-memory read');
+    const analysis = analyze(read.data, choices);
+    let plan: ReportPlan | undefined;
+    const report = await writeReport((sheetName) => {
+      plan = planReport({ sheetName, ranges, choices, analysis, writtenAt: NOW });
+      return plan;
+    });
+    model.activateSheet(report);
+    const name = await freezeActiveReport(NOW);
+
+    const extent = model.usedExtent(name);
+    const texts: string[] = [];
+    for (let row = 0; row < extent.rows; row++) {
+      for (let column = 0; column < extent.columns; column++) {
+        const value = model.valueAt({ sheet: name, row, column });
+        if (typeof value === 'string') texts.push(value);
+      }
+    }
+    expect(texts.filter((t) => t.startsWith(REPORT_TITLE_PREFIX))).toEqual(['Plumbline report: Yield: frozen copy of "Plumbline report", values as of 2026-01-02 03:04 UTC']);
+    for (const live of [LIVE_NOTE, LIVE_SETTINGS_HEADING, LIVE_QQ_LABEL, 'live formula', 'recalculates']) {
+      expect(texts.filter((t) => t.includes(live) && !t.includes('nothing here recalculates'))).toEqual([]);
+    }
+    expect(model.valueAt({ sheet: name, row: 1, column: 0 })).toContain('Every number below is a value as of 2026-01-02 03:04 UTC, not a formula');
+
+    const bold = plan?.cells.filter((c) => c.kind === 'label' && c.bold === true) ?? [];
+    expect(bold.length).toBeGreaterThan(5);
+    for (const c of bold) expect({ row: c.row, bold: model.styleAt({ sheet: name, row: c.row, column: c.column }).bold }).toEqual({ row: c.row, bold: true });
+    expect(model.styleAt({ sheet: name, row: 12, column: 0 }).bold).toBe(false);
+    for (const f of plan?.formats ?? []) {
+      const at = { row: f.range.top, column: f.range.left };
+      if (typeof model.valueAt({ sheet: report, ...at }) !== 'number') continue;
+      expect(model.numberFormatAt({ sheet: name, ...at })).toBe(f.numberFormat);
+    }
+  }, 60_000);
 });

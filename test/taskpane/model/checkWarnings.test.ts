@@ -4,7 +4,7 @@
  * the usual ones: p below 1 − level (common practice, no source).
  */
 import { describe, expect, it } from 'vitest';
-import { assumptionChecks } from '../../../src/engine';
+import { assumptionChecks, buildModelFrame } from '../../../src/engine';
 import { checkWarnings } from '../../../src/taskpane/model/checkWarnings';
 import { gaussian, mulberry32 } from '../../support/random';
 
@@ -27,6 +27,31 @@ describe('checkWarnings', () => {
 
   it('names related neighbouring residuals when a slow wave is left in row order', () => {
     const y = x.map(([v], i) => 2 + 3 * v + 3 * Math.sin(i / 10) + 0.2 * normal());
-    expect(checkWarnings(assumptionChecks({ y, x }), rows).map((w) => w.text).join(' ')).toContain('Durbin–Watson');
+    const text = checkWarnings(assumptionChecks({ y, x }), rows).map((w) => w.text).join(' ');
+    // The two-sided p in CHECKS' format, as in its "DW p-value (two-sided)" row and reading.
+    expect(text).toMatch(/Durbin–Watson d = \d\.\d\d, two-sided p (< 0\.001|= 0\.\d+)\)/);
+  });
+
+  // A response typed far off (Cook & Weisberg 1982: one row can distort every residual check; common
+  // practice, no source): the pane names that worksheet row before any other warning.
+  it('names an outlying row first, by worksheet row, with the note that it can cause the other signals', () => {
+    const y = x.map(([v]) => 2 + 3 * v + 0.3 * normal());
+    y[40] += 30;
+    const warnings = checkWarnings(assumptionChecks({ y, x }, undefined, rows), rows);
+    expect(warnings[0].text).toMatch(/^Row 42 \(studentized residual \d+\.\d.*\) stands out: check its data first, since such a row can cause the other signals\.$/);
+    expect(warnings.filter((w) => w.text.includes('Row 42'))).toHaveLength(1);
+  });
+
+  // Without an intercept but with every level of a category, the model is the one with an
+  // intercept, and a predictor's standard error is unchanged: its centered VIF, not the
+  // uncentered one inflated by its distance from 0, says whether it is inflated (Belsley, Kuh &
+  // Welsch 1980, from memory).
+  it('does not call a standard error inflated on the uncentered VIF of a no-intercept model', () => {
+    const grid: (string | number)[][] = [['Yield', 'Grind', 'Origin']];
+    for (let i = 0; i < 30; i++) grid.push([20 + 0.02 * (i % 7) + normal(), 400 + 3 * (i % 5) + normal(), ['North', 'South', 'East'][i % 3]]);
+    const frame = buildModelFrame({ y: grid.map((r) => [r[0]]), x: [grid.map((r) => r.slice(1))], intercept: false });
+    const checks = assumptionChecks(frame.data, { intercept: false }, frame.usedRows);
+    expect(checks.largestVif).toBeLessThan(2);
+    expect(checkWarnings(checks, frame.usedRows).some((w) => /VIF/.test(w.text))).toBe(false);
   });
 });

@@ -13,8 +13,9 @@ import { analyze } from '../../../src/taskpane/model/analysis';
 import { EMPTY_CHOICES, type PaneChoices, resolveRanges } from '../../../src/taskpane/model/choices';
 import { QQ_HEADER } from '../../../src/cellGrids/qqGrid';
 import { RESIDUALS_HEADER } from '../../../src/cellGrids/residualsGrid';
+import { decimalsFor } from '../../../src/cellGrids/decimals';
 import { planReport, type ReportCell, SETTINGS_CELLS } from '../../../src/taskpane/model/reportPlan';
-import { randomProblem } from '../../support/random';
+import { gaussian, mulberry32, randomProblem } from '../../support/random';
 
 const { y, x } = randomProblem(91, 20, 3);
 const column = (left: number) => ({ sheet: 'Data', top: 0, bottom: 20, left, right: left });
@@ -55,6 +56,22 @@ describe('planReport', () => {
     expect(labels.some((t) => t.startsWith('Does +Gamma add anything?'))).toBe(true);
   });
 
+  // Under HC3 only the coefficients' covariance changes (MacKinnon & White 1985); the F tests and
+  // prediction intervals stay classical, so each section says which standard errors it uses.
+  it('labels every section with the standard errors it uses', () => {
+    const p = plan({ ...choices, robust: 'HC3', newRows: 'Data!B2:D3' });
+    const beside = (heading: string) => {
+      const head = p.cells.find((c) => c.kind === 'label' && c.column === 0 && c.text.startsWith(heading));
+      if (head === undefined) throw new Error(`no section ${heading}`);
+      return p.cells.flatMap((c) => (c.kind === 'label' && c.row === head.row && c.column === 1 ? [c.text] : [])).join(' ');
+    };
+    expect(beside('Which terms matter?')).toContain('Standard errors: those set in B8 (classical or robust).');
+    for (const heading of ['How well does it fit?', 'Does +Gamma add anything?', 'What to expect for new cases']) {
+      expect(beside(heading)).toContain("Classical standard errors, whatever B8 sets: robust ones change only the terms' table.");
+    }
+    expect(beside('Can these numbers be trusted?')).toContain('The checks use the residuals, not the standard errors.');
+  });
+
   it('puts the settings block where the formulas look for it', () => {
     const p = plan({ ...choices, robust: 'HC3' });
     expect(p.cells.filter((c) => c.kind === 'value')).toEqual([
@@ -63,6 +80,63 @@ describe('planReport', () => {
       { row: 6, column: 1, kind: 'value', value: '' },
     ]);
     expect(p.cells).toContainEqual({ row: 7, column: 1, kind: 'label', text: 'HC3', bold: false });
+  });
+
+  // A weights range is written into every formula, so no cell can switch it: it is named with the
+  // data as fixed, never listed among the cells to edit (issue #14).
+  it('names the weights with the data as fixed, not among the settings to edit', () => {
+    const { ranges } = resolveRanges({ ...choices, weights: 'Data!E1:E21' });
+    if (!ranges) throw new Error('bad test ranges');
+    const weighted = { ...data, weights: [['w'], ...y.map(() => [1])], sources: { ...data.sources, weights: column(4) } };
+    const p = planReport({ sheetName: 'R', ranges, choices, analysis: analyze(weighted, choices), writtenAt: new Date() });
+    const labels = p.cells.flatMap((c) => (c.kind === 'label' ? [c] : []));
+    expect(labels.filter((c) => c.text === 'Weights')).toEqual([]);
+    const heading = labels.find((c) => c.text.startsWith('Settings'));
+    const model = labels.find((c) => c.text === 'The model');
+    const editable = p.cells.filter((c) => heading !== undefined && model !== undefined && c.row > heading.row && c.row < model.row);
+    expect(editable.some((c) => (c.kind === 'label' ? c.text : '').includes('E1'))).toBe(false);
+    expect(p.specification).toContain('weights Data!$E$1:$E$21 (fixed in this report');
+    expect(labels[1].text).toContain(p.specification);
+  });
+
+  it('writes the equation as a live PLUMB.EQUATION formula over the same data and settings cells', () => {
+    const formulas = formulaCells(plan(choices).cells);
+    const settings = `${SETTINGS_CELLS.level}, ${SETTINGS_CELLS.intercept}, ${SETTINGS_CELLS.knownSigma}, , ${SETTINGS_CELLS.robust}`;
+    expect(formulas).toContainEqual({ row: 11, column: 0, kind: 'formula', formula: `=PLUMB.EQUATION(Data!$A$1:$A$21, Data!$B$1:$D$21, ${settings})` });
+    expect(plan(choices).cells.some((c) => c.kind === 'label' && c.text.includes('b0'))).toBe(false);
+  });
+
+  // Editing the intercept cell moves every term a row up or down, so the term table's formats go
+  // by column: each must show at least three significant digits of the standard error of any term
+  // a row can hold in either setting (the project's rounding rule, common practice (no source)).
+  // Invented data far from zero, so the intercept's standard error is thousands of times the slope's.
+  it('formats the term table by column, to suit every row in either intercept setting', () => {
+    const noise = gaussian(mulberry32(5));
+    const xs = Array.from({ length: 20 }, (_, i) => 1000 + 5 * i);
+    const far = {
+      response: [['Yield'], ...xs.map((v) => [100 + 0.5 * v + noise()])],
+      predictorColumns: [[['Dose'], ...xs.map((v) => [v])]],
+      weights: undefined,
+      sources: { response: column(0), predictors: [column(1)], weights: undefined },
+    };
+    const farChoices: PaneChoices = { ...EMPTY_CHOICES, response: 'Data!A1:A21', predictors: 'Data!B1:B21' };
+    const { ranges } = resolveRanges(farChoices);
+    if (!ranges) throw new Error('bad test ranges');
+    const p = planReport({ sheetName: 'R', ranges, choices: farChoices, analysis: analyze(far, farChoices), writtenAt: new Date() });
+    const top = (formulaCells(p.cells).find((c) => c.formula.startsWith('=PLUMB.TERMS'))?.row ?? -99) + 1;
+    const formatAt = (row: number, column: number) => p.formats.filter((f) => f.range.top <= row && row <= f.range.bottom && f.range.left <= column && column <= f.range.right).map((f) => f.numberFormat);
+    const decimalsOf = (format: string) => (format.split('.')[1] ?? '').length;
+    const fits = [true, false].map((intercept) => analyze(far, { ...farChoices, intercept }).fit?.terms ?? []);
+    expect(decimalsFor(fits[0][0].standardError)).toBeLessThan(decimalsFor(fits[1][0].standardError));
+    for (const terms of fits) {
+      terms.forEach((t, i) => {
+        for (const c of [1, 2, 5, 6]) {
+          const shown = formatAt(top + i, c);
+          expect(shown).toHaveLength(1);
+          expect(decimalsOf(shown[0])).toBeGreaterThanOrEqual(decimalsFor(t.standardError));
+        }
+      });
+    }
   });
 
   it('passes the weights column between σ and the robust cell when there is one', () => {

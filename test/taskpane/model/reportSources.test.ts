@@ -12,6 +12,7 @@
  */
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { RangeRef } from '../../../src/addressing/a1';
+import { FIT_STATS_LABELS } from '../../../src/cellGrids/fitStatsGrid';
 import { fitModel } from '../../../src/engine';
 import type { CellInput } from '../../../src/preview/workbook/types';
 import type { PreviewWorkbook } from '../../../src/preview/workbook/workbook';
@@ -116,7 +117,7 @@ describe('the live report in the preview host', () => {
   it('gives exactly the term table and fit statistics of the same data in one block', () => {
     const terms = result('areas', 'TERMS', 4, 8);
     expect(terms).toEqual(result('block', 'TERMS', 4, 8));
-    expect(result('areas', 'FITSTATS', 13, 2)).toEqual(result('block', 'FITSTATS', 13, 2));
+    expect(result('areas', 'FITSTATS', FIT_STATS_LABELS.length, 2)).toEqual(result('block', 'FITSTATS', FIT_STATS_LABELS.length, 2));
     expect(result('areas', 'CHECKS', 20, 6)).toEqual(result('block', 'CHECKS', 20, 6));
     // And they are the fit of the 11 complete rows, as the engine computes it on those rows alone.
     const complete = y.map((_, i) => i).filter((i) => ![BLANK_Y, BLANK_A, MISSING_B].includes(i));

@@ -1,7 +1,7 @@
 /** The plain-language readings, on a small fit whose numbers the test computes itself. */
 import { describe, expect, it } from 'vitest';
-import { buildModelFrame, fitModel } from '../../../src/engine';
-import { fitSentence, readable, splitUnit, termSentence } from '../../../src/taskpane/model/sentences';
+import { buildModelFrame, compareNested, fitModel } from '../../../src/engine';
+import { fitSentence, nestedSentence, readable, splitUnit, termSentence } from '../../../src/taskpane/model/sentences';
 
 const frame = buildModelFrame({
   y: [['Yield (%)'], [10], [12.1], [13.9], [16.2], [18], [19.8], [22.1], [24]],
@@ -16,19 +16,58 @@ describe('sentences', () => {
     expect(splitUnit('Yield')).toEqual({ name: 'Yield', unit: undefined });
   });
 
-  it('reads a numeric term per unit, with its interval and verdict', () => {
+  // A regression slope describes an association among the rows with the other predictors held
+  // fixed, not the effect of changing the predictor (common practice, no source).
+  it('reads a numeric term per unit as an association, other predictors held fixed', () => {
     const t = fit.terms[1];
-    expect(termSentence(t, frame, 0.95)).toBe(
-      `Steep: each extra hour changes yield by +${readable(t.estimate)} points (95% CI ${readable(t.ciLow)} to ${readable(t.ciHigh)}). Clear of zero.`,
+    const sentence = termSentence(t, frame, 0.95);
+    expect(sentence).toBe(
+      `Steep: each extra hour is associated with +${readable(t.estimate)} points of yield, other predictors held fixed (95% CI ${readable(t.ciLow)} to ${readable(t.ciHigh)}). Clear of zero.`,
     );
+    expect(sentence).not.toMatch(/changes/);
   });
 
-  it('reads a categorical term against its reference level', () => {
+  it('reads a categorical term against its reference level, its size signed like its interval', () => {
     const t = fit.terms[2];
-    expect(termSentence(t, frame, 0.9)).toMatch(/^Origin South vs North: yield is (higher|lower) by .* points \(90% CI /);
+    const sign = t.estimate > 0 ? '+' : '';
+    expect(termSentence(t, frame, 0.9)).toBe(
+      `Origin South vs North: yield differs by ${sign}${readable(t.estimate)} points, other predictors held fixed (90% CI ${readable(t.ciLow)} to ${readable(t.ciHigh)}). ${t.ciLow > 0 || t.ciHigh < 0 ? 'Clear of zero.' : 'Could be zero.'}`,
+    );
   });
 
   it('summarises the fit with rows, R² and the overall F test', () => {
     expect(fitSentence(fit, frame)).toContain(`Fitted on 8 rows: R² = ${readable(fit.rSquared)}`);
+  });
+
+  // Without an intercept R² is 1 − RSS/Σy² (NIST StRD, NoInt1 certified values are of this kind),
+  // which is near 1 for data far from 0 and must not pass for the usual R².
+  it('labels the uncentered R² of a model without an intercept and never rounds it to a bare 1', () => {
+    const noIntercept = fitModel(
+      { y: [100.1, 100.9, 102.2, 102.8, 104.1, 105.2], x: [[1], [2], [3], [4], [5], [6]].map(([v]) => [v, 1]) },
+      { intercept: false },
+    );
+    const sentence = fitSentence(noIntercept, { responseName: 'Yield', columns: [], skipped: { length: 0 } });
+    expect(sentence).toContain('uncentered R² (no intercept, measured from 0) = 0.9999');
+    expect(sentence).not.toMatch(/R² = 1,/);
+  });
+
+  // Under HC3 only the terms' standard errors change; the overall and nested F tests are the
+  // classical ones (MacKinnon & White 1985 give the HC covariance, not a robust F).
+  it('says beside the F tests that they stay classical under robust standard errors', () => {
+    const robust = fitModel(frame.data, { covariance: 'HC3' });
+    expect(fitSentence(robust, frame)).toContain('(classical standard errors, not HC3)');
+    expect(fitSentence(fit, frame)).not.toContain('classical');
+  });
+
+  // A test that does not reject is absence of evidence, not evidence of absence (common practice, no source).
+  it('reads a nested test that does not reject as no evidence, never as no effect', () => {
+    const y = [3.1, 4.8, 7.15, 9.05, 10.9, 13.2, 14.85, 16.95];
+    const base = [[1], [2], [3], [4], [5], [6], [7], [8]];
+    const added = [[1], [1], [-1], [-1], [1], [1], [-1], [-1]];
+    const result = compareNested({ y, base, added });
+    expect(result.addedHelp).toBe(false);
+    const sentence = nestedSentence(result, ['Noise'], 0.95, fitModel({ y, x: base.map((r, i) => [...r, ...added[i]]) }, { covariance: 'HC3' }));
+    expect(sentence).toMatch(/^No evidence that Noise adds anything: F = .*\(classical standard errors, not HC3\)\. The smaller model is enough\.$/);
+    expect(sentence).not.toMatch(/does not earn|no effect/);
   });
 });

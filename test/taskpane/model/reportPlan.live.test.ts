@@ -1,0 +1,86 @@
+/**
+ * The live report after a settings edit, end to end in the preview host in Node with the real
+ * PLUMB functions (test/support/plumbPreview.ts): setting the intercept cell to FALSE must change
+ * the equation line and leave every term row formatted for the term it now shows (issue #14).
+ * The data are invented, far from zero, so the intercept's standard error dwarfs the slope's; the
+ * rounding rule (about three significant digits of the standard error) is the project's own,
+ * common practice (no source). The statistics themselves are checked in test/engine.
+ */
+import { beforeAll, describe, expect, it } from 'vitest';
+import { decimalsFor } from '../../../src/cellGrids/decimals';
+import { fittedEquation } from '../../../src/cellGrids/equationGrid';
+import type { PreviewWorkbook } from '../../../src/preview/workbook/workbook';
+import { writeReport } from '../../../src/taskpane/excel/writeReport';
+import { analyze, type ReadData } from '../../../src/taskpane/model/analysis';
+import { EMPTY_CHOICES, type PaneChoices, resolveRanges } from '../../../src/taskpane/model/choices';
+import { planReport, type ReportPlan } from '../../../src/taskpane/model/reportPlan';
+import { readData } from '../../../src/taskpane/readData';
+import { plumbPreview } from '../../support/plumbPreview';
+import { gaussian, mulberry32 } from '../../support/random';
+
+const noise = gaussian(mulberry32(17));
+const dose = Array.from({ length: 20 }, (_, i) => 1000 + 5 * i);
+const yields = dose.map((v) => 100 + 0.5 * v + noise());
+const choices: PaneChoices = { ...EMPTY_CHOICES, response: 'Data!A1:A21', predictors: 'Data!B1:B21' };
+const INTERCEPT_CELL = { row: 5, column: 1 };
+
+describe('the live report follows its settings cells', () => {
+  let model: PreviewWorkbook;
+  let sheet: string;
+  let plan: ReportPlan | undefined;
+  let cells: ReadData | undefined;
+
+  beforeAll(async () => {
+    model = await plumbPreview('Data');
+    model.setInputs('Data', 0, 0, [['Yield', 'Dose'], ...dose.map((v, i) => [yields[i], v])]);
+    const { ranges } = resolveRanges(choices);
+    if (ranges === undefined) throw new Error('bad test ranges');
+    const read = await readData(ranges, () => undefined, new AbortController().signal, false);
+    if (read.kind !== 'cells') throw new Error('expected the in-memory read');
+    cells = read.data;
+    const analysis = analyze(read.data, choices);
+    sheet = await writeReport((sheetName) => {
+      plan = planReport({ sheetName, ranges, choices, analysis, writtenAt: new Date('2026-12-03T10:00:00Z') });
+      return plan;
+    });
+  }, 60_000);
+
+  const terms = () => {
+    const anchor = plan?.cells.find((c) => c.kind === 'formula' && c.formula.startsWith('=PLUMB.TERMS('));
+    if (anchor === undefined) throw new Error('no term table');
+    const rows: { row: number; name: unknown; standardError: number }[] = [];
+    for (let row = anchor.row + 1; model.valueAt({ sheet, row, column: 0 }) !== null; row++) {
+      rows.push({ row, name: model.valueAt({ sheet, row, column: 0 }), standardError: Number(model.valueAt({ sheet, row, column: 2 })) });
+    }
+    return rows;
+  };
+  const equationText = () => model.valueAt({ sheet, row: 11, column: 0 });
+  const expected = (intercept: boolean) => fittedEquation('Yield', { terms: (cells && analyze(cells, { ...choices, intercept }).fit?.terms) ?? [] });
+
+  it('shows each term with at least three significant digits of its standard error, before and after the intercept is turned off', () => {
+    const check = () => {
+      for (const t of terms()) {
+        for (const column of [1, 2, 5, 6]) {
+          const decimals = (model.numberFormatAt({ sheet, row: t.row, column }).split('.')[1] ?? '').length;
+          expect({ term: t.name, column, decimals }).toEqual({ term: t.name, column, decimals: Math.max(decimals, decimalsFor(t.standardError)) });
+        }
+      }
+    };
+    check();
+    model.setInputs(sheet, INTERCEPT_CELL.row, INTERCEPT_CELL.column, [[false]]);
+    expect(terms().map((t) => t.name)).toEqual(['Dose']);
+    check();
+    model.setInputs(sheet, INTERCEPT_CELL.row, INTERCEPT_CELL.column, [[true]]);
+    expect(terms().map((t) => t.name)).toEqual(['Intercept', 'Dose']);
+  });
+
+  it('rewrites the equation line when the intercept cell changes', () => {
+    expect(equationText()).toBe(expected(true));
+    expect(String(equationText())).toMatch(/^Fitted \[Yield\] = \d+\.\d+ \+ 0\.\d+·\[Dose\]$/);
+    model.setInputs(sheet, INTERCEPT_CELL.row, INTERCEPT_CELL.column, [[false]]);
+    expect(equationText()).toBe(expected(false));
+    expect(String(equationText())).toMatch(/^Fitted \[Yield\] = 0\.\d+·\[Dose\]$/);
+    model.setInputs(sheet, INTERCEPT_CELL.row, INTERCEPT_CELL.column, [[true]]);
+    expect(equationText()).toBe(expected(true));
+  });
+});
