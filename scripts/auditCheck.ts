@@ -8,15 +8,23 @@
  */
 import { spawnSync } from 'node:child_process';
 
-export type AuditDecision =
-  | { outcome: 'pass'; message: string }
-  | { outcome: 'skip'; message: string }
-  | { outcome: 'fail'; message: string };
+export type AuditDecision = { outcome: 'pass'; message: string } | { outcome: 'skip'; message: string } | { outcome: 'fail'; message: string };
 
 export const SKIP_NOTICE = "npm audit skipped: the registry's audit endpoint could not be reached";
 
 // Error codes that mean the network or the endpoint failed, not the project.
-const UNREACHABLE_CODES = new Set(['ENOTFOUND', 'EAI_AGAIN', 'ECONNREFUSED', 'ECONNRESET', 'ETIMEDOUT', 'ESOCKETTIMEDOUT', 'EHOSTUNREACH', 'ENETUNREACH', 'ECONNABORTED', 'EPIPE']);
+const UNREACHABLE_CODES = new Set([
+  'ENOTFOUND',
+  'EAI_AGAIN',
+  'ECONNREFUSED',
+  'ECONNRESET',
+  'ETIMEDOUT',
+  'ESOCKETTIMEDOUT',
+  'EHOSTUNREACH',
+  'ENETUNREACH',
+  'ECONNABORTED',
+  'EPIPE',
+]);
 
 function isRecord(value: unknown): value is Record<string, unknown> {
   return typeof value === 'object' && value !== null && !Array.isArray(value);
@@ -55,7 +63,8 @@ export function decide(output: string): AuditDecision {
     return { outcome: 'pass', message: 'npm audit: no high or critical advisories in the shipped dependencies.' };
   }
   if (endpointUnreachable(report)) {
-    const detail = typeof report.message === 'string' ? report.message : isRecord(report.error) && typeof report.error.code === 'string' ? report.error.code : '';
+    const detail =
+      typeof report.message === 'string' ? report.message : isRecord(report.error) && typeof report.error.code === 'string' ? report.error.code : '';
     return { outcome: 'skip', message: detail === '' ? SKIP_NOTICE : `${SKIP_NOTICE} (${detail})` };
   }
   const summary = isRecord(report.error) && typeof report.error.summary === 'string' ? report.error.summary : '';

@@ -25,10 +25,14 @@ function runCase(method: string, n: number, p: number): CaseResult {
   // The streaming fit, whose time every ratio divides by, always gets five repeats; its peers get
   // three, and one at a million rows, which keeps the whole run within minutes.
   const repeats = method === 'streaming' ? 5 : n >= 1_000_000 ? 1 : 3;
-  const output = execFileSync(process.execPath, ['--expose-gc', '--max-old-space-size=16384', '--import', 'tsx', join(__dirname, 'benchCase.ts'), method, String(n), String(p), String(repeats)], {
-    encoding: 'utf8',
-    maxBuffer: 1 << 20,
-  });
+  const output = execFileSync(
+    process.execPath,
+    ['--expose-gc', '--max-old-space-size=16384', '--import', 'tsx', join(__dirname, 'benchCase.ts'), method, String(n), String(p), String(repeats)],
+    {
+      encoding: 'utf8',
+      maxBuffer: 1 << 20,
+    },
+  );
   return JSON.parse(output.trim().split('\n').pop() ?? '{}') as CaseResult;
 }
 
@@ -39,9 +43,18 @@ function fitsPerEdit(): number {
   loadDemo(workbook);
   const { y, x, base, added, newX } = DEMO_RANGES;
   const formulas = [
-    `=PLUMB.TERMS(${y}, ${x})`, `=PLUMB.ESTIMATES(${y}, ${x})`, `=PLUMB.STDERRORS(${y}, ${x})`, `=PLUMB.INTERVALS(${y}, ${x})`,
-    `=PLUMB.COVARIANCE(${y}, ${x})`, `=PLUMB.FITSTATS(${y}, ${x})`, `=PLUMB.PREDICT(${y}, ${x}, ${newX})`, `=PLUMB.RESIDUALS(${y}, ${x})`,
-    `=PLUMB.QQPOINTS(${y}, ${x})`, `=PLUMB.NESTEDF(${y}, ${base}, ${added})`, `=PLUMB.TERMS(${y}, ${x}, 0.95)`, `=PLUMB.FITSTATS(${y}, ${x}, 0.95, TRUE)`,
+    `=PLUMB.TERMS(${y}, ${x})`,
+    `=PLUMB.ESTIMATES(${y}, ${x})`,
+    `=PLUMB.STDERRORS(${y}, ${x})`,
+    `=PLUMB.INTERVALS(${y}, ${x})`,
+    `=PLUMB.COVARIANCE(${y}, ${x})`,
+    `=PLUMB.FITSTATS(${y}, ${x})`,
+    `=PLUMB.PREDICT(${y}, ${x}, ${newX})`,
+    `=PLUMB.RESIDUALS(${y}, ${x})`,
+    `=PLUMB.QQPOINTS(${y}, ${x})`,
+    `=PLUMB.NESTEDF(${y}, ${base}, ${added})`,
+    `=PLUMB.TERMS(${y}, ${x}, 0.95)`,
+    `=PLUMB.FITSTATS(${y}, ${x}, 0.95, TRUE)`,
   ];
   workbook.addSheet('Bench');
   formulas.forEach((f, i) => workbook.setInputs('Bench', i * 80, 0, [[f]]));

@@ -57,7 +57,10 @@ function runOnce(data: { x: Float64Array; y: Float64Array }, arrays: { x: number
       return beta.get(1, 0) + se;
     }
     case 'regression-package': {
-      const model = new MultivariateLinearRegression(arrays!.x, arrays!.y.map((v) => [v]));
+      const model = new MultivariateLinearRegression(
+        arrays!.x,
+        arrays!.y.map((v) => [v]),
+      );
       return model.weights[0][0] + model.stdErrors[0];
     }
   }
@@ -68,7 +71,7 @@ const warmUp = generateColumns(2000, p);
 runOnce(warmUp, method === 'streaming' ? undefined : { x: rows(warmUp.x, 2000), y: Array.from(warmUp.y) }, 2000);
 const data = generateColumns(n, p);
 const arrays = method === 'streaming' ? undefined : { x: rows(data.x, n), y: Array.from(data.y) };
-const inputBytes = method === 'streaming' ? data.x.byteLength + data.y.byteLength : (n * (p + 1) * 8);
+const inputBytes = method === 'streaming' ? data.x.byteLength + data.y.byteLength : n * (p + 1) * 8;
 (globalThis as { gc?: () => void }).gc?.();
 const baselineKb = residentKb('VmRSS');
 // Resets VmHWM to the current resident size (Linux), so the peak below is this fit's own.

@@ -24,7 +24,10 @@ function medianRatio(label: string, y: number[], x: number[][]): void {
     solveLeastSquares(design, precision);
     return performance.now() - start;
   };
-  for (let r = 0; r < WARM_UP_PAIRS; r++) [time('auto'), time('double')];
+  for (let r = 0; r < WARM_UP_PAIRS; r++) {
+    time('auto');
+    time('double');
+  }
   const auto: number[] = [];
   const plain: number[] = [];
   // Small cases get more pairs, up to about a second of them: their runs of a few milliseconds

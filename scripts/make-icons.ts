@@ -1,9 +1,9 @@
 // Draws the Plumbline icon (a plumb bob hanging on a line, on a teal tile) at
 // every size the manifest references. Run with `npx tsx scripts/make-icons.ts`.
 // PNGs are encoded by hand with zlib so no image dependency is needed.
-import { writeFileSync, mkdirSync } from "node:fs";
-import { join } from "node:path";
-import { deflateSync } from "node:zlib";
+import { writeFileSync, mkdirSync } from 'node:fs';
+import { join } from 'node:path';
+import { deflateSync } from 'node:zlib';
 
 const ICON_SIZES = [16, 32, 64, 80] as const;
 
@@ -28,8 +28,7 @@ function inGlyph(x: number, y: number, lineHalfWidth: number): boolean {
   const bobBody = (x - 0.5) ** 2 + (y - bobCentreY) ** 2 <= bobRadius ** 2;
   // The bob tapers to a point so the glyph reads as a weight, not a pin.
   const tipY = 0.88;
-  const taper =
-    y >= bobCentreY && y <= tipY && Math.abs(x - 0.5) <= (bobRadius * (tipY - y)) / (tipY - bobCentreY);
+  const taper = y >= bobCentreY && y <= tipY && Math.abs(x - 0.5) <= (bobRadius * (tipY - y)) / (tipY - bobCentreY);
   return bar || line || bobBody || taper;
 }
 
@@ -80,7 +79,7 @@ function crc32(bytes: Uint8Array): number {
 function chunk(type: string, data: Uint8Array): Buffer {
   const head = Buffer.alloc(8);
   head.writeUInt32BE(data.length, 0);
-  head.write(type, 4, "ascii");
+  head.write(type, 4, 'ascii');
   const crc = Buffer.alloc(4);
   crc.writeUInt32BE(crc32(Buffer.concat([head.subarray(4), data])), 0);
   return Buffer.concat([head, data, crc]);
@@ -99,15 +98,10 @@ function encodePng(size: number, rgba: Uint8Array): Buffer {
     raw.set(rgba.subarray(y * stride, (y + 1) * stride), y * (stride + 1) + 1);
   }
   const signature = Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]);
-  return Buffer.concat([
-    signature,
-    chunk("IHDR", ihdr),
-    chunk("IDAT", deflateSync(raw, { level: 9 })),
-    chunk("IEND", new Uint8Array(0)),
-  ]);
+  return Buffer.concat([signature, chunk('IHDR', ihdr), chunk('IDAT', deflateSync(raw, { level: 9 })), chunk('IEND', new Uint8Array(0))]);
 }
 
-const outDir = join(__dirname, "..", "assets");
+const outDir = join(__dirname, '..', 'assets');
 mkdirSync(outDir, { recursive: true });
 for (const size of ICON_SIZES) {
   const file = join(outDir, `icon-${size}.png`);

@@ -23,6 +23,11 @@ export function manifestForTarget(devManifest: string, target: DeployTarget): st
   const strays = devManifest.match(new RegExp(`${devBase}(?![/<])|(?<!<AppDomain>)${devBase}(?=<)`, 'g')) ?? [];
   if (strays.length > 0) throw new Error(`manifest.xml names ${DEV_BASE_URL} other than as a URL into it or as the AppDomain`);
   let xml = replaceExactlyOnce(devManifest, /<Version>[^<]*<\/Version>/, `<Version>${escapeXml(target.version)}</Version>`, '<Version>');
-  xml = replaceExactlyOnce(xml, new RegExp(`<AppDomain>${devBase}</AppDomain>`), `<AppDomain>${escapeXml(target.appDomain)}</AppDomain>`, `<AppDomain>${DEV_BASE_URL}</AppDomain>`);
+  xml = replaceExactlyOnce(
+    xml,
+    new RegExp(`<AppDomain>${devBase}</AppDomain>`),
+    `<AppDomain>${escapeXml(target.appDomain)}</AppDomain>`,
+    `<AppDomain>${DEV_BASE_URL}</AppDomain>`,
+  );
   return xml.replace(new RegExp(`${devBase}/`, 'g'), `${escapeXml(target.baseUrl)}/`);
 }

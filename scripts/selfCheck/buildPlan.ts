@@ -21,6 +21,8 @@ export function buildSelfCheckPlan(strdFolder = STRD_FOLDER, toothGrowthReferenc
     ...STRD_SHEETS.map((name) => buildDatasetSheet(strdSheetSpec(name, readStrdFile(resolve(strdFolder, `${name}.dat`))))),
     buildDatasetSheet(toothGrowthSheetSpec(readToothGrowthReference(toothGrowthReference))),
   ];
-  const summary = buildSummarySheet(datasets.map((d) => ({ name: d.sheet.name, checkCount: d.checkCount, firstCheckRow: d.firstCheckRow, lastCheckRow: d.lastCheckRow })));
+  const summary = buildSummarySheet(
+    datasets.map((d) => ({ name: d.sheet.name, checkCount: d.checkCount, firstCheckRow: d.firstCheckRow, lastCheckRow: d.lastCheckRow })),
+  );
   return { sheets: [summary, ...datasets.map((d) => d.sheet)] };
 }

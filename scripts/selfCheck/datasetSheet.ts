@@ -90,14 +90,21 @@ export function buildDatasetSheet(spec: DatasetSheetSpec): DatasetSheet {
   }
 
   const c = CHECK_COLUMNS;
-  const headings: [number, string][] = [[c.label, 'Check'], [c.expected, spec.expectedHeading], [c.plumbline, 'Plumbline'], [c.lre, 'LRE'], [c.result, 'Result']];
+  const headings: [number, string][] = [
+    [c.label, 'Check'],
+    [c.expected, spec.expectedHeading],
+    [c.plumbline, 'Plumbline'],
+    [c.lre, 'LRE'],
+    [c.result, 'Result'],
+  ];
   cells.push(...headings.map(([column, text]) => valueCell(DATA_HEADER_ROW, column, text, { bold: true })));
   const firstCheckRow = DATA_HEADER_ROW + 1;
   spec.checks.forEach((check, i) => {
     const row = firstCheckRow + i;
     const anchor = anchors.get(check.block);
     if (anchor === undefined) throw new Error(`${spec.name}: check "${check.label}" reads ${check.block}, which the sheet does not call.`);
-    if (check.row >= anchor.block.rows || check.column >= anchor.block.columns) throw new Error(`${spec.name}: check "${check.label}" reads outside ${check.block}'s block.`);
+    if (check.row >= anchor.block.rows || check.column >= anchor.block.columns)
+      throw new Error(`${spec.name}: check "${check.label}" reads outside ${check.block}'s block.`);
     const format = check.count ? '0' : FIFTEEN_DIGITS;
     const formulas = checkRowFormulas(row, c);
     cells.push(

@@ -48,7 +48,9 @@ function referenceOf(lines: string[]): string {
 
 export function readStrdFile(path: string): StrdFile {
   // The files are ASCII with CRLF line endings, kept byte for byte as NIST published them.
-  const lines = readFileSync(path, 'latin1').split('\n').map((l) => l.replace(/\r$/, ''));
+  const lines = readFileSync(path, 'latin1')
+    .split('\n')
+    .map((l) => l.replace(/\r$/, ''));
   const [certifiedFrom, certifiedTo] = lineRange(lines, 'Certified Values');
   const [dataFrom, dataTo] = lineRange(lines, 'Data   ');
   const certified = lines.slice(certifiedFrom - 1, certifiedTo).map((l) => l.trim().split(/\s+/));
@@ -58,9 +60,7 @@ export function readStrdFile(path: string): StrdFile {
     return tokens;
   };
 
-  const parameters = certified
-    .filter((t) => /^B\d+$/.test(t[0]))
-    .map((t) => ({ name: t[0], estimate: numberOf(t[1]), standardDeviation: numberOf(t[2]) }));
+  const parameters = certified.filter((t) => /^B\d+$/.test(t[0])).map((t) => ({ name: t[0], estimate: numberOf(t[1]), standardDeviation: numberOf(t[2]) }));
   const sd = find((t) => t[0] === 'Standard' && t[1] === 'Deviation', 'residual standard deviation');
   const r2 = find((t) => t[0] === 'R-Squared', 'R-squared');
   const regression = find((t) => t[0] === 'Regression' && t.length >= 5, 'Regression ANOVA line');

@@ -31,7 +31,13 @@ export function strdSheetSpec(name: StrdSheetName, file: StrdFile): DatasetSheet
   });
   const checks: Check[] = [
     ...file.parameters.map((p, k) => ({ label: `${p.name} (${termOf(k)}) estimate`, expected: p.estimate, block: 'ESTIMATES', row: k, column: 0 })),
-    ...file.parameters.map((p, k) => ({ label: `${p.name} (${termOf(k)}) standard deviation`, expected: p.standardDeviation, block: 'STDERRORS', row: k, column: 0 })),
+    ...file.parameters.map((p, k) => ({
+      label: `${p.name} (${termOf(k)}) standard deviation`,
+      expected: p.standardDeviation,
+      block: 'STDERRORS',
+      row: k,
+      column: 0,
+    })),
     fit('Rows used', file.rows.length, true),
     fit('Parameters', q, true),
     fit('Residual df', file.residual.df, true),

@@ -35,7 +35,9 @@ export function buildSummarySheet(outcomes: SheetOutcome[]): PlannedSheet {
     valueCell(0, 0, 'Plumbline self-check', { bold: true }),
     valueCell(1, 0, `Is this installation computing correctly? Open this workbook in Excel with the Plumbline add-in loaded and read ${overallCell}.`),
     valueCell(overall.row, 0, 'Overall result', { bold: true }),
-    formulaCell(overall.row, overall.column, `IF(${relative(passed.row, passed.column)}=${relative(totalCell.row, totalCell.column)},"PASS","FAIL")`, { bold: true }),
+    formulaCell(overall.row, overall.column, `IF(${relative(passed.row, passed.column)}=${relative(totalCell.row, totalCell.column)},"PASS","FAIL")`, {
+      bold: true,
+    }),
     valueCell(passed.row, 0, 'Checks passed'),
     formulaCell(passed.row, passed.column, sum(2)),
     valueCell(totalCell.row, 0, 'Checks in this workbook'),

@@ -71,8 +71,10 @@ const COUNTS = new Set<string>(['Rows used', 'Rows skipped', 'Parameters', 'Resi
 
 export function readToothGrowthReference(path: string): ToothGrowthReference {
   const reference = JSON.parse(readFileSync(path, 'utf8')) as ToothGrowthReference;
-  if (reference.terms.join('|') !== R_TERMS.join('|')) throw new Error(`toothGrowth.json has terms ${reference.terms.join(', ')}; expected ${R_TERMS.join(', ')}.`);
-  if (reference.rows.length !== 60 || reference.usedRows.length !== reference.rowsUsed) throw new Error('toothGrowth.json does not hold the 60 rows and the rows used.');
+  if (reference.terms.join('|') !== R_TERMS.join('|'))
+    throw new Error(`toothGrowth.json has terms ${reference.terms.join(', ')}; expected ${R_TERMS.join(', ')}.`);
+  if (reference.rows.length !== 60 || reference.usedRows.length !== reference.rowsUsed)
+    throw new Error('toothGrowth.json does not hold the 60 rows and the rows used.');
   return reference;
 }
 

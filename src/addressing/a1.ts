@@ -91,7 +91,7 @@ export function parseRange(text: string, defaultSheet: string): RangeRef | undef
   const { sheet, address } = splitSheet(text.trim());
   const parts = address.split(':');
   if (parts.length > 2) return undefined;
-  const bounds = parts.length === 2 ? columnBounds(parts[0], parts[1]) ?? cellBounds(parts[0], parts[1]) : cellBounds(parts[0], parts[0]);
+  const bounds = parts.length === 2 ? (columnBounds(parts[0], parts[1]) ?? cellBounds(parts[0], parts[1])) : cellBounds(parts[0], parts[0]);
   return bounds && { sheet: sheet ?? defaultSheet, ...bounds };
 }
 

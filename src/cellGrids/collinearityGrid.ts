@@ -18,9 +18,5 @@ export function collinearityGrid(result: Collinearity): Grid {
   ];
   const condition: GridCell[] = ['Condition number', finiteOrBlank(result.conditionNumber), conditionReading(result.conditionNumber)];
   if (result.hasIntercept) return [[...COLLINEARITY_HEADER], ...result.terms.map(termRow), condition];
-  return [
-    [...NO_INTERCEPT_COLLINEARITY_HEADER],
-    ...result.terms.map((t) => [...termRow(t), finiteOrBlank(t.uncenteredVif ?? Number.NaN)]),
-    [...condition, ''],
-  ];
+  return [[...NO_INTERCEPT_COLLINEARITY_HEADER], ...result.terms.map((t) => [...termRow(t), finiteOrBlank(t.uncenteredVif ?? Number.NaN)]), [...condition, '']];
 }

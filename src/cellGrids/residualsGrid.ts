@@ -1,18 +1,7 @@
 import type { DiagnosticFlag, ModelFrame, ResidualDiagnostics, RowDiagnostics, UndefinedReason } from '../engine';
 import { finiteOrBlank, type Grid } from './gridCell';
 
-export const RESIDUALS_HEADER = [
-  'Row',
-  'Observed',
-  'Fitted',
-  'Residual',
-  'Standardized',
-  'Studentized',
-  'Leverage',
-  "Cook's distance",
-  'DFFITS',
-  'Flag',
-];
+export const RESIDUALS_HEADER = ['Row', 'Observed', 'Fitted', 'Residual', 'Standardized', 'Studentized', 'Leverage', "Cook's distance", 'DFFITS', 'Flag'];
 
 const FLAG_TEXT: Record<DiagnosticFlag, string> = {
   'high-leverage': 'high leverage',

@@ -22,10 +22,7 @@ export function compareNested(data: NestedData, settings?: FitSettings): NestedC
   const base = solveModel({ y: data.y, x: data.base, weights: data.weights }, resolved);
   const dfNumerator = full.fit.rank - base.fit.rank;
   if (dfNumerator <= 0) {
-    throw new EngineError(
-      'nothing-added',
-      'The added columns are combinations of the base columns, so they cannot change the fit: there is nothing to test.',
-    );
+    throw new EngineError('nothing-added', 'The added columns are combinations of the base columns, so they cannot change the fit: there is nothing to test.');
   }
 
   const known = resolved.knownSigma;

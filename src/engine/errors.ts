@@ -3,15 +3,7 @@
  * to their own presentation; the message is already written for the person at the keyboard.
  */
 export type EngineErrorCode =
-  | 'shape'
-  | 'non-finite'
-  | 'bad-weight'
-  | 'bad-setting'
-  | 'no-residual-df'
-  | 'nothing-added'
-  | 'bad-value'
-  | 'unknown-level'
-  | 'no-rows';
+  'shape' | 'non-finite' | 'bad-weight' | 'bad-setting' | 'no-residual-df' | 'nothing-added' | 'bad-value' | 'unknown-level' | 'no-rows';
 
 export class EngineError extends Error {
   readonly code: EngineErrorCode;

@@ -64,13 +64,7 @@ function solveUncached(data: ModelData, resolved: ResolvedSettings): SolvedModel
  * Inference from a factorization and the rows' totals: shared by the in-memory fit and the
  * streamed one, whose factorization stands in for rows it no longer holds.
  */
-export function assembleFit(
-  solution: LeastSquaresSolution,
-  resolved: ResolvedSettings,
-  totals: RowTotals,
-  fitted: number[],
-  residuals: number[],
-): SolvedModel {
+export function assembleFit(solution: LeastSquaresSolution, resolved: ResolvedSettings, totals: RowTotals, fitted: number[], residuals: number[]): SolvedModel {
   const { design } = solution;
   const n = totals.n;
   const q = design.matrix.cols;
@@ -79,8 +73,7 @@ export function assembleFit(
   if (residualDf <= 0) {
     throw new EngineError(
       'no-residual-df',
-      `${n} rows cannot estimate ${rank} parameters with any left over to measure the noise: ` +
-        'the model needs more rows than parameters.',
+      `${n} rows cannot estimate ${rank} parameters with any left over to measure the noise: ` + 'the model needs more rows than parameters.',
     );
   }
 

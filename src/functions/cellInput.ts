@@ -132,7 +132,8 @@ export function parseSettings(levelArg: unknown, interceptArg: unknown, sigmaArg
  * error rather than a second way of saying "estimate".
  */
 function parseNoiseSd(sigma: unknown): number | undefined {
-  const verdict: NoiseSdVerdict = typeof sigma === 'number' || typeof sigma === 'string' ? judgeNoiseSd(sigma) : isUnset(sigma) ? { kind: 'estimate' } : { kind: 'not-a-number' };
+  const verdict: NoiseSdVerdict =
+    typeof sigma === 'number' || typeof sigma === 'string' ? judgeNoiseSd(sigma) : isUnset(sigma) ? { kind: 'estimate' } : { kind: 'not-a-number' };
   switch (verdict.kind) {
     case 'estimate':
       return undefined;
@@ -141,7 +142,10 @@ function parseNoiseSd(sigma: unknown): number | undefined {
     case 'zero':
       throw new EngineError('bad-setting', 'noise_sd is 0, but a noise standard deviation must be positive: leave noise_sd empty to estimate σ from the data.');
     case 'decimal-comma':
-      throw new EngineError('bad-setting', `noise_sd must be a number written with a point as the decimal separator, such as 0.35; got the text ${shown(sigma)}.`);
+      throw new EngineError(
+        'bad-setting',
+        `noise_sd must be a number written with a point as the decimal separator, such as 0.35; got the text ${shown(sigma)}.`,
+      );
     default:
       throw new EngineError('bad-setting', `noise_sd must be a positive number, or left empty to estimate σ; got ${shown(sigma)}.`);
   }

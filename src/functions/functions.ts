@@ -9,7 +9,16 @@
  * @requiresParameterAddresses it carries each argument's worksheet address, so rows and cells are
  * named as the user reads them (functions.json never lists it as a parameter).
  */
-import { compareCandidates, compareNested, fitModel, predict as predictRows, residualDiagnostics, assumptionChecks, collinearity as collinearityOf, normalScores } from '../engine';
+import {
+  compareCandidates,
+  compareNested,
+  fitModel,
+  predict as predictRows,
+  residualDiagnostics,
+  assumptionChecks,
+  collinearity as collinearityOf,
+  normalScores,
+} from '../engine';
 import { guarded } from './cellError';
 import type { RangeArgument } from './cellInput';
 import { toCellGrid } from './cellInput';
@@ -51,7 +60,12 @@ interface SettingsAt {
  * response, the predictor blocks (with their argument positions) and the settings read into a
  * model, each range located on its worksheet.
  */
-function requestOf(response: any[][], blocks: { range: any[][]; argument: string; index: number }[], settings: SettingsAt, invocation: Invocation): ModelRequest {
+function requestOf(
+  response: any[][],
+  blocks: { range: any[][]; argument: string; index: number }[],
+  settings: SettingsAt,
+  invocation: Invocation,
+): ModelRequest {
   const at = argumentOrigins(invocation);
   return readModel(
     response as RangeArgument,

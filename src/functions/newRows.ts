@@ -15,7 +15,10 @@ export function readNewRows(grid: CellGrid, frame: ModelFrame, origin?: RangeOri
   if (grid.length === 0) throw new EngineError('shape', 'new_rows is empty: select the rows to predict.');
   grid.forEach((row, i) => {
     if (row.length !== width) {
-      throw new EngineError('shape', `new_rows row ${rowNumber(origin, i)} has ${row.length} columns; predictors has ${width}. Lay new rows out like predictors.`);
+      throw new EngineError(
+        'shape',
+        `new_rows row ${rowNumber(origin, i)} has ${row.length} columns; predictors has ${width}. Lay new rows out like predictors.`,
+      );
     }
   });
   const repeatsHeader = (row: CellGrid[number]): boolean =>

@@ -58,18 +58,24 @@ export function App() {
   // Checked as the user types, by the rule noise_sd follows in the cells.
   const sigmaProblem = noiseSdProblem(choices.knownSigma);
 
-  const useSelection = (field: 'response' | 'predictors' | 'weights' | 'newRows', append = false) => async () => {
-    try {
-      const areas = await selectedAreas();
-      const problem = singleAreaProblem(field, areas);
-      setProblems((found) => [...found.filter((p) => p.field !== field), ...(problem === undefined ? [] : [problem])]);
-      if (problem !== undefined) return;
-      const address = areas.join(',');
-      setChoices((c) => ({ ...c, [field]: append && c[field].trim() !== '' ? `${c[field]},${address}` : address, ...(field === 'predictors' ? { added: [] } : {}) }));
-    } catch (error) {
-      setStatus({ kind: 'failed', message: failure(error) });
-    }
-  };
+  const useSelection =
+    (field: 'response' | 'predictors' | 'weights' | 'newRows', append = false) =>
+    async () => {
+      try {
+        const areas = await selectedAreas();
+        const problem = singleAreaProblem(field, areas);
+        setProblems((found) => [...found.filter((p) => p.field !== field), ...(problem === undefined ? [] : [problem])]);
+        if (problem !== undefined) return;
+        const address = areas.join(',');
+        setChoices((c) => ({
+          ...c,
+          [field]: append && c[field].trim() !== '' ? `${c[field]},${address}` : address,
+          ...(field === 'predictors' ? { added: [] } : {}),
+        }));
+      } catch (error) {
+        setStatus({ kind: 'failed', message: failure(error) });
+      }
+    };
 
   /** The choices with whole columns clipped to the rows in use (the fields show it), resolved to ranges. */
   const resolveChosen = async (): Promise<{ ranges: ResolvedRanges; chosen: PaneChoices } | undefined> => {
@@ -156,12 +162,18 @@ export function App() {
       if ('kind' in written && current.kind === 'streamed') {
         const valuesReport = await writeValuesReport(ranges, chosen, written, current.dataRows);
         setSaved(valuesReport);
-        setStatus({ kind: 'done', message: `Report written to the new sheet "${valuesReport.sheetName}" as values: the data are too large for live formulas. Use Refresh after the data change.` });
+        setStatus({
+          kind: 'done',
+          message: `Report written to the new sheet "${valuesReport.sheetName}" as values: the data are too large for live formulas. Use Refresh after the data change.`,
+        });
         return;
       }
       if ('kind' in written) return;
       const name = await writeReport((sheetName) => planReport({ sheetName, ranges, choices: chosen, analysis: written, writtenAt: new Date() }));
-      setStatus({ kind: 'done', message: `Report written to the new sheet "${name}". Its formulas stay live: edit the data or its settings cells and it recalculates.` });
+      setStatus({
+        kind: 'done',
+        message: `Report written to the new sheet "${name}". Its formulas stay live: edit the data or its settings cells and it recalculates.`,
+      });
     } catch (error) {
       setStatus({ kind: 'failed', message: `No report was written: ${failure(error)}` });
     }
@@ -200,7 +212,15 @@ export function App() {
       <h1>Plumbline</h1>
       <section aria-labelledby="data-heading">
         <h2 id="data-heading">Data</h2>
-        <RangeField id="response" label="Response (one column)" hint="Include the header cell to name it." value={choices.response} problem={problemFor('response')} onChange={(response) => update({ response })} onUseSelection={useSelection('response')} />
+        <RangeField
+          id="response"
+          label="Response (one column)"
+          hint="Include the header cell to name it."
+          value={choices.response}
+          problem={problemFor('response')}
+          onChange={(response) => update({ response })}
+          onUseSelection={useSelection('response')}
+        />
         <RangeField
           id="predictors"
           label="Predictors"
@@ -226,18 +246,40 @@ export function App() {
             {analysis}
           </p>
         )}
-        {typeof analysis === 'object' && ('kind' in analysis ? data?.kind === 'streamed' && <StreamedSummary analysis={analysis} dataRows={data.dataRows} /> : <DataSummary analysis={analysis} />)}
+        {typeof analysis === 'object' &&
+          ('kind' in analysis ? (
+            data?.kind === 'streamed' && <StreamedSummary analysis={analysis} dataRows={data.dataRows} />
+          ) : (
+            <DataSummary analysis={analysis} />
+          ))}
       </section>
 
       <section aria-labelledby="settings-heading">
         <h2 id="settings-heading">Settings</h2>
         <div class="field">
           <label for="level">Confidence level</label>
-          <input id="level" type="number" min="0.5" max="0.999" step="0.01" value={choices.level} onChange={(e) => update({ level: Number((e.currentTarget as HTMLInputElement).value) })} />
-          {problemFor('level') && <p class="problem" role="alert">{problemFor('level')}</p>}
+          <input
+            id="level"
+            type="number"
+            min="0.5"
+            max="0.999"
+            step="0.01"
+            value={choices.level}
+            onChange={(e) => update({ level: Number((e.currentTarget as HTMLInputElement).value) })}
+          />
+          {problemFor('level') && (
+            <p class="problem" role="alert">
+              {problemFor('level')}
+            </p>
+          )}
         </div>
         <div class="field checkbox">
-          <input id="intercept" type="checkbox" checked={choices.intercept} onChange={(e) => update({ intercept: (e.currentTarget as HTMLInputElement).checked })} />
+          <input
+            id="intercept"
+            type="checkbox"
+            checked={choices.intercept}
+            onChange={(e) => update({ intercept: (e.currentTarget as HTMLInputElement).checked })}
+          />
           <label for="intercept">Fit an intercept</label>
         </div>
         <div class="field">
@@ -259,14 +301,26 @@ export function App() {
         </div>
         <div class="field">
           <label for="robust">Standard errors</label>
-          <select id="robust" value={choices.robust} onChange={(e) => update({ robust: (e.currentTarget as HTMLSelectElement).value as PaneChoices['robust'] })}>
+          <select
+            id="robust"
+            value={choices.robust}
+            onChange={(e) => update({ robust: (e.currentTarget as HTMLSelectElement).value as PaneChoices['robust'] })}
+          >
             <option value="classical">Classical (constant spread)</option>
             <option value="HC3">Robust HC3 (recommended when spread varies)</option>
             <option value="HC1">Robust HC1</option>
             <option value="HC0">Robust HC0</option>
           </select>
         </div>
-        <RangeField id="weights" label="Weights (optional)" hint="A column of positive weights with the response's rows." value={choices.weights} problem={problemFor('weights')} onChange={(weights) => update({ weights })} onUseSelection={useSelection('weights')} />
+        <RangeField
+          id="weights"
+          label="Weights (optional)"
+          hint="A column of positive weights with the response's rows."
+          value={choices.weights}
+          problem={problemFor('weights')}
+          onChange={(weights) => update({ weights })}
+          onUseSelection={useSelection('weights')}
+        />
       </section>
 
       <section aria-labelledby="compare-heading">
@@ -282,7 +336,11 @@ export function App() {
                   id={`added-${j}`}
                   type="checkbox"
                   checked={choices.added.includes(j)}
-                  onChange={(e) => update({ added: (e.currentTarget as HTMLInputElement).checked ? [...choices.added, j].sort((a, b) => a - b) : choices.added.filter((k) => k !== j) })}
+                  onChange={(e) =>
+                    update({
+                      added: (e.currentTarget as HTMLInputElement).checked ? [...choices.added, j].sort((a, b) => a - b) : choices.added.filter((k) => k !== j),
+                    })
+                  }
                 />
                 <label for={`added-${j}`}>{name}</label>
               </div>
@@ -293,7 +351,15 @@ export function App() {
 
       <section aria-labelledby="predict-heading">
         <h2 id="predict-heading">Predict</h2>
-        <RangeField id="new-rows" label="New rows (optional)" hint="Laid out like the predictors, with or without the header row." value={choices.newRows} problem={problemFor('newRows')} onChange={(newRows) => update({ newRows })} onUseSelection={useSelection('newRows')} />
+        <RangeField
+          id="new-rows"
+          label="New rows (optional)"
+          hint="Laid out like the predictors, with or without the header row."
+          value={choices.newRows}
+          problem={problemFor('newRows')}
+          onChange={(newRows) => update({ newRows })}
+          onUseSelection={useSelection('newRows')}
+        />
       </section>
 
       <section aria-labelledby="results-heading" aria-live="polite">
@@ -326,7 +392,8 @@ export function App() {
           )}
         </div>
         <p class="hint">
-          Write report adds a new sheet of live formulas (for large data, of values, which Refresh re-reads and rewrites). Freeze a copy turns the active report into plain values, for colleagues without Plumbline.
+          Write report adds a new sheet of live formulas (for large data, of values, which Refresh re-reads and rewrites). Freeze a copy turns the active report
+          into plain values, for colleagues without Plumbline.
         </p>
         {status.kind === 'done' && (
           <p class="done" role="status">

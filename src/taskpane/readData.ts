@@ -29,7 +29,12 @@ export function isLarge(ranges: ResolvedRanges): boolean {
  * Reads the chosen columns block by block. Small data are gathered into the grids the in-memory
  * analysis has always used; large data go block by block into the accumulator and are dropped.
  */
-export async function readData(ranges: ResolvedRanges, progress: (read: number, total: number) => void, signal: AbortSignal, stream = isLarge(ranges)): Promise<PaneData> {
+export async function readData(
+  ranges: ResolvedRanges,
+  progress: (read: number, total: number) => void,
+  signal: AbortSignal,
+  stream = isLarge(ranges),
+): Promise<PaneData> {
   const sources: BlockSources = { response: ranges.response, predictors: ranges.predictorColumns, weights: ranges.weights };
   return stream ? readStreamed(sources, progress, signal) : readCells(sources, progress, signal);
 }

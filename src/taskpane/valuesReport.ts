@@ -34,7 +34,12 @@ async function newRowPredictions(ranges: ResolvedRanges, analysis: StreamedAnaly
   return predictStreamed(joined, analysis);
 }
 
-export async function writeValuesReport(ranges: ResolvedRanges, choices: PaneChoices, analysis: StreamedAnalysis, dataRows: number): Promise<SavedValuesReport> {
+export async function writeValuesReport(
+  ranges: ResolvedRanges,
+  choices: PaneChoices,
+  analysis: StreamedAnalysis,
+  dataRows: number,
+): Promise<SavedValuesReport> {
   const predictions = await newRowPredictions(ranges, analysis);
   let cells: ReportCell[] = [];
   const sheetName = await writeReport((name) => {
@@ -53,17 +58,31 @@ export async function writeValuesReport(ranges: ResolvedRanges, choices: PaneCho
 }
 
 /** Re-reads the report's own ranges with its own choices and rewrites its cells in place. */
-export async function refreshValuesReport(saved: SavedValuesReport, progress: (read: number, total: number) => void, signal: AbortSignal): Promise<SavedValuesReport> {
+export async function refreshValuesReport(
+  saved: SavedValuesReport,
+  progress: (read: number, total: number) => void,
+  signal: AbortSignal,
+): Promise<SavedValuesReport> {
   const read = await readData(saved.ranges, progress, signal, true);
   if (read.kind !== 'streamed') throw new Error('unreachable: a forced streamed read came back as cells');
   const analysis = analyzeStreamed(read.data, saved.choices);
   if (analysis.fit === undefined) throw new Error(analysis.fitError ?? 'The data no longer give a fit.');
   const predictions = await newRowPredictions(saved.ranges, analysis);
-  const plan = planValuesReport({ sheetName: saved.sheetName, ranges: saved.ranges, choices: saved.choices, analysis, predictions, dataRows: read.dataRows, writtenAt: new Date() });
+  const plan = planValuesReport({
+    sheetName: saved.sheetName,
+    ranges: saved.ranges,
+    choices: saved.choices,
+    analysis,
+    predictions,
+    dataRows: read.dataRows,
+    writtenAt: new Date(),
+  });
   const fresh = newlyWrittenAddresses(saved.cells, plan.cells, saved.residualRows, analysis.fit.n);
   const occupied = await occupiedAddresses(saved.sheetName, fresh);
   if (occupied.length > 0) {
-    throw new Error(`Refresh would write over cells filled since the report was written (${occupied.slice(0, 3).join(', ')}${occupied.length > 3 ? ', …' : ''}). Move them, or write a new report.`);
+    throw new Error(
+      `Refresh would write over cells filled since the report was written (${occupied.slice(0, 3).join(', ')}${occupied.length > 3 ? ', …' : ''}). Move them, or write a new report.`,
+    );
   }
   // The table first: if it stops half way, the report's own cells still match the saved report.
   await clearResidualTable(saved.sheetName, saved.residualRows);
@@ -74,7 +93,9 @@ export async function refreshValuesReport(saved: SavedValuesReport, progress: (r
     // The error to report is the first one; a sheet deleted meanwhile has nothing left to clear.
     await clearResidualTable(saved.sheetName, Math.max(saved.residualRows, analysis.fit.n)).catch(() => undefined);
     const why = error instanceof ReadCancelled ? 'it was cancelled' : error instanceof Error ? error.message : String(error);
-    throw new Error(`Refresh stopped (${why}). The report keeps its previous results and its residual table was cleared: press Refresh again.`);
+    throw new Error(`Refresh stopped (${why}). The report keeps its previous results and its residual table was cleared: press Refresh again.`, {
+      cause: error,
+    });
   }
   await rewriteReport(saved.sheetName, saved.cells, plan);
   return { ...saved, cells: plan.cells, residualRows };

@@ -19,7 +19,15 @@ import {
 
 describe('cells and ranges', () => {
   it('converts column letters both ways across the one-, two- and three-letter boundaries', () => {
-    for (const [letters, index] of [['A', 0], ['Z', 25], ['AA', 26], ['AZ', 51], ['ZZ', 701], ['AAA', 702], ['XFD', 16383]] as const) {
+    for (const [letters, index] of [
+      ['A', 0],
+      ['Z', 25],
+      ['AA', 26],
+      ['AZ', 51],
+      ['ZZ', 701],
+      ['AAA', 702],
+      ['XFD', 16383],
+    ] as const) {
       expect(columnLetters(index)).toBe(letters);
       expect(columnIndex(letters)).toBe(index);
     }
@@ -61,7 +69,7 @@ describe('whole columns', () => {
 
 describe('multi-area addresses', () => {
   it('splits at commas outside quoted sheet names and trims the space Excel may put after them', () => {
-    expect(splitAreas("Sheet1!F3:F5, Sheet1!H:H")).toEqual(['Sheet1!F3:F5', 'Sheet1!H:H']);
+    expect(splitAreas('Sheet1!F3:F5, Sheet1!H:H')).toEqual(['Sheet1!F3:F5', 'Sheet1!H:H']);
     expect(splitAreas("'a, b'!A1,'a, b'!C1")).toEqual(["'a, b'!A1", "'a, b'!C1"]);
   });
 

@@ -118,7 +118,16 @@ describe('weights', () => {
 
 describe('degenerate input', () => {
   it('n ≤ q: no residual degrees of freedom is a clear error', () => {
-    expect(() => fitModel({ y: [1, 2, 3], x: [[1, 0], [2, 1], [3, 5]] })).toThrow(/more rows than parameters/);
+    expect(() =>
+      fitModel({
+        y: [1, 2, 3],
+        x: [
+          [1, 0],
+          [2, 1],
+          [3, 5],
+        ],
+      }),
+    ).toThrow(/more rows than parameters/);
   });
 
   it('a perfect fit has SE 0, infinite t, p 0, and NaN t where the estimate is exactly 0', () => {

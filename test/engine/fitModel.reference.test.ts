@@ -31,12 +31,18 @@ describe('agreement with ml-matrix on random well-conditioned data', () => {
     const reference = new QrDecomposition(design).solve(Matrix.columnVector(y)).to1DArray();
     fit.terms.forEach((t, j) => expect(relativeError(t.estimate, reference[j])).toBeLessThan(1e-9));
 
-    const residuals = Matrix.columnVector(y).sub(design.mmul(Matrix.columnVector(reference))).to1DArray();
+    const residuals = Matrix.columnVector(y)
+      .sub(design.mmul(Matrix.columnVector(reference)))
+      .to1DArray();
     const rss = residuals.reduce((s, r) => s + r * r, 0);
     const sigma2 = rss / (n - p - 1);
     const xtxInverse = inverse(design.transpose().mmul(design));
     fit.terms.forEach((t, j) => expect(relativeError(t.standardError, Math.sqrt(sigma2 * xtxInverse.get(j, j)))).toBeLessThan(1e-9));
-    fit.covariance.forEach((row, a) => row.forEach((v, b) => expect(Math.abs(v - sigma2 * xtxInverse.get(a, b))).toBeLessThan(1e-9 * sigma2 * Math.sqrt(xtxInverse.get(a, a) * xtxInverse.get(b, b)))));
+    fit.covariance.forEach((row, a) =>
+      row.forEach((v, b) =>
+        expect(Math.abs(v - sigma2 * xtxInverse.get(a, b))).toBeLessThan(1e-9 * sigma2 * Math.sqrt(xtxInverse.get(a, a) * xtxInverse.get(b, b))),
+      ),
+    );
     expect(relativeError(fit.rss, rss)).toBeLessThan(1e-9);
   });
 });

@@ -32,7 +32,9 @@ describe.skipIf(!available)('NIST StRD linear regression: certified values (sour
     const f = (v: number) => v.toFixed(1).padStart(6);
     const lines = [
       `${pad('dataset', 10)} ${pad('min LRE: coef', 14)} ${pad('std dev', 8)} ${pad('resid SD', 9)} R²`,
-      ...table.map((r) => `${pad(r.name, 10)} ${f(r.coefficients).padEnd(14)} ${f(r.standardDeviations).padEnd(8)} ${f(r.residualSd).padEnd(9)} ${f(r.rSquared)}`),
+      ...table.map(
+        (r) => `${pad(r.name, 10)} ${f(r.coefficients).padEnd(14)} ${f(r.standardDeviations).padEnd(8)} ${f(r.residualSd).padEnd(9)} ${f(r.rSquared)}`,
+      ),
     ];
     console.log(`NIST StRD LRE table (capped at 15)\n${lines.join('\n')}`);
   });

@@ -51,7 +51,10 @@ describe('predict', () => {
   it('with aliased terms predicts only where the answer does not depend on the aliasing', () => {
     const { y, x } = randomProblem(43, 20, 2);
     const withCopy = x.map((r) => [r[0], r[1], 2 * r[0]]);
-    const [consistent, inconsistent] = predict({ y, x: withCopy }, [[1, 2, 2], [1, 2, 5]]);
+    const [consistent, inconsistent] = predict({ y, x: withCopy }, [
+      [1, 2, 2],
+      [1, 2, 5],
+    ]);
     const [reference] = predict({ y, x }, [[1, 2]]);
     expect(consistent.estimate).toBeCloseTo(reference.estimate, 10);
     expect(consistent.newHigh).toBeCloseTo(reference.newHigh, 10);

@@ -32,7 +32,10 @@ describe('fit cache', () => {
 
   it('a recalculation that changes nothing refits nothing; a changed cell or setting refits once', () => {
     terms(yCells, xCells);
-    terms(yCells.map((r) => [...r]), xCells.map((r) => [...r]));
+    terms(
+      yCells.map((r) => [...r]),
+      xCells.map((r) => [...r]),
+    );
     expect(modelCache.stats().fits).toBe(1);
     const edited = yCells.map((r, i) => (i === 5 ? [(r[0] as number) + 1] : r));
     terms(edited, xCells);
@@ -49,7 +52,11 @@ describe('fit cache', () => {
   });
 
   it('stays within its entry bound', () => {
-    for (let k = 0; k < 80; k++) terms(yCells.map((r, i) => (i === 1 ? [k] : r)), xCells);
+    for (let k = 0; k < 80; k++)
+      terms(
+        yCells.map((r, i) => (i === 1 ? [k] : r)),
+        xCells,
+      );
     expect(modelCache.stats().fits).toBe(80);
     expect(modelCache.stats().entries).toBeLessThanOrEqual(64);
   });

@@ -87,7 +87,12 @@ describe('PLUMB.COLLINEARITY', () => {
 
   it('a perfectly collinear set: VIFs blank with the reason, condition number blank with "infinite"', () => {
     const { x } = randomProblem(72, 12, 2);
-    const grid = collinearity(columns(['a', 'b', 'a+b'], x.map((r) => [r[0], r[1], r[0] + r[1]])));
+    const grid = collinearity(
+      columns(
+        ['a', 'b', 'a+b'],
+        x.map((r) => [r[0], r[1], r[0] + r[1]]),
+      ),
+    );
     for (const row of grid.slice(1, -1)) {
       expect(row[1]).toBe('');
       expect(row[2]).toBe('perfectly collinear: an exact combination of the other terms');
@@ -132,7 +137,10 @@ describe('PLUMB.CHECKS', () => {
     const { y, x } = randomProblem(82, 20, 1);
     const planted = [...y];
     planted[9] += 12;
-    const yCells = column('Yield', planted.map((v, i) => (i === 2 ? null : v)));
+    const yCells = column(
+      'Yield',
+      planted.map((v, i) => (i === 2 ? null : v)),
+    );
     const grid = checks(yCells, columns(['Dose'], x));
     // Data index 9 is the 9th row used (index 2 is skipped) and sits in range row 11 under the header.
     expect(valueOf(grid, 'at row')).toBe(11);
@@ -141,7 +149,13 @@ describe('PLUMB.CHECKS', () => {
 
   it('an exact fit: statistics blank, and every blank has a reading beside it', () => {
     const x = [[1], [2], [3], [4], [6]];
-    const grid = checks(column(undefined, x.map(([v]) => 2 + 0.5 * v)), x);
+    const grid = checks(
+      column(
+        undefined,
+        x.map(([v]) => 2 + 0.5 * v),
+      ),
+      x,
+    );
     for (const label of ['Durbin–Watson', 'Breusch–Pagan LM', 'Jarque–Bera', 'JB p-value', "Largest Cook's distance"]) {
       expect(valueOf(grid, label)).toBe('');
     }
@@ -153,7 +167,13 @@ describe('PLUMB.CHECKS', () => {
 
   it('a collinear term: Largest VIF blank, the term and the reason beside it', () => {
     const { y, x } = randomProblem(83, 15, 2);
-    const grid = checks(column('y', y), columns(['a', 'b', 'c'], x.map((r) => [r[0], r[1], 2 * r[0]])));
+    const grid = checks(
+      column('y', y),
+      columns(
+        ['a', 'b', 'c'],
+        x.map((r) => [r[0], r[1], 2 * r[0]]),
+      ),
+    );
     expect(valueOf(grid, 'Largest VIF')).toBe('');
     expect(valueOf(grid, 'for term')).toBe('a (perfectly collinear: an exact combination of the other terms)');
     expectOnlyFiniteNumbersOrText(grid, 2);

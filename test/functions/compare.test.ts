@@ -22,11 +22,7 @@ const xCells = [['Steep', 'Temp', 'Origin'], ...x.map((r, i) => [...r, origin[i]
 
 /** Steep and the two Origin indicators (Java is the reference level, first in sorted order). */
 function coded(i: number, steep: boolean, temp: boolean, withOrigin: boolean): number[] {
-  return [
-    ...(steep ? [x[i][0]] : []),
-    ...(temp ? [x[i][1]] : []),
-    ...(withOrigin ? [origin[i] === 'Kenya' ? 1 : 0, origin[i] === 'Peru' ? 1 : 0] : []),
-  ];
+  return [...(steep ? [x[i][0]] : []), ...(temp ? [x[i][1]] : []), ...(withOrigin ? [origin[i] === 'Kenya' ? 1 : 0, origin[i] === 'Peru' ? 1 : 0] : [])];
 }
 
 describe('PLUMB.COMPARE', () => {
@@ -92,7 +88,10 @@ describe('PLUMB.COMPARE input errors', () => {
     ['an omitted grid', null, 'candidates is empty: give one row per candidate model, with a 1 or 0 for each of the 3 columns of predictors.'],
     [
       'a 2',
-      [[1, 0, 0], [1, 2, 0]],
+      [
+        [1, 0, 0],
+        [1, 2, 0],
+      ],
       'candidates row 2, column 2 ("Temp") holds 2: use 1 or TRUE to include that column of predictors, 0 or FALSE to leave it out.',
     ],
     [
@@ -113,7 +112,12 @@ describe('PLUMB.COMPARE input errors', () => {
   });
 
   it('names the candidate that cannot be fitted', () => {
-    const error = thrownBy(() => compare(yCells.slice(0, 4), xCells.slice(0, 4), [[1, 0, 0], [1, 1, 1]]));
+    const error = thrownBy(() =>
+      compare(yCells.slice(0, 4), xCells.slice(0, 4), [
+        [1, 0, 0],
+        [1, 1, 1],
+      ]),
+    );
     expect(error.message).toBe(
       'Candidate 2: 3 rows cannot estimate 3 parameters with any left over to measure the noise: the model needs more rows than parameters.',
     );

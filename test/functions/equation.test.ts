@@ -24,7 +24,15 @@ describe('PLUMB.EQUATION', () => {
   });
 
   it('writes negative coefficients with a minus sign, the first one included', () => {
-    expect(equation(column('Yield', y.map((v) => -v)), column('Grind size', x))).toEqual([['Fitted [Yield] = −3.00 − 0.500·[Grind size]']]);
+    expect(
+      equation(
+        column(
+          'Yield',
+          y.map((v) => -v),
+        ),
+        column('Grind size', x),
+      ),
+    ).toEqual([['Fitted [Yield] = −3.00 − 0.500·[Grind size]']]);
   });
 
   it('refuses bad settings as every PLUMB function does', () => {

@@ -21,7 +21,16 @@ const ERROR_FORMS: [string, (code: string, errorType: string) => unknown][] = [
 
 // Invented data (no source): six rows of yield against steep time and temperature.
 const y = [['Yield'], [10.1], [11.3], [12.2], [12.9], [14.4], [15.1], [15.8]];
-const x = [['Steep', 'Temp'], [12, 90], [14, 91], [16, 90], [18, 93], [20, 92], [22, 95], [24, 94]];
+const x = [
+  ['Steep', 'Temp'],
+  [12, 90],
+  [14, 91],
+  [16, 90],
+  [18, 93],
+  [20, 92],
+  [22, 95],
+  [24, 94],
+];
 const without = (grid: unknown[][], row: number) => grid.filter((_, i) => i !== row);
 const addresses = { parameterAddresses: ['Data!B4:B11', 'Data!C4:D11', '', '', '', 'Data!F4:F11', ''] };
 
@@ -54,9 +63,13 @@ describe.each(ERROR_FORMS)('an error argument as %s', (_, errorOf) => {
 
   it('#REF! in response and #NUM! in weights are named by address too', () => {
     const yRef = y.map((r, i) => (i === 1 ? [errorOf('#REF!', 'Ref')] : r));
-    expect(thrownBy(() => terms(yRef, x, null, null, null, undefined, null, addresses)).message).toMatch(/^response cell Data!B5 \("Yield"\) holds the error #REF!/);
+    expect(thrownBy(() => terms(yRef, x, null, null, null, undefined, null, addresses)).message).toMatch(
+      /^response cell Data!B5 \("Yield"\) holds the error #REF!/,
+    );
     const weights = y.map((_, i) => [i === 0 ? 'w' : i === 6 ? errorOf('#NUM!', 'Num') : 1]);
-    expect(thrownBy(() => terms(y, x, null, null, null, weights, null, addresses)).message).toMatch(/^weights cell Data!F10 \("weight"\) holds the error #NUM!/);
+    expect(thrownBy(() => terms(y, x, null, null, null, weights, null, addresses)).message).toMatch(
+      /^weights cell Data!F10 \("weight"\) holds the error #NUM!/,
+    );
   });
 
   it('an error in a setting gives #VALUE! naming the setting', () => {
@@ -74,7 +87,10 @@ describe.each(ERROR_FORMS)('an error argument as %s', (_, errorOf) => {
   });
 
   it('#N/A in a row of new_rows leaves that prediction blank; #DIV/0! there is named by address', () => {
-    const newX = [[13, 90], [errorOf('#N/A', 'NotAvailable'), 91]];
+    const newX = [
+      [13, 90],
+      [errorOf('#N/A', 'NotAvailable'), 91],
+    ];
     const grid = predict(y, x, newX);
     expect(grid[1].every((cell) => typeof cell === 'number')).toBe(true);
     expect(grid[2]).toEqual(['', '', '', '', '']);
@@ -95,7 +111,16 @@ describe('an argument that is no error value', () => {
   it('an object that is neither an error nor a value is #VALUE!, quoted as such in a setting', () => {
     // An entity data type in a cell (custom-functions-data-types-concepts) is nothing a fit can use.
     const entity = { type: 'Entity', text: 'Kenya' };
-    expect(thrownBy(() => terms(y, x, entity)).message).toBe('level must be a number between 0 and 1, such as 0.95 for 95%; got a value that is neither a number nor text.');
-    expect(thrownBy(() => terms(y.map((r, i) => (i === 2 ? [entity] : r)), x)).message).toMatch(/^response row 3 \("Yield"\) holds the error #VALUE!/);
+    expect(thrownBy(() => terms(y, x, entity)).message).toBe(
+      'level must be a number between 0 and 1, such as 0.95 for 95%; got a value that is neither a number nor text.',
+    );
+    expect(
+      thrownBy(() =>
+        terms(
+          y.map((r, i) => (i === 2 ? [entity] : r)),
+          x,
+        ),
+      ).message,
+    ).toMatch(/^response row 3 \("Yield"\) holds the error #VALUE!/);
   });
 });

@@ -75,11 +75,16 @@ describe.skipIf(!strdAvailable())('NIST StRD through the cells (source: NIST StR
 });
 
 describe('delivery-time example (Montgomery, Peck & Vining, Examples 3.1–3.3; from memory)', () => {
-  const time = [16.68, 11.5, 12.03, 14.88, 13.75, 18.11, 8, 17.83, 79.24, 21.5, 40.33, 21, 13.5, 19.75, 24, 29, 15.35, 19, 9.5, 35.1, 17.9, 52.32, 18.75, 19.83, 10.75];
+  const time = [
+    16.68, 11.5, 12.03, 14.88, 13.75, 18.11, 8, 17.83, 79.24, 21.5, 40.33, 21, 13.5, 19.75, 24, 29, 15.35, 19, 9.5, 35.1, 17.9, 52.32, 18.75, 19.83, 10.75,
+  ];
   const cases = [7, 3, 3, 4, 6, 7, 2, 7, 30, 5, 16, 10, 4, 6, 9, 10, 6, 7, 3, 17, 10, 26, 9, 8, 4];
   const distance = [560, 220, 340, 80, 150, 330, 110, 210, 1460, 605, 688, 215, 255, 462, 448, 776, 200, 132, 36, 770, 140, 810, 450, 635, 150];
   const y = column('Delivery time', time);
-  const x = columns(['Cases', 'Distance'], cases.map((c, i) => [c, distance[i]]));
+  const x = columns(
+    ['Cases', 'Distance'],
+    cases.map((c, i) => [c, distance[i]]),
+  );
 
   it('reproduces the printed coefficient table: estimates, standard errors and t values', () => {
     const table = terms(y, x);
@@ -118,7 +123,10 @@ describe('delivery-time example (Montgomery, Peck & Vining, Examples 3.1–3.3; 
   it('PREDICT at 8 cases and 275 ft gives the printed estimate and intervals, with a header row', () => {
     // Examples 3.9–3.12 of the same text (from memory): ŷ = 19.22, mean 95% CI 17.66 to 20.78
     // (the text rounds intermediate results, hence the 0.02 tolerance), new-value 95% PI 12.28 to 26.16.
-    const out = predict(y, x, [['Cases', 'Distance'], [8, 275]]);
+    const out = predict(y, x, [
+      ['Cases', 'Distance'],
+      [8, 275],
+    ]);
     expect(out[0]).toEqual(['Prediction', 'Mean low', 'Mean high', 'New low', 'New high']);
     const [estimate, meanLow, meanHigh, newLow, newHigh] = out[1] as number[];
     expect(estimate).toBeCloseTo(19.22, 2);

@@ -45,7 +45,24 @@ function materialize(value: unknown): unknown {
   return value;
 }
 
-const EXTREME_NUMBERS = [0, -0, 1, -1, 1e308, -1e308, 1e-308, -1e-308, Number.MAX_VALUE, -Number.MAX_VALUE, Number.MIN_VALUE, 1e300, -1e300, 1e-300, 2 ** 53, 45000];
+const EXTREME_NUMBERS = [
+  0,
+  -0,
+  1,
+  -1,
+  1e308,
+  -1e308,
+  1e-308,
+  -1e-308,
+  Number.MAX_VALUE,
+  -Number.MAX_VALUE,
+  Number.MIN_VALUE,
+  1e300,
+  -1e300,
+  1e-300,
+  2 ** 53,
+  45000,
+];
 const ERROR_CODES = ['#DIV/0!', '#N/A', '#VALUE!', '#REF!', '#NAME?', '#NUM!', '#NULL!', '#SPILL!', '#CALC!', '#GETTING_DATA', '#BUSY!'];
 
 const blank = fc.constantFrom<unknown>('', null, '   ');
@@ -109,7 +126,14 @@ function gridArb(kinds: readonly ColumnKind[], rows: number): fc.Arbitrary<unkno
 }
 
 /** Shapes a worksheet selection can take by mistake, applied to one range of a case. */
-type Mangle = { kind: 'none' } | { kind: 'empty' } | { kind: 'emptyRow' } | { kind: 'dropRows'; count: number } | { kind: 'addRow' } | { kind: 'ragged'; row: number; delta: number } | { kind: 'transpose' };
+type Mangle =
+  | { kind: 'none' }
+  | { kind: 'empty' }
+  | { kind: 'emptyRow' }
+  | { kind: 'dropRows'; count: number }
+  | { kind: 'addRow' }
+  | { kind: 'ragged'; row: number; delta: number }
+  | { kind: 'transpose' };
 const mangle: fc.Arbitrary<Mangle> = fc.oneof(
   { weight: 40, arbitrary: fc.constant<Mangle>({ kind: 'none' }) },
   { weight: 1, arbitrary: fc.constant<Mangle>({ kind: 'empty' }) },
@@ -195,15 +219,40 @@ const fuzzCase: fc.Arbitrary<FuzzCase> = fc
       y: withHeader(gridArb([shape.yKind], shape.rows), 1, 'y'),
       x: withHeader(gridArb(shape.xKinds, shape.rows), width, 'x'),
       added: withHeader(gridArb(shape.addedKinds, shape.rows), shape.addedKinds.length, 'z'),
-      newX: fc.tuple(newWidth, fc.integer({ min: 0, max: 3 })).chain(([w, r]) => gridArb(Array.from({ length: w }, (_, j) => shape.xKinds[j] ?? 'clean'), r)),
-      candidates: fc.integer({ min: 0, max: 3 }).chain((r) => fc.array(fc.array(candidateCell, { minLength: width, maxLength: width }), { minLength: r, maxLength: r })),
+      newX: fc.tuple(newWidth, fc.integer({ min: 0, max: 3 })).chain(([w, r]) =>
+        gridArb(
+          Array.from({ length: w }, (_, j) => shape.xKinds[j] ?? 'clean'),
+          r,
+        ),
+      ),
+      candidates: fc
+        .integer({ min: 0, max: 3 })
+        .chain((r) => fc.array(fc.array(candidateCell, { minLength: width, maxLength: width }), { minLength: r, maxLength: r })),
       mangles: fc.tuple(mangle, mangle, mangle, mangle, mangle, mangle),
       settings: fc.record({
-        level: settingArb(fc.oneof({ weight: 4, arbitrary: fc.constantFrom<unknown>(0.95, 0.9, 0.5, 0.999999, 1e-12, 0) }, fc.constantFrom<unknown>(1, 95, -0.5, '95%', true), fc.double())),
+        level: settingArb(
+          fc.oneof(
+            { weight: 4, arbitrary: fc.constantFrom<unknown>(0.95, 0.9, 0.5, 0.999999, 1e-12, 0) },
+            fc.constantFrom<unknown>(1, 95, -0.5, '95%', true),
+            fc.double(),
+          ),
+        ),
         intercept: settingArb(fc.constantFrom<unknown>(true, false, false, 1, 0, 'yes')),
-        knownSigma: settingArb(fc.oneof(fc.constantFrom<unknown>(1, 0.5, 0, -1, 1e308, 1e-308, 5e-324, Number.NaN, Number.POSITIVE_INFINITY, 'one'), { weight: 3, arbitrary: fc.double({ min: 1e-3, max: 100, noNaN: true }) })),
+        knownSigma: settingArb(
+          fc.oneof(fc.constantFrom<unknown>(1, 0.5, 0, -1, 1e308, 1e-308, 5e-324, Number.NaN, Number.POSITIVE_INFINITY, 'one'), {
+            weight: 3,
+            arbitrary: fc.double({ min: 1e-3, max: 100, noNaN: true }),
+          }),
+        ),
         weights: shape.weighted
-          ? withHeader(fc.array(positiveWeight.map((w) => [w]), { minLength: shape.rows, maxLength: shape.rows }), 1, 'w')
+          ? withHeader(
+              fc.array(
+                positiveWeight.map((w) => [w]),
+                { minLength: shape.rows, maxLength: shape.rows },
+              ),
+              1,
+              'w',
+            )
           : fc.constantFrom<unknown>(null, null, null, undefined, [], [[]]),
         robust: settingArb(fc.constantFrom<unknown>(true, false, 1, 0, 'HC0', 'hc1', ' HC3 ', 'classical', 'HC0', 'HC4')),
       }),
@@ -215,7 +264,10 @@ const fuzzCase: fc.Arbitrary<FuzzCase> = fc
     added: applyMangle(added, mangles[2]),
     newX: applyMangle(newX, mangles[3]),
     candidates: applyMangle(candidates, mangles[4]),
-    settings: { ...settings, weights: Array.isArray(settings.weights) && settings.weights.length > 0 ? applyMangle(settings.weights as unknown[][], mangles[5]) : settings.weights },
+    settings: {
+      ...settings,
+      weights: Array.isArray(settings.weights) && settings.weights.length > 0 ? applyMangle(settings.weights as unknown[][], mangles[5]) : settings.weights,
+    },
   }));
 
 type CellFunction = (c: FuzzCase) => unknown;
@@ -273,7 +325,8 @@ function problemWith(outcome: { returned: unknown } | { thrown: unknown }): stri
     for (let j = 0; j < width; j++) {
       const cell: unknown = row[j];
       const ok = (typeof cell === 'string' && cell.length <= CELL_TEXT_LIMIT) || (typeof cell === 'number' && Number.isFinite(cell));
-      if (!ok) return `cell (${i + 1}, ${j + 1}) is ${String(cell).slice(0, 80)} (${typeof cell}${typeof cell === 'string' ? ` of ${cell.length} characters` : ''})`;
+      if (!ok)
+        return `cell (${i + 1}, ${j + 1}) is ${String(cell).slice(0, 80)} (${typeof cell}${typeof cell === 'string' ? ` of ${cell.length} characters` : ''})`;
     }
   }
   return undefined;
@@ -284,49 +337,54 @@ const counts = new Map<string, { cases: number; grids: number; errors: number; s
 describe(`fuzz: every PLUMB function returns a clean grid or a clear #VALUE! (seed ${seed})`, () => {
   afterAll(() => {
     const total = [...counts.values()].reduce((sum, c) => sum + c.cases, 0);
-    const lines = [...counts].map(([name, c]) => `  ${name.padEnd(13)} ${c.cases} cases (${c.grids} grids, ${c.errors} errors), slowest call ${c.slowestMs.toFixed(1)} ms`);
+    const lines = [...counts].map(
+      ([name, c]) => `  ${name.padEnd(13)} ${c.cases} cases (${c.grids} grids, ${c.errors} errors), slowest call ${c.slowestMs.toFixed(1)} ms`,
+    );
     console.log(`fuzz seed ${seed}: ${total} cases\n${lines.join('\n')}`);
   });
 
-  it.each(FUNCTIONS.map(([name, call], i) => ({ name, call, functionSeed: seed + i })))('PLUMB.$name (fast-check seed $functionSeed)', ({ name, call, functionSeed }) => {
-    const tally = { cases: 0, grids: 0, errors: 0, slowestMs: 0 };
-    counts.set(name, tally);
-    fc.assert(
-      fc.property(fuzzCase, (c) => {
-        tally.cases++;
-        const real: FuzzCase = {
-          y: materialize(c.y) as unknown[][],
-          x: materialize(c.x) as unknown[][],
-          added: materialize(c.added) as unknown[][],
-          newX: materialize(c.newX) as unknown[][],
-          candidates: materialize(c.candidates) as unknown[][],
-          settings: {
-            level: materialize(c.settings.level),
-            intercept: materialize(c.settings.intercept),
-            knownSigma: materialize(c.settings.knownSigma),
-            weights: materialize(c.settings.weights),
-            robust: materialize(c.settings.robust),
-          },
-        };
-        const start = performance.now();
-        let outcome: { returned: unknown } | { thrown: unknown };
-        try {
-          outcome = { returned: call(real) };
-        } catch (thrown) {
-          outcome = { thrown };
-        }
-        const ms = performance.now() - start;
-        tally.slowestMs = Math.max(tally.slowestMs, ms);
-        const problem = problemWith(outcome);
-        if (problem !== undefined) throw new Error(`PLUMB.${name}: ${problem}; PLUMB_FUZZ_SEED=${seed}`);
-        if ('returned' in outcome) tally.grids++;
-        else tally.errors++;
-      }),
-      { seed: functionSeed, numRuns: RUNS_PER_FUNCTION },
-    );
-    // Shrinking replays cases, so at least the requested runs were made when the property held.
-    expect(tally.cases).toBe(RUNS_PER_FUNCTION);
-    // A fuzzer that never gets past input validation would test nothing but the messages.
-    expect(tally.grids).toBeGreaterThan(RUNS_PER_FUNCTION / 50);
-  });
+  it.each(FUNCTIONS.map(([name, call], i) => ({ name, call, functionSeed: seed + i })))(
+    'PLUMB.$name (fast-check seed $functionSeed)',
+    ({ name, call, functionSeed }) => {
+      const tally = { cases: 0, grids: 0, errors: 0, slowestMs: 0 };
+      counts.set(name, tally);
+      fc.assert(
+        fc.property(fuzzCase, (c) => {
+          tally.cases++;
+          const real: FuzzCase = {
+            y: materialize(c.y) as unknown[][],
+            x: materialize(c.x) as unknown[][],
+            added: materialize(c.added) as unknown[][],
+            newX: materialize(c.newX) as unknown[][],
+            candidates: materialize(c.candidates) as unknown[][],
+            settings: {
+              level: materialize(c.settings.level),
+              intercept: materialize(c.settings.intercept),
+              knownSigma: materialize(c.settings.knownSigma),
+              weights: materialize(c.settings.weights),
+              robust: materialize(c.settings.robust),
+            },
+          };
+          const start = performance.now();
+          let outcome: { returned: unknown } | { thrown: unknown };
+          try {
+            outcome = { returned: call(real) };
+          } catch (thrown) {
+            outcome = { thrown };
+          }
+          const ms = performance.now() - start;
+          tally.slowestMs = Math.max(tally.slowestMs, ms);
+          const problem = problemWith(outcome);
+          if (problem !== undefined) throw new Error(`PLUMB.${name}: ${problem}; PLUMB_FUZZ_SEED=${seed}`);
+          if ('returned' in outcome) tally.grids++;
+          else tally.errors++;
+        }),
+        { seed: functionSeed, numRuns: RUNS_PER_FUNCTION },
+      );
+      // Shrinking replays cases, so at least the requested runs were made when the property held.
+      expect(tally.cases).toBe(RUNS_PER_FUNCTION);
+      // A fuzzer that never gets past input validation would test nothing but the messages.
+      expect(tally.grids).toBeGreaterThan(RUNS_PER_FUNCTION / 50);
+    },
+  );
 });

@@ -14,7 +14,17 @@ import { thrownBy } from '../support/cells';
 // Invented data (no source).
 const yield_ = [['Yield'], [10.1], [null], [12.2], [12.9], [14.4], [15.1], [15.8], [16.9]];
 const steep = [['Steep'], [12], [14], [16], [null], [20], [22], [24], [25]];
-const temp = [['Temp', 'Grind'], [90, 3], [91, 4], [{ code: '#N/A' }, 3], [93, 5], [92, 4], [95, 5], [94, 3], [96, 4]];
+const temp = [
+  ['Temp', 'Grind'],
+  [90, 3],
+  [91, 4],
+  [{ code: '#N/A' }, 3],
+  [93, 5],
+  [92, 4],
+  [95, 5],
+  [94, 3],
+  [96, 4],
+];
 
 describe('PLUMB.GATHER', () => {
   it('joins areas left to right, row by row, keeping numbers, text and booleans', () => {

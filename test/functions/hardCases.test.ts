@@ -49,20 +49,32 @@ describe('hard cases', () => {
   });
 
   it('as many rows as parameters: no residual degrees of freedom', () => {
-    expect(thrownBy(() => terms(column([1, 3, 2]), [[1, 4], [2, 1], [3, 7]])).message).toBe(
-      '3 rows cannot estimate 3 parameters with any left over to measure the noise: the model needs more rows than parameters.',
-    );
+    expect(
+      thrownBy(() =>
+        terms(column([1, 3, 2]), [
+          [1, 4],
+          [2, 1],
+          [3, 7],
+        ]),
+      ).message,
+    ).toBe('3 rows cannot estimate 3 parameters with any left over to measure the noise: the model needs more rows than parameters.');
   });
 
   it('two identical predictors: the second is aliased, the first keeps the one-predictor fit', () => {
-    const table = terms(column(ys), xs.map((v) => [v, v]));
+    const table = terms(
+      column(ys),
+      xs.map((v) => [v, v]),
+    );
     const single = numbersOf(estimates(column(ys), column(xs)));
     expect(table[2][1]).toBeCloseTo(single[1], 12);
     expect(table[3]).toEqual(['x2', '', '', '', '', '', '', '', 'aliased']);
   });
 
   it('a predictor of all zeros: aliased, the others unaffected', () => {
-    const table = terms(column(ys), xs.map((v) => [v, 0]));
+    const table = terms(
+      column(ys),
+      xs.map((v) => [v, 0]),
+    );
     const single = numbersOf(estimates(column(ys), column(xs)));
     expect(table[2][1]).toBeCloseTo(single[1], 12);
     expect(table[3]).toEqual(['x2', '', '', '', '', '', '', '', 'aliased']);
@@ -79,8 +91,18 @@ describe('hard cases', () => {
 
   it('a 1e-300 column beside a 1e300 column: fits, and matches the rescaled problem', () => {
     const second = [3, 1, 4, 1, 5, 9, 2, 6];
-    const mixed = numbersOf(estimates(column(ys), xs.map((v, i) => [v * 1e-300, second[i] * 1e300])));
-    const unit = numbersOf(estimates(column(ys), xs.map((v, i) => [v, second[i]])));
+    const mixed = numbersOf(
+      estimates(
+        column(ys),
+        xs.map((v, i) => [v * 1e-300, second[i] * 1e300]),
+      ),
+    );
+    const unit = numbersOf(
+      estimates(
+        column(ys),
+        xs.map((v, i) => [v, second[i]]),
+      ),
+    );
     expectClose(mixed[0], unit[0]);
     expectClose(mixed[1], unit[1] * 1e300);
     expectClose(mixed[2], unit[2] * 1e-300);
@@ -103,9 +125,7 @@ describe('hard cases', () => {
   it('a 16,384-column x over 3 rows: a clear rows-versus-parameters error', () => {
     const wide = [0, 1, 2].map((i) => Array.from({ length: 16_384 }, (_, j) => (i * 7 + j * 13) % 17));
     const error = thrownBy(() => terms(column([1, 2, 3]), wide));
-    expect(error.message).toBe(
-      '3 rows cannot estimate 3 parameters with any left over to measure the noise: the model needs more rows than parameters.',
-    );
+    expect(error.message).toBe('3 rows cannot estimate 3 parameters with any left over to measure the noise: the model needs more rows than parameters.');
   });
 
   // Before the fix each aliased column got its own refactorization: about five minutes, far past

@@ -72,7 +72,12 @@ describe('the cell functions in the preview host', () => {
     expect(valueAt('Work', 9, 3)).toBe('');
     expect(valueAt('Work', 11, 2)).toBe('');
     const gathered = spilled('Work', '=PLUMB.FITSTATS(Data!B5:B13, Work!C5:D13)', 2);
-    model.setInputs('Data', 4, 8, DATA.map((r) => [r[1], r[3]]));
+    model.setInputs(
+      'Data',
+      4,
+      8,
+      DATA.map((r) => [r[1], r[3]]),
+    );
     const oneBlock = spilled('Work', '=PLUMB.FITSTATS(Data!B5:B13, Data!I5:J13)', 2);
     expect(gathered).toEqual(oneBlock);
     expect(gathered[1]).toEqual(['Rows skipped', 3]);

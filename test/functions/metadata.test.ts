@@ -95,7 +95,7 @@ describe('generated function metadata', () => {
 
   // Our own names (issue #14): the argument names of the spreadsheet's built-in regression
   // functions, and names built on them, appear in no parameter name and no help text.
-  it('uses none of the built-in regression functions\' argument names', () => {
+  it("uses none of the built-in regression functions' argument names", () => {
     const borrowed = ['known_y', 'known_x', 'new_x', 'base_x', 'added_x', 'known_sigma'];
     for (const fn of functions) {
       for (const p of fn.parameters) {

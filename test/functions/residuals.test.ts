@@ -23,7 +23,10 @@ function expectOnlyFiniteNumbersOrText(grid: unknown[][]): void {
 describe('PLUMB.RESIDUALS', () => {
   it('numbers each row by its place in the input range: a header is row 1 and a skipped row leaves a gap', () => {
     const { y, x } = randomProblem(21, 8, 1);
-    const yCells = column('Yield', y.map((v, i) => (i === 2 ? null : v)));
+    const yCells = column(
+      'Yield',
+      y.map((v, i) => (i === 2 ? null : v)),
+    );
     const grid = residuals(yCells, columns(['Dose'], x));
     expect(grid[0]).toEqual(HEADER);
     expect(grid.slice(1).map((r) => r[ROW])).toEqual([2, 3, 5, 6, 7, 8, 9]);
@@ -65,7 +68,20 @@ describe('PLUMB.RESIDUALS', () => {
 
   it('a row alone on a category has leverage 1: its scaled cells are blank and the flag says why', () => {
     const y = [['y'], [3.1], [4.2], [2.9], [5.5], [4.8], [6.1], [3.3], [4.4], [3.9], [5.2], [2.7]];
-    const x = [['Dose', 'Batch'], [1, 'A'], [2, 'B'], [1.5, 'A'], [3, 'B'], [2.5, 'A'], [3.5, 'C'], [1.2, 'B'], [2.2, 'A'], [1.8, 'B'], [2.9, 'A'], [0.8, 'B']];
+    const x = [
+      ['Dose', 'Batch'],
+      [1, 'A'],
+      [2, 'B'],
+      [1.5, 'A'],
+      [3, 'B'],
+      [2.5, 'A'],
+      [3.5, 'C'],
+      [1.2, 'B'],
+      [2.2, 'A'],
+      [1.8, 'B'],
+      [2.9, 'A'],
+      [0.8, 'B'],
+    ];
     const grid = residuals(y, x);
     const row = grid.find((r) => r[ROW] === 7)!;
     expect(row[LEVERAGE]).toBeCloseTo(1, 12);
@@ -77,7 +93,13 @@ describe('PLUMB.RESIDUALS', () => {
 
   it('an exact fit: residuals 0, scaled cells blank, every flag says exact fit', () => {
     const x = [[1], [2], [3], [4], [6]];
-    const grid = residuals(column(undefined, x.map(([v]) => 2 + 0.5 * v)), x);
+    const grid = residuals(
+      column(
+        undefined,
+        x.map(([v]) => 2 + 0.5 * v),
+      ),
+      x,
+    );
     for (const row of grid.slice(1)) {
       expect(row[RESIDUAL]).toBe(0);
       expect([row[STANDARDIZED], row[STUDENTIZED]]).toEqual(['', '']);
@@ -99,7 +121,10 @@ describe('PLUMB.RESIDUALS', () => {
 
   it('noise_sd and weights reach the diagnostics: the standardized column scales as √w/σ', () => {
     const { y, x } = randomProblem(24, 12, 1);
-    const weights = column(undefined, y.map((_, i) => (i === 0 ? 4 : 1)));
+    const weights = column(
+      undefined,
+      y.map((_, i) => (i === 0 ? 4 : 1)),
+    );
     const plain = residuals(column(undefined, y), x, null, null, 2);
     const weighted = residuals(column(undefined, y), x, null, null, 2, weights);
     const first = (g: unknown[][]) => g[1] as number[];
@@ -123,7 +148,11 @@ describe('PLUMB.RESIDUALS', () => {
     // Same page: an argument that is no reference has no address ("" or nothing).
     const y = [[3.1], [4.2], [2.9], [5.5]];
     const x = [[1], [2], [1.5], [3]];
-    expect(residuals(y, x, null, null, null, undefined, null, { parameterAddresses: ['', ''] }).slice(1).map((r) => r[ROW])).toEqual([1, 2, 3, 4]);
+    expect(
+      residuals(y, x, null, null, null, undefined, null, { parameterAddresses: ['', ''] })
+        .slice(1)
+        .map((r) => r[ROW]),
+    ).toEqual([1, 2, 3, 4]);
   });
 
   it('fails like every PLUMB function: #VALUE! with the message', () => {
@@ -141,11 +170,19 @@ describe('PLUMB.QQPOINTS', () => {
     const points = qqPoints(y, x);
     expect(points[0]).toEqual(['Normal quantile', 'Studentized residual', 'Row']);
     const table = residuals(y, x);
-    const studentized = table.slice(1).map((r) => r[STUDENTIZED] as number).sort((a, b) => a - b);
+    const studentized = table
+      .slice(1)
+      .map((r) => r[STUDENTIZED] as number)
+      .sort((a, b) => a - b);
     expect(points.slice(1).map((r) => r[1])).toEqual(studentized);
     // Blom position for the middle of 7 points is exactly 1/2, whose normal quantile is 0.
     expect(points[4][0]).toBe(0);
-    expect(points.slice(1).map((r) => r[2]).sort()).toEqual([2, 3, 4, 5, 6, 7, 8]);
+    expect(
+      points
+        .slice(1)
+        .map((r) => r[2])
+        .sort(),
+    ).toEqual([2, 3, 4, 5, 6, 7, 8]);
   });
 
   it('traces each point to its worksheet row, as PLUMB.RESIDUALS numbers it', async () => {
@@ -154,6 +191,11 @@ describe('PLUMB.QQPOINTS', () => {
     const y = [['y'], [1.2], [2.1], [2.8], [4.4], [4.9], [6.3], [6.8]];
     const x = [['t'], [1], [2], [3], [4], [5], [6], [7]];
     const invocation = { parameterAddresses: ["'Batch log'!C5:C12", "'Batch log'!D5:D12"] };
-    expect(qqPoints(y, x, null, null, null, undefined, null, invocation).slice(1).map((r) => r[2] as number).sort((a, b) => a - b)).toEqual([6, 7, 8, 9, 10, 11, 12]);
+    expect(
+      qqPoints(y, x, null, null, null, undefined, null, invocation)
+        .slice(1)
+        .map((r) => r[2] as number)
+        .sort((a, b) => a - b),
+    ).toEqual([6, 7, 8, 9, 10, 11, 12]);
   });
 });

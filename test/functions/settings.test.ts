@@ -5,18 +5,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { fitModel } from '../../src/engine';
-import {
-  compare,
-  covariance,
-  estimates,
-  fitStats,
-  intervals,
-  nestedF,
-  predict,
-  residuals,
-  stdErrors,
-  terms,
-} from '../../src/functions/functions';
+import { compare, covariance, estimates, fitStats, intervals, nestedF, predict, residuals, stdErrors, terms } from '../../src/functions/functions';
 import { thrownBy } from '../support/cells';
 import { randomProblem } from '../support/random';
 
@@ -38,10 +27,14 @@ describe('settings', () => {
   // The noise_sd rule shared with the pane (src/engine/noiseSd.ts): empty estimates σ; anything
   // else must be a positive finite number with a point as decimal separator. Common practice (no source).
   it('noise_sd refuses 0, negatives, text and a decimal comma, each saying why', () => {
-    expect(thrownBy(() => terms(yCells, x, null, null, 0)).message).toBe('noise_sd is 0, but a noise standard deviation must be positive: leave noise_sd empty to estimate σ from the data.');
+    expect(thrownBy(() => terms(yCells, x, null, null, 0)).message).toBe(
+      'noise_sd is 0, but a noise standard deviation must be positive: leave noise_sd empty to estimate σ from the data.',
+    );
     expect(thrownBy(() => terms(yCells, x, null, null, -1)).message).toBe('noise_sd must be a positive number, or left empty to estimate σ; got -1.');
     expect(thrownBy(() => terms(yCells, x, null, null, 'abc')).message).toBe('noise_sd must be a positive number, or left empty to estimate σ; got abc.');
-    expect(thrownBy(() => terms(yCells, x, null, null, '0,35')).message).toBe('noise_sd must be a number written with a point as the decimal separator, such as 0.35; got the text 0,35.');
+    expect(thrownBy(() => terms(yCells, x, null, null, '0,35')).message).toBe(
+      'noise_sd must be a number written with a point as the decimal separator, such as 0.35; got the text 0,35.',
+    );
     expect(terms(yCells, x, null, null, '0.35')).toEqual(terms(yCells, x, null, null, 0.35));
   });
 
@@ -78,11 +71,24 @@ describe('settings', () => {
     expect(estimates(yCells, x, null, null, null, w).map((r) => r[0])).toEqual(weighted.terms.map((t) => t.estimate));
     const stats = Object.fromEntries(fitStats(yCells, x, null, null, null, w));
     expect(stats.RSS).toBe(weighted.rss);
-    const nested = Object.fromEntries(nestedF(yCells, x.map((r) => r.slice(0, 2)), x.map((r) => [r[2]]), null, null, null, w));
+    const nested = Object.fromEntries(
+      nestedF(
+        yCells,
+        x.map((r) => r.slice(0, 2)),
+        x.map((r) => [r[2]]),
+        null,
+        null,
+        null,
+        w,
+      ),
+    );
     const t = weighted.terms[3].statistic;
     expect(Math.abs((nested.F as number) - t * t)).toBeLessThan(1e-9 * t * t);
     const [row] = predict(yCells, x, [[1, 1, 1]], null, null, null, w);
-    expect(row[0]).toBeCloseTo(weighted.terms.reduce((s, term) => s + term.estimate, 0), 10);
+    expect(row[0]).toBeCloseTo(
+      weighted.terms.reduce((s, term) => s + term.estimate, 0),
+      10,
+    );
   });
 });
 
@@ -101,7 +107,20 @@ describe('robust, the fifth setting, in the same place in every function', () =>
     NESTEDF: (r) => nestedF(yCells, xBase, xAdded, null, null, null, OMITTED, r),
     PREDICT: (r) => predict(yCells, x, [[0, 0, 0]], null, null, null, OMITTED, r),
     RESIDUALS: (r) => residuals(yCells, x, null, null, null, OMITTED, r),
-    COMPARE: (r) => compare(yCells, x, [[1, 1, 1], [1, 0, 0]], null, null, null, OMITTED, r),
+    COMPARE: (r) =>
+      compare(
+        yCells,
+        x,
+        [
+          [1, 1, 1],
+          [1, 0, 0],
+        ],
+        null,
+        null,
+        null,
+        OMITTED,
+        r,
+      ),
   };
   const honouring = new Set(['TERMS', 'STDERRORS', 'INTERVALS', 'COVARIANCE']);
 
@@ -116,6 +135,10 @@ describe('robust, the fifth setting, in the same place in every function', () =>
   it('robust TRUE in TERMS, STDERRORS and INTERVALS gives the engine’s HC3 numbers', () => {
     const engine = fitModel({ y, x }, { covariance: 'HC3' });
     expect(stdErrors(yCells, x, null, null, null, OMITTED, true).map((r) => r[0])).toEqual(engine.terms.map((t) => t.standardError));
-    expect(terms(yCells, x, null, null, null, OMITTED, true).slice(1).map((r) => r[5])).toEqual(engine.terms.map((t) => t.ciLow));
+    expect(
+      terms(yCells, x, null, null, null, OMITTED, true)
+        .slice(1)
+        .map((r) => r[5]),
+    ).toEqual(engine.terms.map((t) => t.ciLow));
   });
 });

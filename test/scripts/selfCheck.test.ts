@@ -91,7 +91,11 @@ describe('the committed self-check workbook', () => {
   // XLDAPR cell metadata with fDynamic="1"; without it Excel shows only the first value, behind "@".
   it('stores every PLUMB call as Excel saves a custom function, as a dynamic array that spills', async () => {
     const zip = await JSZip.loadAsync(bytes);
-    const sheetXml = await Promise.all(Object.keys(zip.files).filter((p) => /^xl\/worksheets\/sheet\d+\.xml$/.test(p)).map((p) => zip.file(p)!.async('string')));
+    const sheetXml = await Promise.all(
+      Object.keys(zip.files)
+        .filter((p) => /^xl\/worksheets\/sheet\d+\.xml$/.test(p))
+        .map((p) => zip.file(p)!.async('string')),
+    );
     const formulas = sheetXml.flatMap((xml) => [...xml.matchAll(/<c ([^>]*)><f([^>]*)>([^<]*)<\/f>/g)].map((m) => ({ cell: m[1], f: m[2], text: m[3] })));
     const plumb = formulas.filter((f) => /PLUMB/i.test(f.text));
     expect(plumb.length).toBeGreaterThanOrEqual(12);
@@ -106,7 +110,9 @@ describe('the committed self-check workbook', () => {
     expect(metadata).toContain('<metadataType name="XLDAPR"');
     expect(metadata).toContain('<xda:dynamicArrayProperties fDynamic="1" fCollapsed="0"/>');
     expect(metadata).toContain('<cellMetadata count="1"><bk><rc t="1" v="0"/></bk></cellMetadata>');
-    expect(await zip.file('[Content_Types].xml')!.async('string')).toContain('PartName="/xl/metadata.xml" ContentType="application/vnd.openxmlformats-officedocument.spreadsheetml.sheetMetadata+xml"');
+    expect(await zip.file('[Content_Types].xml')!.async('string')).toContain(
+      'PartName="/xl/metadata.xml" ContentType="application/vnd.openxmlformats-officedocument.spreadsheetml.sheetMetadata+xml"',
+    );
     expect(await zip.file('xl/_rels/workbook.xml.rels')!.async('string')).toMatch(/relationships\/sheetMetadata" Target="metadata.xml"/);
     expect(await zip.file('xl/workbook.xml')!.async('string')).toContain('fullCalcOnLoad="1"');
   });
@@ -136,7 +142,14 @@ describe('the committed self-check workbook', () => {
     }
     expect([...kinds.keys()].sort()).toEqual(['0:#N/A', '0:blank', '0:number', '1:#N/A', '1:blank', '1:string', '2:#N/A', '2:blank', '2:number']);
     expect([...kinds].filter(([k]) => /blank|#N\/A/.test(k)).flatMap(([, cells]) => cells)).toHaveLength(6);
-    expect(new Set(kinds.get('1:string')!.map((a) => sheet('ToothGrowth').cells.get(a)).map((c) => (c as { value: string }).value))).toEqual(new Set(['OJ', 'VC']));
+    expect(
+      new Set(
+        kinds
+          .get('1:string')!
+          .map((a) => sheet('ToothGrowth').cells.get(a))
+          .map((c) => (c as { value: string }).value),
+      ),
+    ).toEqual(new Set(['OJ', 'VC']));
   });
 
   it('counts every check on the Summary, against the threshold the README states', () => {
@@ -152,14 +165,18 @@ describe('the committed self-check workbook', () => {
       expect(at(SUMMARY_SHEET, row, 2)).toEqual({ formula: `COUNTIF(${name}!${result(rows[0].row)}:${result(rows[rows.length - 1].row)},"PASS")` });
       for (const c of rows) {
         const r = c.row + 1;
-        expect(at(name, c.row, CHECK_COLUMNS.result), `${name}!M${r}`).toEqual({ formula: `IF(L${r}>=${SUMMARY_SHEET}!$B$${SUMMARY.threshold.row + 1},"PASS","FAIL")` });
+        expect(at(name, c.row, CHECK_COLUMNS.result), `${name}!M${r}`).toEqual({
+          formula: `IF(L${r}>=${SUMMARY_SHEET}!$B$${SUMMARY.threshold.row + 1},"PASS","FAIL")`,
+        });
         expect(at(name, c.row, CHECK_COLUMNS.lre), `${name}!L${r}`).toEqual({ formula: expect.stringContaining(`ABS(K${r}-J${r})/ABS(J${r})`) });
       }
     });
     expect(valueAt(SUMMARY_SHEET, SUMMARY.total.row, SUMMARY.total.column)).toBe(total);
     const passed = cellAddress(SUMMARY.passed.row, SUMMARY.passed.column);
     const inWorkbook = cellAddress(SUMMARY.total.row, SUMMARY.total.column);
-    expect(at(SUMMARY_SHEET, SUMMARY.passed.row, SUMMARY.passed.column)).toEqual({ formula: `SUM(C${SUMMARY.firstSection + 1}:C${SUMMARY.firstSection + DATA_SHEETS.length})` });
+    expect(at(SUMMARY_SHEET, SUMMARY.passed.row, SUMMARY.passed.column)).toEqual({
+      formula: `SUM(C${SUMMARY.firstSection + 1}:C${SUMMARY.firstSection + DATA_SHEETS.length})`,
+    });
     expect(at(SUMMARY_SHEET, SUMMARY.overall.row, SUMMARY.overall.column)).toEqual({ formula: `IF(${passed}=${inWorkbook},"PASS","FAIL")` });
   });
 });
@@ -204,7 +221,13 @@ describe('the self-check in the preview, with the real PLUMB functions', () => {
     const complete: number[] = [];
     for (let i = 0; i < 60; i++) {
       const row = DATA_HEADER_ROW + 1 + i;
-      if ([0, 1, 2].every((j) => { const c = at('ToothGrowth', row, j); return c !== undefined && 'value' in c; })) complete.push(row + 1);
+      if (
+        [0, 1, 2].every((j) => {
+          const c = at('ToothGrowth', row, j);
+          return c !== undefined && 'value' in c;
+        })
+      )
+        complete.push(row + 1);
     }
     expect(complete).toHaveLength(54);
     const anchor = (fn: string) => {
@@ -263,7 +286,9 @@ describe("the workbook's own arithmetic, by Excel's rules, on the preview's PLUM
       const results = checkRows(name).map((c) => excel.cell(name, cellAddress(c.row, CHECK_COLUMNS.result)));
       expect(new Set(results), name).toEqual(new Set(['PASS']));
     }
-    expect(excel.cell(SUMMARY_SHEET, cellAddress(SUMMARY.passed.row, SUMMARY.passed.column))).toBe(valueAt(SUMMARY_SHEET, SUMMARY.total.row, SUMMARY.total.column));
+    expect(excel.cell(SUMMARY_SHEET, cellAddress(SUMMARY.passed.row, SUMMARY.passed.column))).toBe(
+      valueAt(SUMMARY_SHEET, SUMMARY.total.row, SUMMARY.total.column),
+    );
     expect(excel.cell(SUMMARY_SHEET, overall)).toBe('PASS');
   });
 
@@ -271,14 +296,19 @@ describe("the workbook's own arithmetic, by Excel's rules, on the preview's PLUM
     const [estimate, , third] = checkRows('Longley');
     const tooth = checkRows('ToothGrowth');
     const address = (c: CheckRow) => cellAddress(c.source.row, c.source.column);
-    const offBy = (c: CheckRow) => shownOf(preview.valueAt({ sheet: 'Longley', ...c.source })) as number * (1 + 3e-10);
+    const offBy = (c: CheckRow) => (shownOf(preview.valueAt({ sheet: 'Longley', ...c.source })) as number) * (1 + 3e-10);
     const excel = excelView({
       [`Longley!${address(estimate)}`]: offBy(estimate),
       [`ToothGrowth!${address(tooth[0])}`]: { error: '#VALUE!' },
       [`ToothGrowth!${address(tooth[tooth.length - 1])}`]: null,
     });
     const result = (name: string, c: CheckRow) => excel.cell(name, cellAddress(c.row, CHECK_COLUMNS.result));
-    expect([result('Longley', estimate), result('Longley', third), result('ToothGrowth', tooth[0]), result('ToothGrowth', tooth[tooth.length - 1])]).toEqual(['FAIL', 'PASS', 'FAIL', 'FAIL']);
+    expect([result('Longley', estimate), result('Longley', third), result('ToothGrowth', tooth[0]), result('ToothGrowth', tooth[tooth.length - 1])]).toEqual([
+      'FAIL',
+      'PASS',
+      'FAIL',
+      'FAIL',
+    ]);
     expect(excel.cell(SUMMARY_SHEET, overall)).toBe('FAIL');
   });
 });

@@ -10,7 +10,10 @@ import { ROOT } from '../support/manifest';
 
 /** Cache-Control directives, lower-cased, e.g. ["public", "max-age=86400"]. */
 function cacheDirectives(response: Response): string[] {
-  return (response.headers.get('cache-control') ?? '').split(',').map((d) => d.trim().toLowerCase()).filter((d) => d !== '');
+  return (response.headers.get('cache-control') ?? '')
+    .split(',')
+    .map((d) => d.trim().toLowerCase())
+    .filter((d) => d !== '');
 }
 
 describe('static server', () => {

@@ -3,8 +3,8 @@
 // to, resolved by the TypeScript checker to its declaration in @types/office-js or
 // @types/custom-functions-runtime, whose JSDoc carries the API reference's "[Api set: NAME n.n]"
 // remark. The manifest test compares the result with the sets manifest.xml declares.
-import { join, sep } from "node:path";
-import ts from "typescript";
+import { join, sep } from 'node:path';
+import ts from 'typescript';
 
 export interface SetUse {
   /** The highest version of the set that a used member needs. */
@@ -17,8 +17,8 @@ const API_SET = /\[\s*Api set:\s*([A-Za-z]+)\s+(\d+\.\d+)\s*\]/i;
 const OFFICE_TYPINGS = /[\\/]@types[\\/](office-js|custom-functions-runtime)[\\/]/;
 
 export function compareVersions(a: string, b: string): number {
-  const [aMajor, aMinor] = a.split(".").map(Number);
-  const [bMajor, bMinor] = b.split(".").map(Number);
+  const [aMajor, aMinor] = a.split('.').map(Number);
+  const [bMajor, bMinor] = b.split('.').map(Number);
   return aMajor - bMajor || aMinor - bMinor;
 }
 
@@ -49,12 +49,15 @@ function declarationsOf(checker: ts.TypeChecker, name: ts.Identifier): readonly 
  * places (overloads reached without a call, merged declarations) counts with its lowest version.
  */
 export function requirementSetsUsed(root: string, entryPoints: readonly string[], excludedDirs: readonly string[]): Map<string, SetUse> {
-  const configPath = join(root, "tsconfig.json");
+  const configPath = join(root, 'tsconfig.json');
   const config = ts.readConfigFile(configPath, (p) => ts.sys.readFile(p));
   const parsed = ts.parseJsonConfigFileContent(config.config, ts.sys, root);
-  const program = ts.createProgram(entryPoints.map((e) => join(root, e)), parsed.options);
+  const program = ts.createProgram(
+    entryPoints.map((e) => join(root, e)),
+    parsed.options,
+  );
   const checker = program.getTypeChecker();
-  const ownSource = join(root, "src") + sep;
+  const ownSource = join(root, 'src') + sep;
   const excluded = excludedDirs.map((d) => join(root, d) + sep);
   const used = new Map<string, SetUse>();
 
@@ -66,7 +69,7 @@ export function requirementSetsUsed(root: string, entryPoints: readonly string[]
   };
 
   for (const file of program.getSourceFiles()) {
-    const path = file.fileName.split("/").join(sep);
+    const path = file.fileName.split('/').join(sep);
     if (file.isDeclarationFile || !path.startsWith(ownSource) || excluded.some((d) => path.startsWith(d))) continue;
     const visit = (node: ts.Node): void => {
       if (ts.isPropertyAccessExpression(node) && ts.isIdentifier(node.name)) {

@@ -1,13 +1,13 @@
 // Shared helpers for tests that read manifest.xml: a small typed element tree
 // over fast-xml-parser's ordered output, and a PNG header reader.
-import { readFileSync } from "node:fs";
-import { join } from "node:path";
-import { fileURLToPath } from "node:url";
-import { XMLParser, XMLValidator } from "fast-xml-parser";
+import { readFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { XMLParser, XMLValidator } from 'fast-xml-parser';
 
-export const ROOT = fileURLToPath(new URL("../..", import.meta.url));
-export const MANIFEST_PATH = join(ROOT, "manifest.xml");
-export const ORIGIN = "https://localhost:3000";
+export const ROOT = fileURLToPath(new URL('../..', import.meta.url));
+export const MANIFEST_PATH = join(ROOT, 'manifest.xml');
+export const ORIGIN = 'https://localhost:3000';
 
 export interface El {
   name: string;
@@ -19,7 +19,7 @@ export interface El {
 type RawNode = Record<string, unknown>;
 
 function isRawNode(value: unknown): value is RawNode {
-  return typeof value === "object" && value !== null && !Array.isArray(value);
+  return typeof value === 'object' && value !== null && !Array.isArray(value);
 }
 
 function toElements(nodes: unknown): El[] {
@@ -27,19 +27,19 @@ function toElements(nodes: unknown): El[] {
   const out: El[] = [];
   for (const node of nodes) {
     if (!isRawNode(node)) continue;
-    const name = Object.keys(node).find((k) => k !== ":@");
+    const name = Object.keys(node).find((k) => k !== ':@');
     // Text, comments and the XML declaration are not elements.
-    if (!name || name.startsWith("#") || name.startsWith("?")) continue;
-    const rawAttrs = node[":@"];
+    if (!name || name.startsWith('#') || name.startsWith('?')) continue;
+    const rawAttrs = node[':@'];
     const attrs: Record<string, string> = {};
     if (isRawNode(rawAttrs)) for (const [k, v] of Object.entries(rawAttrs)) attrs[k] = String(v);
     const body = node[name];
     const text = Array.isArray(body)
       ? body
           .filter(isRawNode)
-          .map((b) => (typeof b["#text"] === "string" ? b["#text"] : ""))
-          .join("")
-      : "";
+          .map((b) => (typeof b['#text'] === 'string' ? b['#text'] : ''))
+          .join('')
+      : '';
     out.push({ name, attrs, children: toElements(body), text });
   }
   return out;
@@ -54,7 +54,7 @@ export function parseXml(xml: string): El {
   const parser = new XMLParser({
     preserveOrder: true,
     ignoreAttributes: false,
-    attributeNamePrefix: "",
+    attributeNamePrefix: '',
     parseTagValue: false,
     parseAttributeValue: false,
     trimValues: true,
@@ -65,7 +65,7 @@ export function parseXml(xml: string): El {
 }
 
 export function loadManifest(): { xml: string; root: El } {
-  const xml = readFileSync(MANIFEST_PATH, "utf8");
+  const xml = readFileSync(MANIFEST_PATH, 'utf8');
   return { xml, root: parseXml(xml) };
 }
 
@@ -101,10 +101,10 @@ export function allElements(el: El): El[] {
 /** Resource id → DefaultValue for every bt:Image, bt:Url and bt:String. */
 export function resources(root: El): Map<string, string> {
   const map = new Map<string, string>();
-  for (const r of findAll(path(root, "VersionOverrides", "Resources"), "bt:Image")
-    .concat(findAll(path(root, "VersionOverrides", "Resources"), "bt:Url"))
-    .concat(findAll(path(root, "VersionOverrides", "Resources"), "bt:String"))) {
-    if (r.attrs.id !== undefined) map.set(r.attrs.id, r.attrs.DefaultValue ?? "");
+  for (const r of findAll(path(root, 'VersionOverrides', 'Resources'), 'bt:Image')
+    .concat(findAll(path(root, 'VersionOverrides', 'Resources'), 'bt:Url'))
+    .concat(findAll(path(root, 'VersionOverrides', 'Resources'), 'bt:String'))) {
+    if (r.attrs.id !== undefined) map.set(r.attrs.id, r.attrs.DefaultValue ?? '');
   }
   return map;
 }
@@ -114,7 +114,7 @@ export function urlsIn(root: El): string[] {
   const urls: string[] = [];
   for (const el of allElements(root)) {
     for (const [k, v] of Object.entries(el.attrs)) {
-      if (k === "xmlns" || k.startsWith("xmlns:")) continue;
+      if (k === 'xmlns' || k.startsWith('xmlns:')) continue;
       if (/^[a-z][a-z0-9+.-]*:\/\//i.test(v)) urls.push(v);
     }
     if (/^[a-z][a-z0-9+.-]*:\/\//i.test(el.text.trim())) urls.push(el.text.trim());
@@ -131,7 +131,7 @@ const PNG_SIGNATURE = Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0
 
 /** Reads width and height from the IHDR chunk, which the PNG spec requires first. */
 export function readPngHeader(bytes: Buffer): PngHeader {
-  if (bytes.length < 24 || !bytes.subarray(0, 8).equals(PNG_SIGNATURE)) throw new Error("not a PNG file");
-  if (bytes.toString("ascii", 12, 16) !== "IHDR") throw new Error("PNG does not start with IHDR");
+  if (bytes.length < 24 || !bytes.subarray(0, 8).equals(PNG_SIGNATURE)) throw new Error('not a PNG file');
+  if (bytes.toString('ascii', 12, 16) !== 'IHDR') throw new Error('PNG does not start with IHDR');
   return { width: bytes.readUInt32BE(16), height: bytes.readUInt32BE(20) };
 }

@@ -8,10 +8,7 @@ import { existsSync, readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 
 export const STRD_DIR = resolve(__dirname, '..', '..', '..', 'shared', 'reference', 'strd');
-export const STRD_NAMES = [
-  'Norris', 'Pontius', 'NoInt1', 'NoInt2', 'Filip', 'Longley',
-  'Wampler1', 'Wampler2', 'Wampler3', 'Wampler4', 'Wampler5',
-] as const;
+export const STRD_NAMES = ['Norris', 'Pontius', 'NoInt1', 'NoInt2', 'Filip', 'Longley', 'Wampler1', 'Wampler2', 'Wampler3', 'Wampler4', 'Wampler5'] as const;
 export type StrdName = (typeof STRD_NAMES)[number];
 
 export interface StrdCertified {
@@ -59,9 +56,7 @@ export function readStrd(name: StrdName): StrdProblem {
   const [dataFrom, dataTo] = lineRange(lines, 'Data   ');
   const block = lines.slice(certFrom - 1, certTo).map((l) => l.trim().split(/\s+/));
 
-  const parameters = block
-    .filter((t) => /^B\d+$/.test(t[0]))
-    .map((t) => ({ name: t[0], estimate: parseNumber(t[1]), standardDeviation: parseNumber(t[2]) }));
+  const parameters = block.filter((t) => /^B\d+$/.test(t[0])).map((t) => ({ name: t[0], estimate: parseNumber(t[1]), standardDeviation: parseNumber(t[2]) }));
   const sdRow = block.find((t) => t[0] === 'Standard' && t[1] === 'Deviation');
   const r2Row = block.find((t) => t[0] === 'R-Squared');
   const regRow = block.find((t) => t[0] === 'Regression' && t.length >= 5);

@@ -1,9 +1,7 @@
 import { EngineError } from '../errors';
 import { shortName } from './cells';
 
-export type SourceColumn =
-  | { kind: 'numeric'; name: string }
-  | { kind: 'categorical'; name: string; levels: string[]; reference: string | undefined };
+export type SourceColumn = { kind: 'numeric'; name: string } | { kind: 'categorical'; name: string; levels: string[]; reference: string | undefined };
 
 export interface CodedColumns {
   columns: SourceColumn[];

@@ -113,10 +113,7 @@ export function buildModelFrame(input: FrameInput): ModelFrame {
     const row = rowNumber(origins.y, position);
     const yCell = classifyCell(input.y[position][0]);
     const wCell = input.weights === undefined ? undefined : classifyCell(input.weights[position][0]);
-    const cells: [Cell, Located][] = [
-      [yCell, yPlace],
-      ...classified.map((column, j): [Cell, Located] => [column[k], xPlaces[j]]),
-    ];
+    const cells: [Cell, Located][] = [[yCell, yPlace], ...classified.map((column, j): [Cell, Located] => [column[k], xPlaces[j]])];
     if (wCell !== undefined) cells.push([wCell, wPlace]);
     cells.forEach(([cell, where]) => rejectBadCell(cell, where, position));
     const missing = cells.find(([cell]) => cell.kind === 'missing');

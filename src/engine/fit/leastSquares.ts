@@ -120,7 +120,12 @@ export function solveLeastSquares(design: WeightedDesign, precision: Precision =
   if (precision === 'auto' && needsExtendedPrecision(frobeniusCondition(qr.r, rInverse, rank), Math.sqrt(scaledRss))) {
     // The double QR's reflectors stay in use for residuals and diagnostics: they are accurate
     // to double precision in what they produce (Qᵀ applied to vectors), unlike the solve.
-    const precise = preciseLeastSquares(extendedColumns(design, qr.accepted), qr.accepted.map((col) => columnScales[col]), y, yScale);
+    const precise = preciseLeastSquares(
+      extendedColumns(design, qr.accepted),
+      qr.accepted.map((col) => columnScales[col]),
+      y,
+      yScale,
+    );
     qr.accepted.forEach((col, a) => {
       coefficients[col] = precise.coefficients[a];
     });
@@ -175,7 +180,13 @@ function extendedColumns(design: WeightedDesign, accepted: readonly number[]): (
  * those residuals were off by 5e-10 against 6e-13 elsewhere. They are formed directly instead,
  * y − x·b, whose error does not grow with the number of rows.
  */
-function recomputeLeadingResiduals(design: WeightedDesign, accepted: readonly number[], coefficients: Float64Array, residuals: Float64Array, fitted: Float64Array): void {
+function recomputeLeadingResiduals(
+  design: WeightedDesign,
+  accepted: readonly number[],
+  coefficients: Float64Array,
+  residuals: Float64Array,
+  fitted: Float64Array,
+): void {
   const { matrix, y } = design;
   const n = matrix.rows;
   for (let i = 0; i < Math.min(accepted.length, n); i++) {

@@ -122,7 +122,8 @@ export function assumptionChecks(data: ModelData, settings?: FitSettings, rowNum
 
 function overallReading(c: AssumptionChecks, perfectFit: boolean): string {
   const concerns: string[] = [];
-  if (c.durbinWatson.pTwoSided < c.alpha) concerns.push(c.durbinWatson.statistic < c.durbinWatson.mean ? 'positive autocorrelation' : 'negative autocorrelation');
+  if (c.durbinWatson.pTwoSided < c.alpha)
+    concerns.push(c.durbinWatson.statistic < c.durbinWatson.mean ? 'positive autocorrelation' : 'negative autocorrelation');
   if (c.breuschPagan.pValue < c.alpha) concerns.push('uneven residual spread');
   if (c.jarqueBera.pValue < c.alpha) concerns.push('non-normal residuals');
   // Named rows already cover an influential row; without them (Cook's distance of a row the

@@ -1,12 +1,5 @@
 import { chiSquareUpperQuantile, chiSquareUpperTail } from '../distributions/chiSquare';
-import {
-  fisherFQuantile,
-  fisherFUpperTail,
-  normalQuantile,
-  normalTwoSidedP,
-  studentTQuantile,
-  studentTTwoSidedP,
-} from '../distributions';
+import { fisherFQuantile, fisherFUpperTail, normalQuantile, normalTwoSidedP, studentTQuantile, studentTTwoSidedP } from '../distributions';
 
 /**
  * The distribution a coefficient's statistic is referred to: Student's t on the residual df when

@@ -70,9 +70,7 @@ export function robustCovariance(solution: LeastSquaresSolution, kind: RobustKin
   const usable = (j: number): boolean => position[j] >= 0 && !undefinedPositions[position[j]];
   const covariance = Array.from({ length: q }, (_, j) =>
     Array.from({ length: q }, (_, l) =>
-      usable(j) && usable(l)
-        ? (yScale / columnScales[j]) * (yScale / columnScales[l]) * scaled[position[j] * rank + position[l]]
-        : Number.NaN,
+      usable(j) && usable(l) ? (yScale / columnScales[j]) * (yScale / columnScales[l]) * scaled[position[j] * rank + position[l]] : Number.NaN,
     ),
   );
   return {

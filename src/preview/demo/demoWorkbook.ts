@@ -31,10 +31,22 @@ export function loadDemo(wb: PreviewWorkbook): void {
   wb.setInputs('Model', 27, 0, [['What to expect for the planned batches']]);
   wb.setInputs('Model', 28, 0, [[`=PLUMB.PREDICT(${y}, ${x}, ${newX})`]]);
   wb.setInputs('Model', 35, 0, [
-    ['Cautions: these are associations in logged data, not proof of cause; predictions far outside the logged ranges are extrapolations; check the residuals before relying on the intervals.'],
+    [
+      'Cautions: these are associations in logged data, not proof of cause; predictions far outside the logged ranges are extrapolations; check the residuals before relying on the intervals.',
+    ],
   ]);
   // t to two decimals and CV % to one; estimates and p-values keep their significant digits.
-  wb.setNumberFormats('Model', 2, 3, Array.from({ length: 8 }, () => ['0.00']));
-  wb.setNumberFormats('Model', 2, 7, Array.from({ length: 8 }, () => ['0.0']));
+  wb.setNumberFormats(
+    'Model',
+    2,
+    3,
+    Array.from({ length: 8 }, () => ['0.00']),
+  );
+  wb.setNumberFormats(
+    'Model',
+    2,
+    7,
+    Array.from({ length: 8 }, () => ['0.0']),
+  );
   wb.activateSheet('Model');
 }

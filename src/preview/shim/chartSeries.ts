@@ -96,7 +96,16 @@ export class ShimChartSeries extends ShimClientObject<SeriesTarget> {
     });
   }
 }
-refuseMembers(ShimChartSeries.prototype, 'ChartSeries', ['format', 'markerStyle', 'markerSize', 'markerBackgroundColor', 'markerForegroundColor', 'trendlines', 'points', 'chartType']);
+refuseMembers(ShimChartSeries.prototype, 'ChartSeries', [
+  'format',
+  'markerStyle',
+  'markerSize',
+  'markerBackgroundColor',
+  'markerForegroundColor',
+  'trendlines',
+  'points',
+  'chartType',
+]);
 
 export class ShimChartSeriesCollection extends ShimClientObject<ChartTarget> {
   protected readonly typeName = 'ChartSeriesCollection';

@@ -16,8 +16,7 @@ export const SERIES_BY: readonly SeriesBy[] = ['Columns', 'Rows'];
 export function seriesFromSource(ref: RangeRef, seriesBy: SeriesBy): ChartSeriesSource[] {
   const byColumns = seriesBy === 'Columns';
   const count = byColumns ? ref.right - ref.left + 1 : ref.bottom - ref.top + 1;
-  const line = (i: number): RangeRef =>
-    byColumns ? { ...ref, left: ref.left + i, right: ref.left + i } : { ...ref, top: ref.top + i, bottom: ref.top + i };
+  const line = (i: number): RangeRef => (byColumns ? { ...ref, left: ref.left + i, right: ref.left + i } : { ...ref, top: ref.top + i, bottom: ref.top + i });
   const x = count === 1 ? null : line(0);
   const firstY = count === 1 ? 0 : 1;
   return Array.from({ length: count - firstY }, (_, k) => ({ name: `Series${k + 1}`, x, y: line(k + firstY) }));

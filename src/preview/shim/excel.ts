@@ -70,7 +70,8 @@ export function createExcel(model: WorkbookModel, settings: ShimSettings) {
     if (typeof batch !== 'function') throw new TypeError('Excel.run needs a batch function.');
     const first = args.length > 1 ? args[0] : undefined;
     const previous = contextOf(first);
-    const options = previous === undefined && typeof first === 'object' && first !== null ? (first as { delayForCellEdit?: unknown; previousObjects?: unknown }) : undefined;
+    const options =
+      previous === undefined && typeof first === 'object' && first !== null ? (first as { delayForCellEdit?: unknown; previousObjects?: unknown }) : undefined;
     const context = previous ?? contextOf(options?.previousObjects) ?? new RequestContext();
     if (options !== undefined) context.delayForCellEdit = options.delayForCellEdit === true;
     const returned = (batch as Batch)(context);

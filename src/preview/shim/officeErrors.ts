@@ -97,7 +97,11 @@ export function cellEditError(code: 'InvalidOperation' | 'InvalidOperationInCell
 const RESOURCE_LIMITS = 'See the Resource limits and performance optimization for Office Add-ins article for more information.';
 
 export function requestPayloadTooLarge(): OfficeExtensionError {
-  return new OfficeExtensionError('RequestPayloadSizeLimitExceeded', `The request payload size has exceeded the limit. ${RESOURCE_LIMITS}`, 'RequestContext.sync');
+  return new OfficeExtensionError(
+    'RequestPayloadSizeLimitExceeded',
+    `The request payload size has exceeded the limit. ${RESOURCE_LIMITS}`,
+    'RequestContext.sync',
+  );
 }
 
 export function responsePayloadTooLarge(location: string): OfficeExtensionError {

@@ -38,13 +38,7 @@ const RANGE_SCALARS = [
 /** True when the rectangle lies inside Excel's grid and is not inverted. */
 export function insideGrid(top: number, left: number, bottom: number, right: number): boolean {
   return (
-    [top, left, bottom, right].every(Number.isInteger) &&
-    top >= 0 &&
-    left >= 0 &&
-    top <= bottom &&
-    left <= right &&
-    bottom < MAX_ROWS &&
-    right < MAX_COLUMNS
+    [top, left, bottom, right].every(Number.isInteger) && top >= 0 && left >= 0 && top <= bottom && left <= right && bottom < MAX_ROWS && right < MAX_COLUMNS
   );
 }
 
@@ -294,9 +288,20 @@ export class ShimRange extends ShimClientObject<RangeTarget> {
       if (!['All', 'Contents', 'Formats'].includes(mode)) throw invalidArgument(location);
       const target = this.target(location);
       const ref = this.ref(target, location);
-      if (mode !== 'Formats') this.context.model.setInputs(ref.sheet, ref.top, ref.left, grid(target, () => null));
+      if (mode !== 'Formats')
+        this.context.model.setInputs(
+          ref.sheet,
+          ref.top,
+          ref.left,
+          grid(target, () => null),
+        );
       if (mode !== 'Contents') {
-        this.context.model.setNumberFormats(ref.sheet, ref.top, ref.left, grid(target, () => 'General'));
+        this.context.model.setNumberFormats(
+          ref.sheet,
+          ref.top,
+          ref.left,
+          grid(target, () => 'General'),
+        );
         this.context.model.clearStyles(ref);
       }
     });

@@ -190,4 +190,11 @@ export class ShimRangeFormat extends RangePart {
     this.context.enqueue('RangeFormat.autofitRows', () => this.target('RangeFormat.autofitRows'));
   }
 }
-refuseMembers(ShimRangeFormat.prototype, 'RangeFormat', ['borders', 'horizontalAlignment', 'verticalAlignment', 'indentLevel', 'protection', 'textOrientation']);
+refuseMembers(ShimRangeFormat.prototype, 'RangeFormat', [
+  'borders',
+  'horizontalAlignment',
+  'verticalAlignment',
+  'indentLevel',
+  'protection',
+  'textOrientation',
+]);

@@ -8,14 +8,7 @@
  */
 import type { WorkbookModel } from '../workbook/types';
 import { defaultSettings, payloadBytes, payloadLimit, type ShimSettings } from './hostSettings';
-import {
-  cellEditError,
-  generalException,
-  itemNotFound,
-  OfficeExtensionError,
-  requestPayloadTooLarge,
-  responsePayloadTooLarge,
-} from './officeErrors';
+import { cellEditError, generalException, itemNotFound, OfficeExtensionError, requestPayloadTooLarge, responsePayloadTooLarge } from './officeErrors';
 import { ShimWorkbook } from './workbook';
 
 /**

@@ -36,7 +36,8 @@ export class ShimWorksheetCollection extends ShimClientObject<true> {
       const members = new Map(spec.members);
       const items = members.get('items');
       members.delete('items');
-      itemSpec = items?.all || (items === undefined && members.size === 0) ? { all: true } : { all: false, members: new Map([...(items?.members ?? []), ...members]) };
+      itemSpec =
+        items?.all || (items === undefined && members.size === 0) ? { all: true } : { all: false, members: new Map([...(items?.members ?? []), ...members]) };
     }
     const sheets = this.context.model.sheetNames().map((name) => new ShimWorksheet(this.context, () => this.context.handleFor(name), undefined));
     for (const sheet of sheets) sheet.applyLoad(itemSpec);

@@ -64,7 +64,13 @@ export function Grid({ workbook, sheet, selection, onSelect, onStartEdit }: Grid
     const column = Math.max(0, Math.min(columns - 1, (extend ? selection.right : anchor.column) + dColumn));
     onSelect(
       extend
-        ? { sheet, top: Math.min(anchor.row, row), left: Math.min(anchor.column, column), bottom: Math.max(anchor.row, row), right: Math.max(anchor.column, column) }
+        ? {
+            sheet,
+            top: Math.min(anchor.row, row),
+            left: Math.min(anchor.column, column),
+            bottom: Math.max(anchor.row, row),
+            right: Math.max(anchor.column, column),
+          }
         : { sheet, top: row, left: column, bottom: row, right: column },
     );
   };
@@ -79,7 +85,9 @@ export function Grid({ workbook, sheet, selection, onSelect, onStartEdit }: Grid
       onStartEdit();
     } else if (e.key === 'Delete' || e.key === 'Backspace') {
       e.preventDefault();
-      const blank = Array.from({ length: selection.bottom - selection.top + 1 }, () => Array.from({ length: selection.right - selection.left + 1 }, () => null));
+      const blank = Array.from({ length: selection.bottom - selection.top + 1 }, () =>
+        Array.from({ length: selection.right - selection.left + 1 }, () => null),
+      );
       workbook.setInputs(sheet, selection.top, selection.left, blank);
     } else if (e.key.length === 1 && !e.ctrlKey && !e.metaKey && !e.altKey) {
       e.preventDefault();
@@ -89,7 +97,13 @@ export function Grid({ workbook, sheet, selection, onSelect, onStartEdit }: Grid
 
   const clickCell = (row: number, column: number, e: MouseEvent) => {
     if (e.shiftKey) {
-      onSelect({ sheet, top: Math.min(anchor.row, row), left: Math.min(anchor.column, column), bottom: Math.max(anchor.row, row), right: Math.max(anchor.column, column) });
+      onSelect({
+        sheet,
+        top: Math.min(anchor.row, row),
+        left: Math.min(anchor.column, column),
+        bottom: Math.max(anchor.row, row),
+        right: Math.max(anchor.column, column),
+      });
     } else {
       onSelect({ sheet, top: row, left: column, bottom: row, right: column });
     }
@@ -123,7 +137,11 @@ export function Grid({ workbook, sheet, selection, onSelect, onStartEdit }: Grid
           data-cell={cellAddress(row, column)}
           title={isError ? (value.message ?? value.error) : text}
           // The selection's tint wins over a fill so the selected cells stay visible.
-          style={{ left: px(edges[column]), width: px(edges[column + 1] - edges[column]), background: style.fill !== null && !selected ? style.fill : undefined }}
+          style={{
+            left: px(edges[column]),
+            width: px(edges[column + 1] - edges[column]),
+            background: style.fill !== null && !selected ? style.fill : undefined,
+          }}
           onMouseDown={(e) => clickCell(row, column, e)}
           onDblClick={() => onStartEdit()}
         >

@@ -28,9 +28,9 @@ export function PreviewApp({ workbook }: { workbook: PreviewWorkbook }) {
   return (
     <div class="preview">
       <header class="preview-note">
-        <strong>Plumbline preview workbook.</strong> This page is a stand-in host, not Excel: it runs the add-in's real cell functions and task pane
-        against a small workbook of our own, with a shim for the part of Office.js they use. To use Plumbline in Excel, sideload{' '}
-        <code>manifest.xml</code> (see the README: Excel desktop through office-addin-debugging, or Insert › Add-ins › Upload My Add-in in Excel on the web).
+        <strong>Plumbline preview workbook.</strong> This page is a stand-in host, not Excel: it runs the add-in's real cell functions and task pane against a
+        small workbook of our own, with a shim for the part of Office.js they use. To use Plumbline in Excel, sideload <code>manifest.xml</code> (see the
+        README: Excel desktop through office-addin-debugging, or Insert › Add-ins › Upload My Add-in in Excel on the web).
       </header>
       <HostSwitches workbook={workbook} />
       <FormulaBar

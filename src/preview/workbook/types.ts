@@ -4,7 +4,6 @@
  */
 import type { RangeRef } from '../../addressing/a1';
 
-
 /** What a cell holds as entered: a constant, or formula text starting with "=". */
 export type CellInput = number | string | boolean | null;
 

@@ -263,7 +263,13 @@ export class PreviewWorkbook implements WorkbookModel {
         area =
           area === undefined
             ? { sheet: sheet.name, top: row, left: column, bottom: row, right: column }
-            : { sheet: sheet.name, top: Math.min(area.top, row), left: Math.min(area.left, column), bottom: Math.max(area.bottom, row), right: Math.max(area.right, column) };
+            : {
+                sheet: sheet.name,
+                top: Math.min(area.top, row),
+                left: Math.min(area.left, column),
+                bottom: Math.max(area.bottom, row),
+                right: Math.max(area.right, column),
+              };
       }
     }
     return area;
@@ -387,10 +393,28 @@ export class PreviewWorkbook implements WorkbookModel {
     const here: RangeRef = { sheet: sheet.name, top: row, left: column, bottom: row, right: column };
     try {
       const expression = parseFormula(text, sheet.name);
-      return { text, expression, syntaxError: undefined, reads: referencedRanges(expression), result: { grid: [[null]] }, area: here, blocked: false, generation: 0 };
+      return {
+        text,
+        expression,
+        syntaxError: undefined,
+        reads: referencedRanges(expression),
+        result: { grid: [[null]] },
+        area: here,
+        blocked: false,
+        generation: 0,
+      };
     } catch (error) {
       const message = error instanceof FormulaSyntaxError ? error.message : String(error);
-      return { text, expression: undefined, syntaxError: message, reads: [], result: { error: { error: '#NAME?', message } }, area: here, blocked: false, generation: 0 };
+      return {
+        text,
+        expression: undefined,
+        syntaxError: message,
+        reads: [],
+        result: { error: { error: '#NAME?', message } },
+        area: here,
+        blocked: false,
+        generation: 0,
+      };
     }
   }
 
@@ -507,4 +531,3 @@ export class PreviewWorkbook implements WorkbookModel {
 export function createWorkbook(firstSheet = 'Sheet1'): PreviewWorkbook {
   return new PreviewWorkbook(firstSheet);
 }
-

@@ -15,7 +15,8 @@ export function frozenTitle(title: string, reportName: string, asOf: string): st
 export function frozenText(text: string, asOf: string): string {
   if (text === LIVE_SETTINGS_HEADING) return `Settings used (as of ${asOf} UTC; editing them here changes nothing)`;
   if (text === LIVE_QQ_LABEL) return 'Normal Q–Q points';
-  if (text.endsWith(LIVE_NOTE)) return `${text.slice(0, -LIVE_NOTE.length)}Every number below is a value as of ${asOf} UTC, not a formula: nothing here recalculates.`;
+  if (text.endsWith(LIVE_NOTE))
+    return `${text.slice(0, -LIVE_NOTE.length)}Every number below is a value as of ${asOf} UTC, not a formula: nothing here recalculates.`;
   return text;
 }
 
@@ -46,7 +47,10 @@ export async function freezeActiveReport(now: Date): Promise<string> {
     if (!text.startsWith(REPORT_TITLE_PREFIX)) {
       throw new Error('Open a Plumbline report sheet first: the copy is made of the active report.');
     }
-    const copyName = uniqueSheetName(`${report.name} values`.slice(0, 31), sheets.items.map((s) => s.name));
+    const copyName = uniqueSheetName(
+      `${report.name} values`.slice(0, 31),
+      sheets.items.map((s) => s.name),
+    );
     sheets.add(copyName);
     await context.sync();
     const extent: RangeRef = {
@@ -70,7 +74,9 @@ export async function freezeActiveReport(now: Date): Promise<string> {
           if (typeof row[0] === 'string' && row[0] !== '') labelRows.push(top + i);
         });
         const isTitle = (i: number, j: number) => top + i === 0 && used.left + j === 0;
-        const text = values[0].map((row, i) => row.map((v, j) => (typeof v !== 'string' ? v : isTitle(i, j) ? frozenTitle(v, reportName, asOf) : frozenText(v, asOf))));
+        const text = values[0].map((row, i) =>
+          row.map((v, j) => (typeof v !== 'string' ? v : isTitle(i, j) ? frozenTitle(v, reportName, asOf) : frozenText(v, asOf))),
+        );
         return copyBlock(name, top, used.left, text, (numberFormats ?? [])[0] ?? []);
       },
       { numberFormats: true },
@@ -138,7 +144,7 @@ async function copyBlock(sheetName: string, top: number, firstColumn: number, va
   }
   if (right < 0) return;
   const cells = values.map((row) => row.slice(left, right + 1));
-  const formats = cells.map((row, i) => row.map((v, j) => (typeof v === 'string' ? '@' : numberFormats[i]?.[left + j] ?? 'General')));
+  const formats = cells.map((row, i) => row.map((v, j) => (typeof v === 'string' ? '@' : (numberFormats[i]?.[left + j] ?? 'General'))));
   await inPieces(
     cells.length,
     (i) => jsonBytes(cells[i]) + jsonBytes(formats[i]),
@@ -146,7 +152,9 @@ async function copyBlock(sheetName: string, top: number, firstColumn: number, va
       longRun(async (context) => {
         const target = context.workbook.worksheets
           .getItem(sheetName)
-          .getRange(formatRange({ sheet: sheetName, top: top + start, left: firstColumn + left, bottom: top + start + count - 1, right: firstColumn + right }, false));
+          .getRange(
+            formatRange({ sheet: sheetName, top: top + start, left: firstColumn + left, bottom: top + start + count - 1, right: firstColumn + right }, false),
+          );
         target.numberFormat = formats.slice(start, start + count);
         target.values = cells.slice(start, start + count);
         await context.sync();

@@ -38,7 +38,11 @@ function slice(range: RangeRef, offset: number, rows: number): string {
  * block Excel rejects as too large is asked for again at half the rows. The signal is checked
  * between blocks; a cancelled read throws ReadCancelled and hands on nothing more.
  */
-export async function readRowBlocks(ranges: readonly RangeRef[], onBlock: (block: RowBlock) => void | Promise<void>, options: RowBlockOptions = {}): Promise<void> {
+export async function readRowBlocks(
+  ranges: readonly RangeRef[],
+  onBlock: (block: RowBlock) => void | Promise<void>,
+  options: RowBlockOptions = {},
+): Promise<void> {
   if (ranges.length === 0) return;
   const { signal, progress } = options;
   const total = rowCount(ranges[0]);
@@ -46,13 +50,18 @@ export async function readRowBlocks(ranges: readonly RangeRef[], onBlock: (block
   const sizer = new BlockSizer(columns * (options.numberFormats === true ? 2 : 1));
   const properties = options.numberFormats === true ? 'values, numberFormat' : 'values';
   progress?.(0, total);
-  for (let offset = 0; offset < total; ) {
+  for (let offset = 0; offset < total;) {
     if (signal?.aborted) throw new ReadCancelled();
     const rows = Math.min(sizer.rows, total - offset);
     let read: Pick<RowBlock, 'values' | 'numberFormats'>;
     try {
       read = await longRun(async (context) => {
-        const proxies = ranges.map((r) => context.workbook.worksheets.getItem(r.sheet).getRange(slice(r, offset, rows)).load(properties));
+        const proxies = ranges.map((r) =>
+          context.workbook.worksheets
+            .getItem(r.sheet)
+            .getRange(slice(r, offset, rows))
+            .load(properties),
+        );
         await context.sync();
         return {
           values: proxies.map((p) => p.values),

@@ -38,7 +38,8 @@ export async function rewriteReport(sheetName: string, previous: readonly Report
       },
     })),
     ...plan.formats.map((format) => ({
-      bytes: OPERATION_BYTES + (format.range.bottom - format.range.top + 1) * (format.range.right - format.range.left + 1) * (jsonBytes(format.numberFormat) + 1),
+      bytes:
+        OPERATION_BYTES + (format.range.bottom - format.range.top + 1) * (format.range.right - format.range.left + 1) * (jsonBytes(format.numberFormat) + 1),
       queue: (sheet: Excel.Worksheet) => writePlanCells(sheet, { cells: [], formats: [format] }),
     })),
     ...plan.cells.map((cell) => ({

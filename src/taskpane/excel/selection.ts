@@ -27,7 +27,10 @@ export async function selectedAreas(): Promise<string[]> {
   } catch (error) {
     const code = typeof error === 'object' && error !== null && 'code' in error ? String(error.code) : '';
     if (!CELL_EDIT_CODES.has(code)) throw error;
-    throw new Error(`Excel could not read the selection (${code}). If a cell is being edited, finish it with Enter or Esc, select the range again and press Use selection.`);
+    throw new Error(
+      `Excel could not read the selection (${code}). If a cell is being edited, finish it with Enter or Esc, select the range again and press Use selection.`,
+      { cause: error },
+    );
   }
   return clipToUsedRows(splitAreas(address));
 }

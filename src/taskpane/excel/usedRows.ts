@@ -15,7 +15,9 @@ export async function clipToUsedRows(areas: readonly string[]): Promise<string[]
   const used = await longRun(async (context) => {
     const ranges = sheets.map((sheet) => context.workbook.worksheets.getItem(sheet).getUsedRangeOrNullObject(true).load('rowIndex, rowCount'));
     await context.sync();
-    return new Map(sheets.map((sheet, i) => [sheet, ranges[i].isNullObject ? undefined : { top: ranges[i].rowIndex, bottom: ranges[i].rowIndex + ranges[i].rowCount - 1 }]));
+    return new Map(
+      sheets.map((sheet, i) => [sheet, ranges[i].isNullObject ? undefined : { top: ranges[i].rowIndex, bottom: ranges[i].rowIndex + ranges[i].rowCount - 1 }]),
+    );
   });
   return areas.map((area, i) => {
     const range = parsed[i];

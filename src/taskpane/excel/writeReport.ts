@@ -15,7 +15,10 @@ export async function writeReport(plan: (sheetName: string) => ReportPlan): Prom
     const sheets = context.workbook.worksheets;
     sheets.load('items/name');
     await context.sync();
-    const name = uniqueSheetName(REPORT_SHEET_BASE, sheets.items.map((s) => s.name));
+    const name = uniqueSheetName(
+      REPORT_SHEET_BASE,
+      sheets.items.map((s) => s.name),
+    );
     const sheet = sheets.add(name);
     await context.sync();
     try {

@@ -92,7 +92,10 @@ export function analyze(data: ReadData, choices: PaneChoices): PaneAnalysis {
   if (fit !== undefined && addedSources.size > 0) {
     try {
       const { x, y, weights } = frame.data;
-      nested = compareNested({ y, base: x.map((r) => r.filter((_, j) => !inAdded[j])), added: x.map((r) => r.filter((_, j) => inAdded[j])), weights }, settings);
+      nested = compareNested(
+        { y, base: x.map((r) => r.filter((_, j) => !inAdded[j])), added: x.map((r) => r.filter((_, j) => inAdded[j])), weights },
+        settings,
+      );
     } catch (error) {
       nestedError = message(error);
     }
@@ -118,4 +121,3 @@ export function analyze(data: ReadData, choices: PaneChoices): PaneAnalysis {
     warnings: dataWarnings(frame, fit),
   };
 }
-

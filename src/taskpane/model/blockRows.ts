@@ -99,7 +99,8 @@ export function convertBlock(values: BlockValues, sources: BlockSources, header:
   let rows = 0;
   for (let i = start; i < length; i++) {
     const located: Located[] = [{ cell: classifyCell(asCellValue(values.response[i][0])), what: header.responseName, source: sources.response }];
-    for (let j = 0; j < p; j++) located.push({ cell: classifyCell(asCellValue(values.predictors[j][i][0])), what: header.predictorNames[j], source: sources.predictors[j] });
+    for (let j = 0; j < p; j++)
+      located.push({ cell: classifyCell(asCellValue(values.predictors[j][i][0])), what: header.predictorNames[j], source: sources.predictors[j] });
     if (values.weights !== undefined && sources.weights !== undefined) {
       located.push({ cell: classifyCell(asCellValue(values.weights[i][0])), what: 'weight', source: sources.weights });
     }
@@ -108,13 +109,19 @@ export function convertBlock(values: BlockValues, sources: BlockSources, header:
     if (missing !== undefined) {
       skipped++;
       if (skippedExamples.length < EXAMPLES) {
-        skippedExamples.push({ row: worksheetRow(i), reason: `${missing.cell.kind === 'missing' && missing.cell.why === '#N/A' ? '#N/A' : 'blank'} in ${missing.what}` });
+        skippedExamples.push({
+          row: worksheetRow(i),
+          reason: `${missing.cell.kind === 'missing' && missing.cell.why === '#N/A' ? '#N/A' : 'blank'} in ${missing.what}`,
+        });
       }
       continue;
     }
     const weight = located[p + 1]?.cell;
     if (weight !== undefined && weight.kind === 'number' && !(weight.value > 0)) {
-      throw new EngineError('bad-value', `The weight in ${place(sources.weights as RangeRef, offset + i)} is ${weight.value}; every weight must be a positive number.`);
+      throw new EngineError(
+        'bad-value',
+        `The weight in ${place(sources.weights as RangeRef, offset + i)} is ${weight.value}; every weight must be a positive number.`,
+      );
     }
     used[i] = 1;
     rows++;

@@ -73,7 +73,10 @@ export function resolveRanges(choices: PaneChoices): { ranges?: ResolvedRanges; 
   if (response.left !== response.right) problems.push({ field: 'response', message: 'The response must be a single column.' });
   for (const area of predictorAreas) {
     if (area.sheet !== response.sheet || area.top !== response.top || area.bottom !== response.bottom) {
-      problems.push({ field: 'predictors', message: `Every predictor area must cover the response's rows (${response.sheet} rows ${response.top + 1}–${response.bottom + 1}).` });
+      problems.push({
+        field: 'predictors',
+        message: `Every predictor area must cover the response's rows (${response.sheet} rows ${response.top + 1}–${response.bottom + 1}).`,
+      });
       break;
     }
   }

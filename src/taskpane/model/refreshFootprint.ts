@@ -10,7 +10,12 @@ const CHECK_BLOCK_ROWS = 20_000;
  * residual table's entries (and panel headers) beyond its previous length. These may hold what
  * the user typed since, so a refresh checks them before it writes anything (no data lost).
  */
-export function newlyWrittenAddresses(previous: readonly ReportCell[], next: readonly ReportCell[], previousTableRows: number, nextTableRows: number): string[] {
+export function newlyWrittenAddresses(
+  previous: readonly ReportCell[],
+  next: readonly ReportCell[],
+  previousTableRows: number,
+  nextTableRows: number,
+): string[] {
   const written = new Set(previous.map((c) => `${c.row},${c.column}`));
   const cells = next.filter((c) => !written.has(`${c.row},${c.column}`)).map((c) => cellAddress(c.row, c.column));
   const newHeaders = headerAddresses(nextTableRows).slice(headerAddresses(previousTableRows).length);

@@ -130,7 +130,13 @@ export function planReport({ sheetName, ranges, choices, analysis, writtenAt }: 
   const formats: ReportFormat[] = [];
   const charts: ReportChart[] = [];
   const at = (row: number, column: number): RangeRef => ({ sheet: sheetName, top: row, left: column, bottom: row, right: column });
-  const block = (top: number, left: number, rows: number, columns: number): RangeRef => ({ sheet: sheetName, top, left, bottom: top + rows - 1, right: left + columns - 1 });
+  const block = (top: number, left: number, rows: number, columns: number): RangeRef => ({
+    sheet: sheetName,
+    top,
+    left,
+    bottom: top + rows - 1,
+    right: left + columns - 1,
+  });
   const label = (row: number, column: number, text: string, bold = false) => cells.push({ row, column, kind: 'label', text, bold });
 
   const { frame, fit } = analysis;
@@ -140,7 +146,8 @@ export function planReport({ sheetName, ranges, choices, analysis, writtenAt }: 
   const settings = `${SETTINGS_CELLS.level}, ${SETTINGS_CELLS.intercept}, ${SETTINGS_CELLS.knownSigma}, ${weights}, ${SETTINGS_CELLS.robust}`;
   const predictorText = joinRuns(ranges.predictorColumns).map(formatAbsolute).join(', ');
   // The weights range is written into every formula, so it belongs with the data, not with the cells to edit.
-  const weightsText = ranges.weights === undefined ? 'no weights' : `weights ${formatAbsolute(ranges.weights)} (fixed in this report: write a new one to change them)`;
+  const weightsText =
+    ranges.weights === undefined ? 'no weights' : `weights ${formatAbsolute(ranges.weights)} (fixed in this report: write a new one to change them)`;
   const specification = `${frame.responseName} from ${l.y}; predictors ${predictorText}; ${weightsText}`;
   const date = writtenAt.toISOString().slice(0, 10);
 
@@ -231,7 +238,15 @@ export function planReport({ sheetName, ranges, choices, analysis, writtenAt }: 
     topLeft: cellAddress(3 + index * CHART_STRIDE, CHART_LEFT),
     bottomRight: cellAddress(20 + index * CHART_STRIDE, CHART_RIGHT),
   });
-  charts.push({ name: 'ObservedVsFitted', title: `Observed vs fitted ${response}`, x: residuals('Fitted'), y: residuals('Observed'), xTitle: 'Fitted', yTitle: 'Observed', ...place(0) });
+  charts.push({
+    name: 'ObservedVsFitted',
+    title: `Observed vs fitted ${response}`,
+    x: residuals('Fitted'),
+    y: residuals('Observed'),
+    xTitle: 'Fitted',
+    yTitle: 'Observed',
+    ...place(0),
+  });
   charts.push({
     name: 'ResidualsVsFitted',
     title: 'Residuals vs fitted: look for curves, funnels and lone points',
@@ -262,7 +277,11 @@ export function planReport({ sheetName, ranges, choices, analysis, writtenAt }: 
 
   for (const { areas, block: gathered } of l.gathers) {
     cells.push({ row: gathered.top, column: gathered.left, kind: 'formula', formula: `=PLUMB.GATHER(${areas.map(formatAbsolute).join(', ')})` });
-    label(gathered.top, gathered.left - 1, `Gathered at the data's own rows (${columnLetters(gathered.left)} onwards): ${areas.map(formatAbsolute).join(', ')}`);
+    label(
+      gathered.top,
+      gathered.left - 1,
+      `Gathered at the data's own rows (${columnLetters(gathered.left)} onwards): ${areas.map(formatAbsolute).join(', ')}`,
+    );
   }
 
   return { cells, formats, charts, specification };

@@ -25,7 +25,8 @@ export function joinRuns(columns: readonly RangeRef[]): RangeRef[] {
   const runs: RangeRef[] = [];
   for (const column of columns) {
     const last = runs[runs.length - 1];
-    const continues = last !== undefined && last.sheet === column.sheet && last.top === column.top && last.bottom === column.bottom && column.left === last.right + 1;
+    const continues =
+      last !== undefined && last.sheet === column.sheet && last.top === column.top && last.bottom === column.bottom && column.left === last.right + 1;
     if (continues) runs[runs.length - 1] = { ...last, right: column.right };
     else runs.push(column);
   }

@@ -32,7 +32,7 @@ export function panelLeft(panel: number): number {
 /** The rectangles that entries [first, first + count) occupy, split at panel ends and every `maxRows`. */
 export function tablePieces(first: number, count: number, maxRows = ROWS_PER_PANEL): TablePiece[] {
   const pieces: TablePiece[] = [];
-  for (let start = first; start < first + count; ) {
+  for (let start = first; start < first + count;) {
     const panel = Math.floor(start / ROWS_PER_PANEL);
     const within = start - panel * ROWS_PER_PANEL;
     const rows = Math.min(first + count - start, ROWS_PER_PANEL - within, maxRows);

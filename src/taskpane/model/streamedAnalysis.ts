@@ -1,4 +1,13 @@
-import { type AccumulatedRows, EngineError, type FitSettings, fCriticalValue, fitAccumulated, type ModelFit, type NestedComparison, type SkippedRow } from '../../engine';
+import {
+  type AccumulatedRows,
+  EngineError,
+  type FitSettings,
+  fCriticalValue,
+  fitAccumulated,
+  type ModelFit,
+  type NestedComparison,
+  type SkippedRow,
+} from '../../engine';
 import { settingsOf } from './analysis';
 import type { BlockHeader } from './blockRows';
 import type { PaneChoices } from './choices';
@@ -64,7 +73,11 @@ export function analyzeStreamed(data: StreamedData, choices: PaneChoices): Strea
     warnings: [],
   };
   try {
-    const solved = fitAccumulated(full, settings, order.map((j) => header.predictorNames[j]));
+    const solved = fitAccumulated(
+      full,
+      settings,
+      order.map((j) => header.predictorNames[j]),
+    );
     result.fit = solved.fit;
     result.multiplier = solved.reference.multiplier(solved.fit.settings.level);
     result.inferenceSigma = solved.inferenceSigma;
@@ -85,7 +98,14 @@ export function analyzeStreamed(data: StreamedData, choices: PaneChoices): Strea
 /** The extra-sum-of-squares F of the last columns of `full` (in fit order), as compareNested computes it from rows. */
 function nestedStreamed(full: AccumulatedRows, fullFit: ModelFit, baseColumns: number, settings: FitSettings): NestedComparison {
   const intercept = settings.intercept ?? true;
-  const base = fitAccumulated(selectColumns(full, Array.from({ length: baseColumns }, (_, c) => c), intercept), settings).fit;
+  const base = fitAccumulated(
+    selectColumns(
+      full,
+      Array.from({ length: baseColumns }, (_, c) => c),
+      intercept,
+    ),
+    settings,
+  ).fit;
   const dfNumerator = fullFit.rank - base.rank;
   if (dfNumerator <= 0) {
     throw new EngineError('nothing-added', 'The added columns are combinations of the base columns, so they cannot change the fit: there is nothing to test.');

@@ -29,13 +29,19 @@ export function predictStreamed(grid: CellGrid, analysis: StreamedAnalysis): Str
     if (row.length !== names.length) throw new EngineError('shape', `New row ${k + 1} has ${row.length} columns; the model has ${names.length} predictors.`);
     const cells = row.map(classifyCell);
     if (cells.some((c) => c.kind === 'missing')) return undefined;
-    const x0 = [...(offset === 1 ? [1] : []), ...order.map((j) => {
-      const cell = cells[j];
-      if (cell.kind !== 'number') {
-        throw new EngineError('bad-value', `New row ${k + (headerRow ? 2 : 1)}, column ${j + 1} ("${names[j]}") holds ${describeCell(cell)}; it needs a number.`);
-      }
-      return cell.value;
-    })];
+    const x0 = [
+      ...(offset === 1 ? [1] : []),
+      ...order.map((j) => {
+        const cell = cells[j];
+        if (cell.kind !== 'number') {
+          throw new EngineError(
+            'bad-value',
+            `New row ${k + (headerRow ? 2 : 1)}, column ${j + 1} ("${names[j]}") holds ${describeCell(cell)}; it needs a number.`,
+          );
+        }
+        return cell.value;
+      }),
+    ];
     return intervals(x0, analysis);
   });
   return { predictions, headerRow };

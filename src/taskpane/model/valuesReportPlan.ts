@@ -33,7 +33,6 @@ export const LEFT_OUT_NOTE =
   'The fitted value and residual of every row are in the table on the right, computed block by block. Left out for data this large: leverage and the flags, ' +
   'the checks (Durbin–Watson, Breusch–Pagan, Jarque–Bera, Cook’s distance) and the charts, which need every row in memory at once; fit a live report on a subset of the rows to see them.';
 
-
 /**
  * The report of a streamed fit, all as values: the same tables as the live report (built by the
  * same grid modules the cell functions use), the settings they were computed with, and a note
@@ -44,7 +43,9 @@ export function planValuesReport({ sheetName, ranges, choices, analysis, predict
   const formats: ReportFormat[] = [];
   const label = (row: number, column: number, text: string, bold = false) => cells.push({ row, column, kind: 'label', text, bold });
   const put = (top: number, grid: Grid) =>
-    grid.forEach((line, i) => line.forEach((v, j) => (typeof v === 'number' ? cells.push({ row: top + i, column: j, kind: 'value', value: v }) : label(top + i, j, v))));
+    grid.forEach((line, i) =>
+      line.forEach((v, j) => (typeof v === 'number' ? cells.push({ row: top + i, column: j, kind: 'value', value: v }) : label(top + i, j, v))),
+    );
   const cell = (row: number, column: number) => ({ sheet: sheetName, top: row, left: column, bottom: row, right: column });
   const { fit, header } = analysis;
   if (fit === undefined) throw new Error(analysis.fitError ?? 'There is no fit to report.');
@@ -68,7 +69,15 @@ export function planValuesReport({ sheetName, ranges, choices, analysis, predict
   );
 
   label(11, 0, 'The model', true);
-  label(12, 0, modelEquation(header.responseName, fit.terms.map((t) => t.name), choices.intercept));
+  label(
+    12,
+    0,
+    modelEquation(
+      header.responseName,
+      fit.terms.map((t) => t.name),
+      choices.intercept,
+    ),
+  );
 
   let row = 14;
   label(row, 0, 'Which terms matter?', true);

@@ -41,7 +41,9 @@ export function ResultCards({ analysis, level, onUseRobust }: ResultCardsProps) 
       )}
       {fit.covarianceKind !== 'classical' && <p class="card">Standard errors and intervals below are robust ({fit.covarianceKind}).</p>}
       <p class="card summary">{fitSentence(fit, frame)}</p>
-      {analysis.nested && <p class={`card verdict ${analysis.nested.addedHelp ? 'helps' : 'keep'}`}>{nestedSentence(analysis.nested, analysis.addedNames, level, fit)}</p>}
+      {analysis.nested && (
+        <p class={`card verdict ${analysis.nested.addedHelp ? 'helps' : 'keep'}`}>{nestedSentence(analysis.nested, analysis.addedNames, level, fit)}</p>
+      )}
       {analysis.nestedError && (
         <p class="problem" role="alert">
           {analysis.nestedError}

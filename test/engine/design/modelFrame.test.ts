@@ -9,7 +9,14 @@ describe('header detection', () => {
   it('a text first row over numbers names the response and the terms', () => {
     const frame = buildModelFrame({
       y: [['Yield'], [1], [2], [4]],
-      x: [[['Steep', 'Grind'], [1, 5], [2, 3], [3, 4]]],
+      x: [
+        [
+          ['Steep', 'Grind'],
+          [1, 5],
+          [2, 3],
+          [3, 4],
+        ],
+      ],
       intercept: true,
     });
     expect(frame.hasHeader).toBe(true);
@@ -20,7 +27,17 @@ describe('header detection', () => {
   });
 
   it('numbers in the first row mean no header: names default to y and x1…xp', () => {
-    const frame = buildModelFrame({ y: [[1], [2], [4]], x: [[[1, 5], [2, 3], [3, 4]]], intercept: true });
+    const frame = buildModelFrame({
+      y: [[1], [2], [4]],
+      x: [
+        [
+          [1, 5],
+          [2, 3],
+          [3, 4],
+        ],
+      ],
+      intercept: true,
+    });
     expect(frame.hasHeader).toBe(false);
     expect(frame.responseName).toBe('y');
     expect(frame.termNames).toEqual(['Intercept', 'x1', 'x2']);
@@ -63,7 +80,13 @@ describe('categorical coding', () => {
   it('codes an all-text column as 0/1 indicators against its first sorted level', () => {
     const frame = buildModelFrame({ y, x: [origin], intercept: true });
     expect(frame.termNames).toEqual(['Intercept', 'Origin: Ethiopia', 'Origin: Kenya']);
-    expect(frame.data.x).toEqual([[0, 1], [0, 0], [1, 0], [0, 1], [0, 0]]);
+    expect(frame.data.x).toEqual([
+      [0, 1],
+      [0, 0],
+      [1, 0],
+      [0, 1],
+      [0, 0],
+    ]);
     expect(frame.columns[0]).toEqual({ kind: 'categorical', name: 'Origin', levels: ['Brazil', 'Ethiopia', 'Kenya'], reference: 'Brazil' });
   });
 
@@ -85,9 +108,9 @@ describe('categorical coding', () => {
   });
 
   it('text in a mostly numeric column is a bad value, not a category', () => {
-    expect(() =>
-      buildModelFrame({ y, x: [[['Temp'], [90], ['n/a'], [94], [91], [93]]], intercept: true }),
-    ).toThrow('predictors row 3, column 1 ("Temp") holds the text "n/a".');
+    expect(() => buildModelFrame({ y, x: [[['Temp'], [90], ['n/a'], [94], [91], [93]]], intercept: true })).toThrow(
+      'predictors row 3, column 1 ("Temp") holds the text "n/a".',
+    );
   });
 });
 
@@ -100,7 +123,16 @@ describe('worksheet origins (issue 13, contract C5)', () => {
     weights: { sheet: 'Data', row: 8, column: 6 },
   };
   const y = [['y'], [1], [2], [{ errorCode: '#N/A' }], [5], [6]];
-  const x = [[['a', 'b'], [10, 1], [null, 2], [30, 3], [40, 5], [50, 4]]];
+  const x = [
+    [
+      ['a', 'b'],
+      [10, 1],
+      [null, 2],
+      [30, 3],
+      [40, 5],
+      [50, 4],
+    ],
+  ];
   const weights = [['w'], [1], [1], [1], [2], [1]];
 
   it('numbers used and skipped rows by worksheet row', () => {
@@ -113,12 +145,23 @@ describe('worksheet origins (issue 13, contract C5)', () => {
   });
 
   it('names a bad cell by its worksheet address, in each range by its own origin', () => {
-    const badX = [[['a', 'b'], [10, 1], [20, 'n/a'], [30, 3], [40, 5], [50, 4]]];
+    const badX = [
+      [
+        ['a', 'b'],
+        [10, 1],
+        [20, 'n/a'],
+        [30, 3],
+        [40, 5],
+        [50, 4],
+      ],
+    ];
     expect(() => buildModelFrame({ y, x: badX, intercept: true, origins })).toThrow('predictors cell Data!E11 ("b") holds the text "n/a".');
     const badY = [['y'], [1], [{ errorCode: '#DIV/0!' }], [3], [5], [6]];
     expect(() => buildModelFrame({ y: badY, x, intercept: true, origins })).toThrow('response cell Data!B11 ("y") holds the error #DIV/0!.');
     const badW = [['w'], [1], [1], [1], [-2], [1]];
-    expect(() => buildModelFrame({ y, x, weights: badW, intercept: true, origins })).toThrow('weights cell Data!G13 is -2; every weight must be a positive number.');
+    expect(() => buildModelFrame({ y, x, weights: badW, intercept: true, origins })).toThrow(
+      'weights cell Data!G13 is -2; every weight must be a positive number.',
+    );
   });
 
   it('names a number over a predictor column by address when y has a header', () => {

@@ -1,9 +1,5 @@
 import { afterAll, describe, expect, it } from 'vitest';
-import {
-  fisherFUpperTail,
-  studentTTwoSidedP,
-  studentTUpperTail,
-} from '../../../src/engine/distributions';
+import { fisherFUpperTail, studentTTwoSidedP, studentTUpperTail } from '../../../src/engine/distributions';
 import { WorstErrors } from './errorTable';
 import { fUpperBySeries, fUpperEvenDf1, fUpperTwoDf1, tTwoSided } from './support/references';
 

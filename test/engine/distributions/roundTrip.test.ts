@@ -1,12 +1,5 @@
 import { afterAll, describe, expect, it } from 'vitest';
-import {
-  fisherFQuantile,
-  fisherFUpperTail,
-  normalQuantile,
-  normalUpperTail,
-  studentTQuantile,
-  studentTUpperTail,
-} from '../../../src/engine/distributions';
+import { fisherFQuantile, fisherFUpperTail, normalQuantile, normalUpperTail, studentTQuantile, studentTUpperTail } from '../../../src/engine/distributions';
 import { decades, WorstErrors } from './errorTable';
 
 // Round trips upperTail(quantile(p)) ≈ p are a consistency check between our own functions, not an

@@ -63,4 +63,3 @@ describe('residuals on many rows', () => {
     }
   });
 });
-

@@ -104,7 +104,10 @@ describe('Durbin–Watson', () => {
   it('exact mean and variance agree with M and A formed explicitly, weighted and not', () => {
     const { y, x } = randomProblem(32, 14, 3);
     const plain = assumptionChecks({ y, x }).durbinWatson;
-    const reference = bruteForceMoments(x, y.map(() => 1));
+    const reference = bruteForceMoments(
+      x,
+      y.map(() => 1),
+    );
     expectRelative(plain.mean, reference.mean);
     expectRelative(plain.variance, reference.variance);
     const w = y.map((_, i) => 1 + 0.3 * i);
@@ -125,7 +128,10 @@ describe('Durbin–Watson', () => {
   it('p-values: the normal approximation is near a Monte-Carlo estimate of P(D ≤ d) (loose check)', () => {
     const { y, x } = ar1Problem(34, 30, 2, 0.25);
     const dw = assumptionChecks({ y, x }).durbinWatson;
-    const m = residualMaker(x, y.map(() => 1));
+    const m = residualMaker(
+      x,
+      y.map(() => 1),
+    );
     const normal = gaussian(mulberry32(35));
     const draws = 20000;
     let below = 0;
@@ -151,7 +157,9 @@ describe('Durbin–Watson', () => {
     expect(checks.jarqueBera.pValue).toBeLessThan(0.05);
     expect(checks.unusualRows[0]).toMatchObject({ index: 23, row: 28, outlier: true });
     expect(checks.unusualRows[0].studentized).toBeGreaterThan(10);
-    expect(checks.overall).toMatch(/^worth a look first: row 28 \(studentized residual \d+\.\d, Cook's distance \d\.\d\d\) stands out: check its data first, since such a row can cause the other signals; then .*non-normal residuals/);
+    expect(checks.overall).toMatch(
+      /^worth a look first: row 28 \(studentized residual \d+\.\d, Cook's distance \d\.\d\d\) stands out: check its data first, since such a row can cause the other signals; then .*non-normal residuals/,
+    );
     expect(assumptionChecks({ y, x }).unusualRows[0].row).toBe(24);
   });
 

@@ -120,7 +120,14 @@ describe('collinearity: VIF and tolerance', () => {
       [Infinity, 0, 'collinear'],
     ]);
     // x4 regressed on x1, x2 (x3 adds nothing to their span).
-    expectRelative(result.terms[3].vif, referenceVif(base.map((r) => [r[0], r[2], r[3]]), 2, true));
+    expectRelative(
+      result.terms[3].vif,
+      referenceVif(
+        base.map((r) => [r[0], r[2], r[3]]),
+        2,
+        true,
+      ),
+    );
     expect(result.conditionNumber).toBe(Infinity);
   });
 
@@ -130,13 +137,25 @@ describe('collinearity: VIF and tolerance', () => {
     const withIntercept = collinearity(x);
     expect(withIntercept.terms[1]).toMatchObject({ vif: Infinity, tolerance: 0, undefinedBecause: 'constant' });
     // The constant adds nothing beyond the intercept, so x1's VIF is that of x1 on x3 alone.
-    expectRelative(withIntercept.terms[0].vif, referenceVif(base.map((r) => [r[0], r[2]]), 0, true));
+    expectRelative(
+      withIntercept.terms[0].vif,
+      referenceVif(
+        base.map((r) => [r[0], r[2]]),
+        0,
+        true,
+      ),
+    );
     const noIntercept = collinearity(x, undefined, undefined, { intercept: false });
     expect(noIntercept.terms[1]).toMatchObject({ vif: NaN, tolerance: NaN, undefinedBecause: 'spans-intercept' });
     expectRelative(noIntercept.terms[1].uncenteredVif ?? Number.NaN, referenceVif(x, 1, false));
     // With the constant column standing in for the intercept, x1's VIF is that of the model with one.
     expectRelative(noIntercept.terms[0].vif, withIntercept.terms[0].vif);
-    const zero = collinearity(base.map((r) => [r[0], 0]), undefined, undefined, { intercept: false });
+    const zero = collinearity(
+      base.map((r) => [r[0], 0]),
+      undefined,
+      undefined,
+      { intercept: false },
+    );
     expect(zero.terms[1]).toMatchObject({ vif: Infinity, undefinedBecause: 'constant' });
   });
 

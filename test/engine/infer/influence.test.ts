@@ -88,7 +88,14 @@ describe('residual diagnostics against an ml-matrix oracle (definitions, leave-o
     [3, 12, 1],
   ])('unweighted, seed %i: n = %i, %i predictors', (seed, n, p) => {
     const { y, x } = randomProblem(seed, n, p);
-    expectMatches(residualDiagnostics({ y, x }), reference(x, y, y.map(() => 1)));
+    expectMatches(
+      residualDiagnostics({ y, x }),
+      reference(
+        x,
+        y,
+        y.map(() => 1),
+      ),
+    );
   });
 
   it.each([4, 5])('weighted, seed %i: every formula is that of OLS on √w·y and √w·X', (seed) => {
@@ -115,7 +122,9 @@ function pick(ref: Reference): Pick<Reference, 'standardized' | 'cooksDistance'>
 }
 
 describe('delivery-time example (Montgomery, Peck & Vining, chapter 6; from memory)', () => {
-  const time = [16.68, 11.5, 12.03, 14.88, 13.75, 18.11, 8, 17.83, 79.24, 21.5, 40.33, 21, 13.5, 19.75, 24, 29, 15.35, 19, 9.5, 35.1, 17.9, 52.32, 18.75, 19.83, 10.75];
+  const time = [
+    16.68, 11.5, 12.03, 14.88, 13.75, 18.11, 8, 17.83, 79.24, 21.5, 40.33, 21, 13.5, 19.75, 24, 29, 15.35, 19, 9.5, 35.1, 17.9, 52.32, 18.75, 19.83, 10.75,
+  ];
   const cases = [7, 3, 3, 4, 6, 7, 2, 7, 30, 5, 16, 10, 4, 6, 9, 10, 6, 7, 3, 17, 10, 26, 9, 8, 4];
   const distance = [560, 220, 340, 80, 150, 330, 110, 210, 1460, 605, 688, 215, 255, 462, 448, 776, 200, 132, 36, 770, 140, 810, 450, 635, 150];
 

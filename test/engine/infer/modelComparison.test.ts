@@ -31,7 +31,12 @@ describe('compareCandidates', () => {
     const results = compareCandidates(data, CANDIDATES);
     expect(results).toHaveLength(CANDIDATES.length);
     for (const r of results) {
-      const alone = fitModel(subset(data, [...CANDIDATES[r.candidate]].sort((a, b) => a - b)));
+      const alone = fitModel(
+        subset(
+          data,
+          [...CANDIDATES[r.candidate]].sort((a, b) => a - b),
+        ),
+      );
       expect([r.aic, r.bic, r.sigma, r.residualDf, r.adjustedRSquared, r.logLikelihood]).toEqual([
         alone.aic,
         alone.bic,

@@ -21,7 +21,14 @@ describe('normalScores', () => {
   it('skips rows whose studentized residual is undefined', () => {
     // Row 4 alone carries the dummy column: leverage 1, studentized residual undefined.
     const y = [1.1, 2.3, 2.9, 10, 5.2, 5.8];
-    const x = [[1, 0], [2, 0], [3, 0], [4, 1], [5, 0], [6, 0]];
+    const x = [
+      [1, 0],
+      [2, 0],
+      [3, 0],
+      [4, 1],
+      [5, 0],
+      [6, 0],
+    ];
     const points = normalScores(residualDiagnostics({ y, x }));
     expect(points).toHaveLength(5);
     expect(points.map((p) => p.rowIndex)).not.toContain(3);

@@ -21,7 +21,10 @@ function sandwich(xData: number[][], y: number[], kind: Robust, w?: number[]): M
   const n = x.rows;
   const p = x.columns;
   const bread = inverse(x.transpose().mmul(x));
-  const e = yw.clone().sub(x.mmul(bread.mmul(x.transpose()).mmul(yw))).to1DArray();
+  const e = yw
+    .clone()
+    .sub(x.mmul(bread.mmul(x.transpose()).mmul(yw)))
+    .to1DArray();
   const meat = Matrix.zeros(p, p);
   for (let i = 0; i < n; i++) {
     const xi = x.getRowVector(i);

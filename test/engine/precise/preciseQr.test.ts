@@ -11,12 +11,14 @@ const ZERO: Fraction = { num: 0n, den: 1n };
 function exactLeastSquares(cols: Fraction[][], y: Float64Array): Fraction[] {
   const ys = Array.from(y, exactOf);
   const dot = (a: Fraction[], b: Fraction[]) => a.reduce((s, v, i) => add(s, mul(v, b[i])), ZERO);
-  return solveExact(cols.map((a) => cols.map((b) => dot(a, b))), cols.map((a) => dot(a, ys)));
+  return solveExact(
+    cols.map((a) => cols.map((b) => dot(a, b))),
+    cols.map((a) => dot(a, ys)),
+  );
 }
 
 /** 13 correct significant digits: |est − exact| ≤ 1e-13·|exact|, in rationals. */
-const digits13 = (estimate: number, exact: Fraction) =>
-  lessOrEqual(mul(abs(sub(exactOf(estimate), exact)), { num: 10n ** 13n, den: 1n }), abs(exact));
+const digits13 = (estimate: number, exact: Fraction) => lessOrEqual(mul(abs(sub(exactOf(estimate), exact)), { num: 10n ** 13n, den: 1n }), abs(exact));
 
 /** Ill-conditioned polynomial problems: x on a short interval away from 0, degree 6–9, n ≤ 30. */
 function problem(degree: number): { t: number[]; x: number[][]; columns: Float64Array[]; y: Float64Array } {
@@ -43,7 +45,10 @@ describe('double-double least squares against exact rational solutions', () => {
     it(`degree ${degree}: 13 correct digits on every coefficient, for the doubles as given and for exact powers through fitModel`, () => {
       for (let trial = 0; trial < 2; trial++) {
         const { t, x, columns, y } = problem(degree);
-        const exactOfDoubles = exactLeastSquares(columns.map((c) => Array.from(c, exactOf)), y);
+        const exactOfDoubles = exactLeastSquares(
+          columns.map((c) => Array.from(c, exactOf)),
+          y,
+        );
         const precise = preciseLeastSquares(columns, columns.map(norm), y, norm(y));
         expect(Array.from(precise.coefficients).every((b, i) => digits13(b, exactOfDoubles[i]))).toBe(true);
         // Through fitModel the hook routes the design to the precise path (plain double QR loses

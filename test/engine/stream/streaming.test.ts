@@ -10,8 +10,17 @@ import { randomProblem } from '../../support/random';
 import { readStrd, STRD_NAMES, strdAvailable } from '../../support/strd';
 
 const STREAM_TOLERANCE: Record<(typeof STRD_NAMES)[number], number> = {
-  Norris: 1e-12, NoInt1: 1e-12, NoInt2: 1e-12, Wampler2: 1e-12,
-  Pontius: 1e-11, Longley: 1e-11, Wampler1: 1e-9, Wampler3: 1e-9, Wampler4: 1e-7, Filip: 1e-5, Wampler5: 1e-5,
+  Norris: 1e-12,
+  NoInt1: 1e-12,
+  NoInt2: 1e-12,
+  Wampler2: 1e-12,
+  Pontius: 1e-11,
+  Longley: 1e-11,
+  Wampler1: 1e-9,
+  Wampler3: 1e-9,
+  Wampler4: 1e-7,
+  Filip: 1e-5,
+  Wampler5: 1e-5,
 };
 
 function blocksOf(y: number[], x: number[][], size: number, weights?: number[]): RowBlock[] {
@@ -37,7 +46,7 @@ function stream(y: number[], x: number[][], size: number, intercept: boolean, we
 }
 
 function expectAgreement(streamed: ModelFit, memory: ModelFit, tolerance: number): void {
-  const close = (a: number, b: number, what = "") => {
+  const close = (a: number, b: number, what = '') => {
     if (b === 0 || !Number.isFinite(b)) expect(a).toBe(b);
     else expect(Math.abs(a - b) / Math.abs(b), what).toBeLessThanOrEqual(tolerance);
   };
@@ -60,7 +69,11 @@ function expectAgreement(streamed: ModelFit, memory: ModelFit, tolerance: number
 
 describe('streamed fits agree with in-memory fits', () => {
   it.each([1, 7, 4096])('random designs with blocks of %i rows, with and without weights', (size) => {
-    for (const [seed, n, p] of [[1, 50, 3], [2, 5000, 8], [3, 300, 1]]) {
+    for (const [seed, n, p] of [
+      [1, 50, 3],
+      [2, 5000, 8],
+      [3, 300, 1],
+    ]) {
       const { y, x } = randomProblem(seed, n, p);
       expectAgreement(stream(y, x, size, true), fitModel({ y, x }), 1e-12);
       expectAgreement(stream(y, x, size, false), fitModel({ y, x }, { intercept: false }), 1e-12);
@@ -103,7 +116,11 @@ describe('streamed fits agree with in-memory fits', () => {
 
   it('names the row and predictor of a non-finite value, wherever in the block it falls', () => {
     const rows = 600;
-    for (const [row, value] of [[0, Number.NaN], [300, Number.POSITIVE_INFINITY], [599, Number.NEGATIVE_INFINITY]] as const) {
+    for (const [row, value] of [
+      [0, Number.NaN],
+      [300, Number.POSITIVE_INFINITY],
+      [599, Number.NEGATIVE_INFINITY],
+    ] as const) {
       const accumulator = new RegressionAccumulator(2, true);
       accumulator.addBlock({ rows: 10, x: new Float64Array(20).fill(1).map((v, i) => v + i), y: new Float64Array(10).fill(1) });
       const x = Float64Array.from({ length: 2 * rows }, (_, i) => Math.sin(i));

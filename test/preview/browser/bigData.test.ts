@@ -216,7 +216,9 @@ describe.skipIf(!available)('large data in the pane', { timeout: 1.5 * WAIT_MS }
     await setCell('Plumbline report', freedCell, 'my note');
     await setCell('Big', 'A3', 7);
     await refresh();
-    await expect.poll(() => page().locator('.problem').innerText(), { timeout: WAIT_MS }).toContain(`Refresh would write over cells filled since the report was written (${pieceAddress(freed)})`);
+    await expect
+      .poll(() => page().locator('.problem').innerText(), { timeout: WAIT_MS })
+      .toContain(`Refresh would write over cells filled since the report was written (${pieceAddress(freed)})`);
     const kept = await page().evaluate(
       (address) =>
         Excel.run(async (context) => {
@@ -228,36 +230,40 @@ describe.skipIf(!available)('large data in the pane', { timeout: 1.5 * WAIT_MS }
     );
     expect(kept).toBe('my note');
   });
-  it('freezes the values report, its residual table of every row included, though it is far more than one 5 MB request', async () => {
-    // "Resource limits and performance optimization for Office Add-ins": each request and response is capped at 5 MB.
-    await page().evaluate(() =>
-      Excel.run(async (context) => {
-        context.workbook.worksheets.getItem('Plumbline report').activate();
-        await context.sync();
-      }),
-    );
-    await page().getByRole('button', { name: 'Freeze a copy' }).click();
-    // Every cell of the report is read and the filled ones written again: the slowest step here.
-    await expect.poll(() => page().locator('.done').innerText(), { timeout: 3 * WAIT_MS }).toContain('Values-only copy written to "Plumbline report values"');
-    // The copy keeps every cell at its place in the report; sampled entries of the table must match the report's.
-    const entries = [0, 99_999, ROWS - 2];
-    const { report, copy } = await page().evaluate(
-      ({ reportCells, copyCells }) =>
+  it(
+    'freezes the values report, its residual table of every row included, though it is far more than one 5 MB request',
+    async () => {
+      // "Resource limits and performance optimization for Office Add-ins": each request and response is capped at 5 MB.
+      await page().evaluate(() =>
         Excel.run(async (context) => {
-          const read = (sheet: string, addresses: string[]) => addresses.map((a) => context.workbook.worksheets.getItem(sheet).getRange(a).load('values'));
-          const fromReport = read('Plumbline report', reportCells);
-          const fromCopy = read('Plumbline report values', copyCells);
+          context.workbook.worksheets.getItem('Plumbline report').activate();
           await context.sync();
-          return { report: fromReport.map((r) => r.values[0]), copy: fromCopy.map((r) => r.values[0]) };
         }),
-      {
-        reportCells: entries.map((i) => pieceAddress(tablePieces(i, 1)[0])),
-        copyCells: entries.map((i) => pieceAddress(tablePieces(i, 1)[0])),
-      },
-    );
-    expect(report.every((row) => typeof row[0] === 'number')).toBe(true);
-    expect(copy).toEqual(report);
-  }, 3.5 * WAIT_MS);
+      );
+      await page().getByRole('button', { name: 'Freeze a copy' }).click();
+      // Every cell of the report is read and the filled ones written again: the slowest step here.
+      await expect.poll(() => page().locator('.done').innerText(), { timeout: 3 * WAIT_MS }).toContain('Values-only copy written to "Plumbline report values"');
+      // The copy keeps every cell at its place in the report; sampled entries of the table must match the report's.
+      const entries = [0, 99_999, ROWS - 2];
+      const { report, copy } = await page().evaluate(
+        ({ reportCells, copyCells }) =>
+          Excel.run(async (context) => {
+            const read = (sheet: string, addresses: string[]) => addresses.map((a) => context.workbook.worksheets.getItem(sheet).getRange(a).load('values'));
+            const fromReport = read('Plumbline report', reportCells);
+            const fromCopy = read('Plumbline report values', copyCells);
+            await context.sync();
+            return { report: fromReport.map((r) => r.values[0]), copy: fromCopy.map((r) => r.values[0]) };
+          }),
+        {
+          reportCells: entries.map((i) => pieceAddress(tablePieces(i, 1)[0])),
+          copyCells: entries.map((i) => pieceAddress(tablePieces(i, 1)[0])),
+        },
+      );
+      expect(report.every((row) => typeof row[0] === 'number')).toBe(true);
+      expect(copy).toEqual(report);
+    },
+    3.5 * WAIT_MS,
+  );
 
   it('reads and fits 21 predictors over 12,000 rows, more than one 5 MB response, in blocks sized by payload', async () => {
     const rows = 12_000;
@@ -282,9 +288,13 @@ describe.skipIf(!available)('large data in the pane', { timeout: 1.5 * WAIT_MS }
       },
       { rows, width },
     );
-    await page().locator('#response').fill(`Wide!A1:A${rows + 1}`);
+    await page()
+      .locator('#response')
+      .fill(`Wide!A1:A${rows + 1}`);
     await page().locator('#response').dispatchEvent('change');
-    await page().locator('#predictors').fill(`Wide!B1:V${rows + 1}`);
+    await page()
+      .locator('#predictors')
+      .fill(`Wide!B1:V${rows + 1}`);
     await page().locator('#predictors').dispatchEvent('change');
     await page().getByRole('button', { name: 'Read data and fit' }).click();
     await expect.poll(() => page().locator('.data-summary').innerText(), { timeout: WAIT_MS }).toContain(`Rows used: ${rows.toLocaleString('en-US')}`);

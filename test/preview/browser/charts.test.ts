@@ -31,28 +31,30 @@ describe.skipIf(!available)('charts and formatting in the preview workbook', () 
   });
 
   it('draws a scatter chart added through the Excel API, over the cells it was placed on', async () => {
-    const name = await session.page.evaluate((title) =>
-      Excel.run(async (context) => {
-        const sheet = context.workbook.worksheets.getItem('Batches');
-        const chart = sheet.charts.add(Excel.ChartType.xyscatter, sheet.getRange('B1:C61'), Excel.ChartSeriesBy.columns);
-        chart.series.load('items');
-        await context.sync();
-        // Whatever charts.add laid out goes; the one series wanted is added with steep time as X.
-        for (const made of [...chart.series.items].reverse()) made.delete();
-        const series = chart.series.add('Extraction yield (%)');
-        series.setXAxisValues(sheet.getRange('C2:C61'));
-        series.setValues(sheet.getRange('B2:B61'));
-        chart.title.text = title;
-        chart.axes.categoryAxis.title.text = 'Steep time (h)';
-        chart.axes.valueAxis.title.text = 'Extraction yield (%)';
-        chart.setPosition('H2', 'K20');
-        sheet.activate();
-        chart.load('name');
-        chart.series.load('count');
-        await context.sync();
-        return `${chart.name}: ${chart.series.count} series`;
-      }),
-    TITLE);
+    const name = await session.page.evaluate(
+      (title) =>
+        Excel.run(async (context) => {
+          const sheet = context.workbook.worksheets.getItem('Batches');
+          const chart = sheet.charts.add(Excel.ChartType.xyscatter, sheet.getRange('B1:C61'), Excel.ChartSeriesBy.columns);
+          chart.series.load('items');
+          await context.sync();
+          // Whatever charts.add laid out goes; the one series wanted is added with steep time as X.
+          for (const made of [...chart.series.items].reverse()) made.delete();
+          const series = chart.series.add('Extraction yield (%)');
+          series.setXAxisValues(sheet.getRange('C2:C61'));
+          series.setValues(sheet.getRange('B2:B61'));
+          chart.title.text = title;
+          chart.axes.categoryAxis.title.text = 'Steep time (h)';
+          chart.axes.valueAxis.title.text = 'Extraction yield (%)';
+          chart.setPosition('H2', 'K20');
+          sheet.activate();
+          chart.load('name');
+          chart.series.load('count');
+          await context.sync();
+          return `${chart.name}: ${chart.series.count} series`;
+        }),
+      TITLE,
+    );
     expect(name).toBe('Chart 1: 1 series');
     const figure = session.page.getByRole('img', { name: TITLE });
     await figure.waitFor();

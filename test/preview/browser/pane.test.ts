@@ -67,7 +67,9 @@ describe.skipIf(!available)('guided pane in the preview workbook', () => {
     const frame = buildModelFrame({ y: grid.map((r) => [r[1]]), x: [grid.map((r) => r.slice(2))], intercept: true });
     const fit = fitModel(frame.data);
     for (let i = 0; i < fit.terms.length; i++) expect(await cards.nth(i).innerText()).toBe(termSentence(fit.terms[i], frame, 0.95));
-    expect(await cards.nth(1).innerText()).toMatch(/^Steep time: each extra hour is associated with \+0\.\d+ points of extraction yield, other predictors held fixed \(95% CI /);
+    expect(await cards.nth(1).innerText()).toMatch(
+      /^Steep time: each extra hour is associated with \+0\.\d+ points of extraction yield, other predictors held fixed \(95% CI /,
+    );
     expect(await page().locator('.verdict').innerText()).toContain('No evidence that Bean age (days) adds anything');
     await screenshot(page(), 'pane-results');
   });
@@ -93,9 +95,11 @@ describe.skipIf(!available)('guided pane in the preview workbook', () => {
     }
     expect(firstReport.values.flat()).toContain('Durbin–Watson');
     await screenshot(page(), 'report');
-    await page().locator('.grid-scroller').evaluate((el) => {
-      el.scrollLeft = 760;
-    });
+    await page()
+      .locator('.grid-scroller')
+      .evaluate((el) => {
+        el.scrollLeft = 760;
+      });
     await screenshot(page(), 'report-charts');
   });
 
@@ -146,7 +150,10 @@ describe.skipIf(!available)('guided pane in the preview workbook', () => {
     const report = await sheetSnapshot('Plumbline report');
     const header = report.values.findIndex((r) => r[0] === 'Row' && r[1] === 'Observed');
     expect(header).toBeGreaterThan(0);
-    const rows = report.values.slice(header + 1).map((r) => r[0]).filter((v) => typeof v === 'number');
+    const rows = report.values
+      .slice(header + 1)
+      .map((r) => r[0])
+      .filter((v) => typeof v === 'number');
     expect(rows).toEqual([...Array.from({ length: 8 }, (_, i) => i + 2), ...Array.from({ length: 51 }, (_, i) => i + 11)]);
     // The observed-vs-fitted chart reads the residual table, so the blanked response is a gap; a plain
     // reference to the data would show it as 0 (in Excel a formula referring to an empty cell yields 0).

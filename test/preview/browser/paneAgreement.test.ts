@@ -30,7 +30,9 @@ describe.skipIf(!available)('cards and report agree after every input change', (
 
   const useSelection = async (address: string, field: string) => {
     await goTo(address);
-    await page().getByRole('button', { name: `Use selection for ${field}` }).click();
+    await page()
+      .getByRole('button', { name: `Use selection for ${field}` })
+      .click();
   };
 
   const reportValues = (sheet: string) =>
@@ -56,9 +58,18 @@ describe.skipIf(!available)('cards and report agree after every input change', (
 
   /** Writes a report and checks that its σ̂, R² and terms are the ones the cards show. */
   const expectAgreement = async (step: string) => {
-    const before = await page().locator('.done').count() > 0 ? await page().locator('.done').innerText() : '';
+    const before = (await page().locator('.done').count()) > 0 ? await page().locator('.done').innerText() : '';
     await page().getByRole('button', { name: 'Write report' }).click();
-    await expect.poll(() => page().locator('.done').count().then(async (n) => (n > 0 ? page().locator('.done').innerText() : '')), { message: step }).not.toBe(before);
+    await expect
+      .poll(
+        () =>
+          page()
+            .locator('.done')
+            .count()
+            .then(async (n) => (n > 0 ? page().locator('.done').innerText() : '')),
+        { message: step },
+      )
+      .not.toBe(before);
     const done = await page().locator('.done').innerText();
     const sheet = /sheet "([^"]+)"/.exec(done)?.[1];
     expect(sheet, `${step}: ${done}`).toBeDefined();

@@ -88,9 +88,9 @@ describe.skipIf(!available)('preview workbook in Chromium', () => {
     await enter('K12', '=PLUMB.TERMS(Batches!B1:B61, Batches!C1:G50)');
     expect(await cellText('K12')).toBe('#VALUE!');
     await session.page.locator('[data-cell="K12"]').click();
-    await expect.poll(() => session.page.locator('.status-line').innerText()).toContain(
-      'response has 61 rows but predictors has 50; select the same rows for both.',
-    );
+    await expect
+      .poll(() => session.page.locator('.status-line').innerText())
+      .toContain('response has 61 rows but predictors has 50; select the same rows for both.');
     await screenshot(session.page, 'preview-error');
   });
 

@@ -69,7 +69,10 @@ describe.skipIf(!available)('no data lost and nothing leaves the machine, in the
   /** Every user sheet still there, in its order, not renamed, and cell for cell as it was. */
   const expectUserSheetsUnchanged = async (after: string) => {
     const names = await sheetNames();
-    expect(names.filter((n) => USER_SHEETS.includes(n)), `sheets after ${after}`).toEqual(USER_SHEETS);
+    expect(
+      names.filter((n) => USER_SHEETS.includes(n)),
+      `sheets after ${after}`,
+    ).toEqual(USER_SHEETS);
     expect(names.slice(0, USER_SHEETS.length), `sheets after ${after}`).toEqual(USER_SHEETS);
     expect(await snapshot(USER_SHEETS), `user sheets after ${after}`).toEqual(userSnapshot);
   };
@@ -231,10 +234,14 @@ describe.skipIf(!available)('no data lost and nothing leaves the machine, in the
   });
 
   it('leaves no half-written copy when freezing fails after the cells are queued', async () => {
-    await page().evaluate((name) => Excel.run(async (context) => {
-      context.workbook.worksheets.getItem(name).activate();
-      await context.sync();
-    }), reportName);
+    await page().evaluate(
+      (name) =>
+        Excel.run(async (context) => {
+          context.workbook.worksheets.getItem(name).activate();
+          await context.sync();
+        }),
+      reportName,
+    );
     const before = await sheetNames();
     await page().evaluate(() =>
       Excel.run(async (context) => {

@@ -82,17 +82,20 @@ describe('charts.add', () => {
   });
 
   // Excel.ChartSeriesBy: "auto" guesses from the shape on desktop and means columns on the web.
-  it.each([[undefined], ['Auto' as Excel.ChartSeriesBy]])('refuses seriesBy %s with InvalidArgument, since its layout differs by platform', async (seriesBy) => {
-    const error = await officeError(
-      Excel.run(async (context) => {
-        const sheet = dataSheet(context);
-        sheet.charts.add(Excel.ChartType.xyscatter, sheet.getRange('A2:B4'), seriesBy);
-        await context.sync();
-      }),
-    );
-    expect(error.code).toBe('InvalidArgument');
-    expect(model.charts('Data')).toEqual([]);
-  });
+  it.each([[undefined], ['Auto' as Excel.ChartSeriesBy]])(
+    'refuses seriesBy %s with InvalidArgument, since its layout differs by platform',
+    async (seriesBy) => {
+      const error = await officeError(
+        Excel.run(async (context) => {
+          const sheet = dataSheet(context);
+          sheet.charts.add(Excel.ChartType.xyscatter, sheet.getRange('A2:B4'), seriesBy);
+          await context.sync();
+        }),
+      );
+      expect(error.code).toBe('InvalidArgument');
+      expect(model.charts('Data')).toEqual([]);
+    },
+  );
 
   it('numbers new charts on and sizes them 360 by 216 points', async () => {
     await addChart();

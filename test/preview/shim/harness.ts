@@ -42,7 +42,7 @@ export function thrownOfficeError(read: () => unknown): OfficeExtension.Error {
     read();
   } catch (error) {
     if (error instanceof OfficeExtension.Error) return error;
-    throw new Error(`Expected an OfficeExtension.Error, got ${String(error)}.`);
+    throw new Error(`Expected an OfficeExtension.Error, got ${String(error)}.`, { cause: error });
   }
   throw new Error('Expected the read to throw.');
 }

@@ -41,7 +41,16 @@ beforeEach(() => {
 it('runs typed task-pane code end to end', async () => {
   await Office.onReady();
   expect(Office.context.requirements.isSetSupported('ExcelApi', '1.12')).toBe(true);
-  expect(await writeTable('Terms table', ['Term', 'Estimate'], [['Intercept', 1.25], ['Steep', 0.42]])).toBe("'Terms table'!A3:B5 (3)");
+  expect(
+    await writeTable(
+      'Terms table',
+      ['Term', 'Estimate'],
+      [
+        ['Intercept', 1.25],
+        ['Steep', 0.42],
+      ],
+    ),
+  ).toBe("'Terms table'!A3:B5 (3)");
   expect(await readSelection()).toEqual({ address: "'Terms table'!A3:B3", values: [['Term', 'Estimate']] });
   expect(await writeTable('Terms table', ['Term'], [['x']])).toBe("'Terms table'!A3:A4 (2)");
   expect(model.sheetNames()).toEqual(['Sheet1', 'Terms table']);

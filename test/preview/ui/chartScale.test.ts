@@ -23,7 +23,12 @@ describe('niceTicks', () => {
   });
 
   it('always reaches past the data on both sides', () => {
-    for (const [lo, hi] of [[3.3, 97.1], [-41, -2], [1e6, 1.7e6], [0.31, 0.32]]) {
+    for (const [lo, hi] of [
+      [3.3, 97.1],
+      [-41, -2],
+      [1e6, 1.7e6],
+      [0.31, 0.32],
+    ]) {
       const t = niceTicks(lo, hi);
       expect(t.min).toBeLessThanOrEqual(lo);
       expect(t.max).toBeGreaterThanOrEqual(hi);

@@ -109,7 +109,14 @@ describe('plotChart', () => {
     wb.addChart('Data', scatter([series]));
     const before = plotChart(wb, wb.charts('Data')[0]);
     expect(before.title).toBe('Yield');
-    expect(before.series[0]).toEqual({ name: 'Yield', points: [{ x: 12, y: 17.5 }, { x: 18, y: 19.1 }, { x: 24, y: 21.4 }] });
+    expect(before.series[0]).toEqual({
+      name: 'Yield',
+      points: [
+        { x: 12, y: 17.5 },
+        { x: 18, y: 19.1 },
+        { x: 24, y: 21.4 },
+      ],
+    });
     wb.setInputs('Data', 2, 1, [[25]]);
     wb.setInputs('Data', 0, 1, [['Extraction yield']]);
     const after = plotChart(wb, wb.charts('Data')[0]);
@@ -124,7 +131,10 @@ describe('plotChart', () => {
     wb.setInputs('Data', 1, 1, [[null]]);
     wb.setInputs('Data', 2, 1, [['n/a']]);
     wb.addChart('Data', scatter([series]));
-    expect(plotChart(wb, wb.charts('Data')[0]).series[0].points).toEqual([{ x: 18, y: 0 }, { x: 24, y: 21.4 }]);
+    expect(plotChart(wb, wb.charts('Data')[0]).series[0].points).toEqual([
+      { x: 18, y: 0 },
+      { x: 24, y: 21.4 },
+    ]);
     wb.setInputs('Data', 2, 1, [['=PLUMB.MISSING()']]);
     expect(plotChart(wb, wb.charts('Data')[0]).series[0].points).toEqual([{ x: 24, y: 21.4 }]);
   });

@@ -105,11 +105,26 @@ describe('blank cells and omitted arguments', () => {
   // desktop builds as 0 (also issue 1951).
   it('passes blank cells of a range and a blank single cell as null, or as 0 with the older-desktop switch', () => {
     const { wb, seen } = peekWorkbook(peek('any'));
-    wb.setInputs('Data', 0, 0, [[1, null], [null, 'x']]);
+    wb.setInputs('Data', 0, 0, [
+      [1, null],
+      [null, 'x'],
+    ]);
     wb.setInputs('Data', 5, 0, [['=PLUMB.PEEK(A1:B2, B1)']]);
-    expect(seen.calls.at(-1)?.slice(0, 2)).toEqual([[[1, null], [null, 'x']], null]);
+    expect(seen.calls.at(-1)?.slice(0, 2)).toEqual([
+      [
+        [1, null],
+        [null, 'x'],
+      ],
+      null,
+    ]);
     wb.setCalculationBehaviour({ blankCellsAs: 0 });
-    expect(seen.calls.at(-1)?.slice(0, 2)).toEqual([[[1, 0], [0, 'x']], 0]);
+    expect(seen.calls.at(-1)?.slice(0, 2)).toEqual([
+      [
+        [1, 0],
+        [0, 'x'],
+      ],
+      0,
+    ]);
   });
 
   // "Custom parameter options", Optional parameters: an omitted optional argument is null.
@@ -162,7 +177,10 @@ describe('repeating parameters and parameter addresses', () => {
   // "Custom parameter options", Repeating parameters: the values are provided in an array.
   it('passes the arguments of a repeating parameter as one array of their values', () => {
     const { wb, calls } = setup('Data');
-    wb.setInputs('Data', 0, 0, [[1, 10, 100], [2, 20, 200]]);
+    wb.setInputs('Data', 0, 0, [
+      [1, 10, 100],
+      [2, 20, 200],
+    ]);
     wb.setInputs('Data', 5, 0, [['=PLUMB.GATHERISH(A1:A2, C1:C2, 7)']]);
     expect(calls.at(-1)?.[0]).toEqual([[[1], [2]], [[100], [200]], [[7]]]);
     expect(calls.at(-1)).toHaveLength(2);

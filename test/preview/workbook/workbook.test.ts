@@ -19,8 +19,20 @@ function setup() {
   wb.registerFunction('FAIL', () => {
     throw new CustomFunctionsError('#VALUE!', 'response is empty: select the column of responses.');
   });
-  wb.setFunctionShapes([{ id: 'SCALE', parameters: [{ dimensionality: 'matrix', optional: false }, { dimensionality: 'scalar', optional: false }] }]);
-  wb.setInputs('Data', 0, 0, [[1, 2], [3, 4], [5, 6]]);
+  wb.setFunctionShapes([
+    {
+      id: 'SCALE',
+      parameters: [
+        { dimensionality: 'matrix', optional: false },
+        { dimensionality: 'scalar', optional: false },
+      ],
+    },
+  ]);
+  wb.setInputs('Data', 0, 0, [
+    [1, 2],
+    [3, 4],
+    [5, 6],
+  ]);
   return wb;
 }
 

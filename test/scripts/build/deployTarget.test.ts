@@ -12,8 +12,14 @@ describe('deploy origin', () => {
   });
 
   it('keeps a path, drops a closing slash, and makes the AppDomain scheme://host[:port]', () => {
-    expect(parseBaseUrl('https://stats.example.org/plumbline/')).toEqual({ baseUrl: 'https://stats.example.org/plumbline', appDomain: 'https://stats.example.org' });
-    expect(parseBaseUrl('https://addins.example.com:8443')).toEqual({ baseUrl: 'https://addins.example.com:8443', appDomain: 'https://addins.example.com:8443' });
+    expect(parseBaseUrl('https://stats.example.org/plumbline/')).toEqual({
+      baseUrl: 'https://stats.example.org/plumbline',
+      appDomain: 'https://stats.example.org',
+    });
+    expect(parseBaseUrl('https://addins.example.com:8443')).toEqual({
+      baseUrl: 'https://addins.example.com:8443',
+      appDomain: 'https://addins.example.com:8443',
+    });
   });
 
   it('refuses anything but a plain https URL', () => {

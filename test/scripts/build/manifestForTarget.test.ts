@@ -16,10 +16,7 @@ const deployed = parseXml(deployedXml);
 
 /** Every id, resid and the OfficeApp Id, in document order: what Office keys the add-in and its parts on. */
 function identifiers(root: El): string[] {
-  return [
-    path(root, 'Id').text,
-    ...allElements(root).flatMap((e) => [e.attrs.id, e.attrs.resid].filter((v): v is string => v !== undefined)),
-  ];
+  return [path(root, 'Id').text, ...allElements(root).flatMap((e) => [e.attrs.id, e.attrs.resid].filter((v): v is string => v !== undefined))];
 }
 
 describe('manifest for a deploy origin', () => {
@@ -71,7 +68,10 @@ describe('manifest for a deploy origin', () => {
 
   it('refuses a manifest that names the dev origin other than as a URL into it or as the AppDomain', () => {
     // common practice (no source): a rewrite must not silently leave a URL behind.
-    const stray = devXml.replace('<SupportUrl DefaultValue="https://localhost:3000/taskpane.html"/>', '<SupportUrl DefaultValue="https://localhost:30000/x.html"/>');
+    const stray = devXml.replace(
+      '<SupportUrl DefaultValue="https://localhost:3000/taskpane.html"/>',
+      '<SupportUrl DefaultValue="https://localhost:30000/x.html"/>',
+    );
     expect(stray).not.toBe(devXml);
     expect(() => manifestForTarget(stray, sample)).toThrow(/other than as a URL/);
   });

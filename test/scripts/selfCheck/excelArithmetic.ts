@@ -19,7 +19,8 @@ export interface ArithmeticSheets {
   valueAt(sheet: string, address: string): Scalar | null;
 }
 
-const TOKEN = /\s*(?:(?<string>"(?:[^"]|"")*")|(?<ref>(?:[A-Za-z_][A-Za-z0-9_.]*!)?\$?[A-Z]{1,3}\$?\d+(?::\$?[A-Z]{1,3}\$?\d+)?)(?![A-Za-z0-9_(])|(?<number>\d+(?:\.\d+)?(?:[eE][-+]?\d+)?)|(?<name>[A-Z][A-Z0-9.]*)(?=\()|(?<op>>=|<=|<>|[-+*/=<>(),]))/y;
+const TOKEN =
+  /\s*(?:(?<string>"(?:[^"]|"")*")|(?<ref>(?:[A-Za-z_][A-Za-z0-9_.]*!)?\$?[A-Z]{1,3}\$?\d+(?::\$?[A-Z]{1,3}\$?\d+)?)(?![A-Za-z0-9_(])|(?<number>\d+(?:\.\d+)?(?:[eE][-+]?\d+)?)|(?<name>[A-Z][A-Z0-9.]*)(?=\()|(?<op>>=|<=|<>|[-+*/=<>(),]))/y;
 
 function tokens(formula: string): string[] {
   const out: string[] = [];
@@ -185,7 +186,10 @@ class FormulaEvaluation {
 
   private apply(name: string, args: (() => Value)[]): Value {
     const numbers = (): number[] | { error: string } => {
-      const all = args.flatMap((a) => { const v = a(); return Array.isArray(v) ? v.filter((x) => typeof x === 'number' || isError(x)) : [this.number(v)]; });
+      const all = args.flatMap((a) => {
+        const v = a();
+        return Array.isArray(v) ? v.filter((x) => typeof x === 'number' || isError(x)) : [this.number(v)];
+      });
       const error = all.find(isError);
       return error ?? (all as number[]);
     };

@@ -8,10 +8,7 @@ import { cellAddress } from '../../../src/addressing/a1';
 import { toTypedFormula } from '../../../scripts/selfCheck/fileFormulas';
 import type { CellContent, SelfCheckPlan } from '../../../scripts/selfCheck/plan';
 
-export type FileCell =
-  | { value: number | string }
-  | { error: string }
-  | { formula: string; spill?: string };
+export type FileCell = { value: number | string } | { error: string } | { formula: string; spill?: string };
 
 export interface FileSheet {
   name: string;

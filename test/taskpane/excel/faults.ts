@@ -47,4 +47,3 @@ export function injectTableWriteFailure(failAt: number) {
   } as typeof proto.load;
   return counts;
 }
-

@@ -23,8 +23,16 @@ const NOW = new Date('2026-01-02T03:04:00Z');
 function bigReport(model: PreviewWorkbook, rows: number): (i: number, j: number) => number {
   const value = (i: number, j: number) => (i * 11 + j + 1) / 7 + 1e-3;
   model.addSheet('Plumbline report');
-  model.setInputs('Plumbline report', 0, 0, [['Plumbline report: invented'], ...Array.from({ length: rows }, (_, i) => [`label ${i}`, ...Array.from({ length: 11 }, (_, j) => value(i, j))])]);
-  model.setNumberFormats('Plumbline report', 1, 0, Array.from({ length: rows }, () => ['@', ...Array.from({ length: 11 }, () => '0.000')]));
+  model.setInputs('Plumbline report', 0, 0, [
+    ['Plumbline report: invented'],
+    ...Array.from({ length: rows }, (_, i) => [`label ${i}`, ...Array.from({ length: 11 }, (_, j) => value(i, j))]),
+  ]);
+  model.setNumberFormats(
+    'Plumbline report',
+    1,
+    0,
+    Array.from({ length: rows }, () => ['@', ...Array.from({ length: 11 }, () => '0.000')]),
+  );
   model.activateSheet('Plumbline report');
   return value;
 }
@@ -47,7 +55,9 @@ describe('freezeActiveReport against the strict host', () => {
       expect(model.valueAt({ sheet: name, row: 1 + i, column: 11 })).toBe(value(i, 10));
       expect(model.numberFormatAt({ sheet: name, row: 1 + i, column: 11 })).toBe('0.000');
     }
-    expect(model.valueAt({ sheet: name, row: 0, column: 0 })).toBe('Plumbline report: invented: frozen copy of "Plumbline report", values as of 2026-01-02 03:04 UTC');
+    expect(model.valueAt({ sheet: name, row: 0, column: 0 })).toBe(
+      'Plumbline report: invented: frozen copy of "Plumbline report", values as of 2026-01-02 03:04 UTC',
+    );
     expect(model.usedExtent(name)).toEqual({ rows: rows + 1, columns: 12 });
   });
 
@@ -55,7 +65,10 @@ describe('freezeActiveReport against the strict host', () => {
     const { model } = freshHost();
     model.addSheet('Plumbline report');
     model.setInputs('Plumbline report', 0, 0, [['Plumbline report: invented']]);
-    model.setInputs('Plumbline report', 9, 10, [[11, 1.5, -0.25], [12, 2.5, 0.75]]);
+    model.setInputs('Plumbline report', 9, 10, [
+      [11, 1.5, -0.25],
+      [12, 2.5, 0.75],
+    ]);
     model.activateSheet('Plumbline report');
     const name = await freezeActiveReport(NOW);
     expect(String(model.valueAt({ sheet: name, row: 0, column: 0 }))).toMatch(/^Plumbline report: invented: frozen copy/);
@@ -124,7 +137,9 @@ describe('freezeActiveReport of a live report', () => {
         if (typeof value === 'string') texts.push(value);
       }
     }
-    expect(texts.filter((t) => t.startsWith(REPORT_TITLE_PREFIX))).toEqual(['Plumbline report: Yield: frozen copy of "Plumbline report", values as of 2026-01-02 03:04 UTC']);
+    expect(texts.filter((t) => t.startsWith(REPORT_TITLE_PREFIX))).toEqual([
+      'Plumbline report: Yield: frozen copy of "Plumbline report", values as of 2026-01-02 03:04 UTC',
+    ]);
     for (const live of [LIVE_NOTE, LIVE_SETTINGS_HEADING, LIVE_QQ_LABEL, 'live formula', 'recalculates']) {
       expect(texts.filter((t) => t.includes(live) && !t.includes('nothing here recalculates'))).toEqual([]);
     }

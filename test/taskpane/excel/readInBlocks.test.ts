@@ -46,8 +46,15 @@ describe('readInBlocks against the strict host', () => {
     // Seventeen-digit numbers: about 21 bytes a cell in the response, so the whole table is over 5 MB.
     const value = (i: number, j: number) => (i * 22 + j + 1) / 7 + 1e-3;
     model.addSheet('Data');
-    model.setInputs('Data', 0, 0, Array.from({ length: rows }, (_, i) => Array.from({ length: 22 }, (_, j) => value(i, j))));
-    expect(JSON.stringify(Array.from({ length: rows }, (_, i) => Array.from({ length: 22 }, (_, j) => [value(i, j)]))).length).toBeGreaterThan(PAYLOAD_LIMIT_BYTES);
+    model.setInputs(
+      'Data',
+      0,
+      0,
+      Array.from({ length: rows }, (_, i) => Array.from({ length: 22 }, (_, j) => value(i, j))),
+    );
+    expect(JSON.stringify(Array.from({ length: rows }, (_, i) => Array.from({ length: 22 }, (_, j) => [value(i, j)]))).length).toBeGreaterThan(
+      PAYLOAD_LIMIT_BYTES,
+    );
 
     const seen = await readAll({ response: column(0, rows), predictors: Array.from({ length: 21 }, (_, j) => column(j + 1, rows)) });
     expect(seen.rows.length).toBeGreaterThan(1);
@@ -62,7 +69,12 @@ describe('readInBlocks against the strict host', () => {
     const rows = 3_000;
     const text = (i: number) => `${String(i).padStart(5, '0')}${'x'.repeat(1_995)}`;
     model.addSheet('Data');
-    model.setInputs('Data', 0, 0, Array.from({ length: rows }, (_, i) => [text(i), i]));
+    model.setInputs(
+      'Data',
+      0,
+      0,
+      Array.from({ length: rows }, (_, i) => [text(i), i]),
+    );
     // One column's first guess covers all 3,000 rows (numbers are light); the text makes it 6 MB, refused, then two halves.
     const seen = await readAll({ response: column(0, rows), predictors: [column(1, rows)] });
     expect(seen.rows).toEqual([1_500, 1_500]);
@@ -74,7 +86,12 @@ describe('readInBlocks against the strict host', () => {
     const { model } = freshHost({ payloadLimitBytes: 20_000 });
     const rows = 5_000;
     model.addSheet('Data');
-    model.setInputs('Data', 0, 0, Array.from({ length: rows }, (_, i) => [i / 3, i]));
+    model.setInputs(
+      'Data',
+      0,
+      0,
+      Array.from({ length: rows }, (_, i) => [i / 3, i]),
+    );
     const events: string[] = [];
     const run = Excel.run;
     Object.assign(Excel, {
@@ -107,7 +124,12 @@ describe('readInBlocks against the strict host', () => {
     const { model, settings } = freshHost();
     settings.cellEditErrorCode = 'InvalidOperationInCellEditMode';
     model.addSheet('Data');
-    model.setInputs('Data', 0, 0, Array.from({ length: 10 }, (_, i) => [i, 2 * i]));
+    model.setInputs(
+      'Data',
+      0,
+      0,
+      Array.from({ length: 10 }, (_, i) => [i, 2 * i]),
+    );
     model.setCellEditMode(true);
     let blocks = 0;
     const reading = readInBlocks(

@@ -17,7 +17,12 @@ describe('rewriteReport against the strict host', () => {
     const { model } = freshHost({ payloadLimitBytes: 30_000 });
     model.addSheet('Report');
     const previous = Array.from({ length: 402 }, (_, row) => label(row, `old ${row}`));
-    model.setInputs('Report', 0, 0, previous.map((c) => [c.kind === 'label' ? c.text : '']));
+    model.setInputs(
+      'Report',
+      0,
+      0,
+      previous.map((c) => [c.kind === 'label' ? c.text : '']),
+    );
     // 400 labels of about 200 characters: some 90 kB of text, three times the lowered limit.
     const next = Array.from({ length: 400 }, (_, row) => label(row, `${row}:${'w'.repeat(200)}`));
     await rewriteReport('Report', previous, plan(next));

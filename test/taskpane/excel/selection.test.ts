@@ -76,6 +76,8 @@ describe('selectedAreas while a cell is being edited', () => {
     model.addSheet('Data');
     model.select({ sheet: 'Data', top: 0, left: 0, bottom: 3, right: 0 });
     model.setCellEditMode(true);
-    await expect(selectedAreas()).rejects.toThrow(`Excel could not read the selection (${code}). If a cell is being edited, finish it with Enter or Esc, select the range again and press Use selection.`);
+    await expect(selectedAreas()).rejects.toThrow(
+      `Excel could not read the selection (${code}). If a cell is being edited, finish it with Enter or Esc, select the range again and press Use selection.`,
+    );
   });
 });

@@ -31,13 +31,20 @@ export interface FixtureShape {
   blankResponses?: readonly number[];
 }
 
-export async function streamedFixture(model: PreviewWorkbook, { rows, predictors, headerRow = 1, blankResponses = [] }: FixtureShape): Promise<StreamedFixture> {
+export async function streamedFixture(
+  model: PreviewWorkbook,
+  { rows, predictors, headerRow = 1, blankResponses = [] }: FixtureShape,
+): Promise<StreamedFixture> {
   model.addSheet('Data');
   const header = ['y', ...Array.from({ length: predictors }, (_, j) => `x${j + 1}`)];
   const data = Array.from({ length: rows }, (_, i) => inventedRow(i, predictors)).map((row, i) => (blankResponses.includes(i) ? ['', ...row.slice(1)] : row));
   model.setInputs('Data', headerRow - 1, 0, [header, ...data]);
   const last = headerRow + rows;
-  const choices: PaneChoices = { ...EMPTY_CHOICES, response: `Data!A${headerRow}:A${last}`, predictors: `Data!B${headerRow}:${columnLetters(predictors)}${last}` };
+  const choices: PaneChoices = {
+    ...EMPTY_CHOICES,
+    response: `Data!A${headerRow}:A${last}`,
+    predictors: `Data!B${headerRow}:${columnLetters(predictors)}${last}`,
+  };
   const { ranges } = resolveRanges(choices);
   if (ranges === undefined) throw new Error('fixture ranges do not resolve');
   const read = await readData(ranges, () => undefined, new AbortController().signal, true);

@@ -79,7 +79,13 @@ describe('writeReport', () => {
   it('removes its new sheet when a step fails, leaving the workbook as it was', async () => {
     const model = freshWorkbook();
     const before = model.sheetNames();
-    const bad: ReportPlan = { ...plan(['ok']), cells: [{ row: 0, column: 0, kind: 'formula', formula: '=1' }, { row: -5, column: 0, kind: 'value', value: 1 }] };
+    const bad: ReportPlan = {
+      ...plan(['ok']),
+      cells: [
+        { row: 0, column: 0, kind: 'formula', formula: '=1' },
+        { row: -5, column: 0, kind: 'value', value: 1 },
+      ],
+    };
     await expect(writeReport(() => bad)).rejects.toBeDefined();
     expect(model.sheetNames()).toEqual(before);
   });

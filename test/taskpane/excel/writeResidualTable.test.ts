@@ -55,7 +55,9 @@ describe('writeResidualTable against a host whose syncs take time', () => {
     model.addSheet('Report');
     const counts = injectTableWriteFailure(1);
     restore = counts.restore;
-    await expect(writeResidualTable('Report', ranges, analysis, () => undefined, new AbortController().signal)).rejects.toThrow('injected failure of a table write');
+    await expect(writeResidualTable('Report', ranges, analysis, () => undefined, new AbortController().signal)).rejects.toThrow(
+      'injected failure of a table write',
+    );
     expect(counts.failed).toBe(true);
     expect(counts.writesAfterFailure).toBe(0);
     expect(counts.loadsAfterFailure).toBe(0);

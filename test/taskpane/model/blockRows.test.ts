@@ -64,7 +64,12 @@ describe('convertBlock', () => {
     const a: CellValue[] = ['a', 10, null, 30, 40, '#N/A', 60];
     const b: CellValue[] = ['b', 100, 200, 300, 400, 500, 600];
     const origin = (column: number) => ({ sheet: 'Batch log', row: 9, column });
-    const frame = buildModelFrame({ y: y.map((v) => [v]), x: [a.map((v) => [v]), b.map((v) => [v])], intercept: true, origins: { y: origin(0), x: [origin(1), origin(3)] } });
+    const frame = buildModelFrame({
+      y: y.map((v) => [v]),
+      x: [a.map((v) => [v]), b.map((v) => [v])],
+      intercept: true,
+      origins: { y: origin(0), x: [origin(1), origin(3)] },
+    });
     const { block, skipped, skippedExamples, usedRows } = convertBlock(values(y, a, b), lower, header, 0);
     expect(Array.from(block.y)).toEqual(frame.data.y);
     expect(skipped).toBe(frame.skipped.length);
@@ -110,7 +115,9 @@ describe('convertBlock', () => {
 describe('categoricalInFirstBlock', () => {
   it('says that a text column needs a live report', () => {
     const header = { hasHeader: true, responseName: 'y', predictorNames: ['a', 'Origin'] };
-    expect(categoricalInFirstBlock(values(['y', 1, 2], ['a', 1, 2], ['Origin', 'North', 'South']), header)).toMatch(/^Origin holds text.*categorical columns need the data to fit in a live report/);
+    expect(categoricalInFirstBlock(values(['y', 1, 2], ['a', 1, 2], ['Origin', 'North', 'South']), header)).toMatch(
+      /^Origin holds text.*categorical columns need the data to fit in a live report/,
+    );
     expect(categoricalInFirstBlock(values(['y', 1, 2], ['a', 1, 2], ['Origin', 3, 'South']), header)).toBeUndefined();
   });
 });

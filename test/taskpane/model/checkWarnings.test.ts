@@ -27,7 +27,9 @@ describe('checkWarnings', () => {
 
   it('names related neighbouring residuals when a slow wave is left in row order', () => {
     const y = x.map(([v], i) => 2 + 3 * v + 3 * Math.sin(i / 10) + 0.2 * normal());
-    const text = checkWarnings(assumptionChecks({ y, x }), rows).map((w) => w.text).join(' ');
+    const text = checkWarnings(assumptionChecks({ y, x }), rows)
+      .map((w) => w.text)
+      .join(' ');
     // The two-sided p in CHECKS' format, as in its "DW p-value (two-sided)" row and reading.
     expect(text).toMatch(/Durbin–Watson d = \d\.\d\d, two-sided p (< 0\.001|= 0\.\d+)\)/);
   });
@@ -38,7 +40,9 @@ describe('checkWarnings', () => {
     const y = x.map(([v]) => 2 + 3 * v + 0.3 * normal());
     y[40] += 30;
     const warnings = checkWarnings(assumptionChecks({ y, x }, undefined, rows), rows);
-    expect(warnings[0].text).toMatch(/^Row 42 \(studentized residual \d+\.\d.*\) stands out: check its data first, since such a row can cause the other signals\.$/);
+    expect(warnings[0].text).toMatch(
+      /^Row 42 \(studentized residual \d+\.\d.*\) stands out: check its data first, since such a row can cause the other signals\.$/,
+    );
     expect(warnings.filter((w) => w.text.includes('Row 42'))).toHaveLength(1);
   });
 

@@ -20,10 +20,16 @@ describe('resolveRanges', () => {
 
   it('rejects predictors whose rows differ from the response, a two-column response and bad settings', () => {
     expect(resolveRanges({ ...base, predictors: 'Batches!C1:E50' }).problems[0]).toMatchObject({ field: 'predictors' });
-    expect(resolveRanges({ ...base, response: 'Batches!A1:B61' }).problems[0]).toMatchObject({ field: 'response', message: 'The response must be a single column.' });
+    expect(resolveRanges({ ...base, response: 'Batches!A1:B61' }).problems[0]).toMatchObject({
+      field: 'response',
+      message: 'The response must be a single column.',
+    });
     expect(resolveRanges({ ...base, knownSigma: '-2' }).problems[0]).toMatchObject({ field: 'knownSigma' });
     expect(resolveRanges({ ...base, level: 95 }).problems[0]).toMatchObject({ field: 'level' });
-    expect(resolveRanges({ ...base, newRows: "'Planned batches'!B2:C6" }).problems[0]).toMatchObject({ field: 'newRows', message: 'New rows need 4 columns, one per predictor, in the same order.' });
+    expect(resolveRanges({ ...base, newRows: "'Planned batches'!B2:C6" }).problems[0]).toMatchObject({
+      field: 'newRows',
+      message: 'New rows need 4 columns, one per predictor, in the same order.',
+    });
   });
 
   it('requires the sheet in every address', () => {

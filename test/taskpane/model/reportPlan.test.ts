@@ -124,7 +124,8 @@ describe('planReport', () => {
     if (!ranges) throw new Error('bad test ranges');
     const p = planReport({ sheetName: 'R', ranges, choices: farChoices, analysis: analyze(far, farChoices), writtenAt: new Date() });
     const top = (formulaCells(p.cells).find((c) => c.formula.startsWith('=PLUMB.TERMS'))?.row ?? -99) + 1;
-    const formatAt = (row: number, column: number) => p.formats.filter((f) => f.range.top <= row && row <= f.range.bottom && f.range.left <= column && column <= f.range.right).map((f) => f.numberFormat);
+    const formatAt = (row: number, column: number) =>
+      p.formats.filter((f) => f.range.top <= row && row <= f.range.bottom && f.range.left <= column && column <= f.range.right).map((f) => f.numberFormat);
     const decimalsOf = (format: string) => (format.split('.')[1] ?? '').length;
     const fits = [true, false].map((intercept) => analyze(far, { ...farChoices, intercept }).fit?.terms ?? []);
     expect(decimalsFor(fits[0][0].standardError)).toBeLessThan(decimalsFor(fits[1][0].standardError));
@@ -142,7 +143,13 @@ describe('planReport', () => {
   it('passes the weights column between σ and the robust cell when there is one', () => {
     const { ranges } = resolveRanges({ ...choices, weights: 'Data!E1:E21' });
     if (!ranges) throw new Error('bad test ranges');
-    const withWeights = planReport({ sheetName: 'R', ranges, choices, analysis: analyze({ ...data, weights: [['w'], ...y.map(() => [1])], sources: { ...data.sources, weights: column(4) } }, choices), writtenAt: new Date() });
+    const withWeights = planReport({
+      sheetName: 'R',
+      ranges,
+      choices,
+      analysis: analyze({ ...data, weights: [['w'], ...y.map(() => [1])], sources: { ...data.sources, weights: column(4) } }, choices),
+      writtenAt: new Date(),
+    });
     const terms = withWeights.cells.find((c) => c.kind === 'formula' && c.formula.startsWith('=PLUMB.TERMS'));
     expect(terms).toMatchObject({ formula: '=PLUMB.TERMS(Data!$A$1:$A$21, Data!$B$1:$D$21, $B$5, $B$6, $B$7, Data!$E$1:$E$21, $B$8)' });
   });

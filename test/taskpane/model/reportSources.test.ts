@@ -84,7 +84,9 @@ describe('the live report in the preview host', () => {
     const { sheet, plan } = reports[name];
     const anchor = plan.cells.find((c) => c.kind === 'formula' && c.formula.startsWith(`=PLUMB.${fn}(`));
     if (anchor === undefined) throw new Error(`${name} has no ${fn}`);
-    return Array.from({ length: rows }, (_, i) => Array.from({ length: columns }, (_, j) => model.valueAt({ sheet, row: anchor.row + i, column: anchor.column + j })));
+    return Array.from({ length: rows }, (_, i) =>
+      Array.from({ length: columns }, (_, j) => model.valueAt({ sheet, row: anchor.row + i, column: anchor.column + j })),
+    );
   }
 
   beforeAll(async () => {
@@ -94,7 +96,12 @@ describe('the live report in the preview host', () => {
     const header = [['Yield', 'Temp', 'note', 'Time']];
     const rows = y.map((_, i) => [cell(i, 0), cell(i, 1), `batch ${i + 1}`, cell(i, 2)]);
     model.setInputs('Batch log', 3, 0, [...header, ...rows]);
-    model.setInputs('Block', 3, 0, [...header, ...rows].map((r) => [r[0], r[1], r[3]]));
+    model.setInputs(
+      'Block',
+      3,
+      0,
+      [...header, ...rows].map((r) => [r[0], r[1], r[3]]),
+    );
     await report('areas', { ...EMPTY_CHOICES, response: "'Batch log'!A4:A18", predictors: "'Batch log'!B4:B18,'Batch log'!D4:D18" });
     await report('block', { ...EMPTY_CHOICES, response: 'Block!A4:A18', predictors: 'Block!B4:C18' });
   }, 60_000);

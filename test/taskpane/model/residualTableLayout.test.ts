@@ -18,7 +18,10 @@ describe('residual table layout', () => {
 
   it('splits a block that straddles the panel boundary, keeping entry order', () => {
     const pieces = tablePieces(999_998, 4);
-    expect(pieces.map((p) => [p.start, p.rows])).toEqual([[999_998, 2], [1_000_000, 2]]);
+    expect(pieces.map((p) => [p.start, p.rows])).toEqual([
+      [999_998, 2],
+      [1_000_000, 2],
+    ]);
     expect(pieces.map(pieceAddress)).toEqual(['K1000004:M1000005', 'O6:Q7']);
   });
 });

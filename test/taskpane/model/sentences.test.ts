@@ -5,7 +5,19 @@ import { fitSentence, nestedSentence, readable, splitUnit, termSentence } from '
 
 const frame = buildModelFrame({
   y: [['Yield (%)'], [10], [12.1], [13.9], [16.2], [18], [19.8], [22.1], [24]],
-  x: [[['Steep (h)', 'Origin'], [1, 'North'], [2, 'South'], [3, 'North'], [4, 'South'], [5, 'North'], [6, 'South'], [7, 'North'], [8, 'South']]],
+  x: [
+    [
+      ['Steep (h)', 'Origin'],
+      [1, 'North'],
+      [2, 'South'],
+      [3, 'North'],
+      [4, 'South'],
+      [5, 'North'],
+      [6, 'South'],
+      [7, 'North'],
+      [8, 'South'],
+    ],
+  ],
   intercept: true,
 });
 const fit = fitModel(frame.data);

@@ -24,7 +24,12 @@ function streamed(blockRows: number): StreamedData {
     for (let j = 0; j < p; j++) for (let i = 0; i < rows; i++) xs[j * rows + i] = x[start + i][j];
     accumulator.addBlock({ rows, x: xs, y: Float64Array.from(y.slice(start, start + rows)) });
   }
-  return { header: { hasHeader: true, responseName: 'y', predictorNames: ['a', 'b', 'c'] }, accumulated: accumulator.result(), skipped: 0, skippedExamples: [] };
+  return {
+    header: { hasHeader: true, responseName: 'y', predictorNames: ['a', 'b', 'c'] },
+    accumulated: accumulator.result(),
+    skipped: 0,
+    skippedExamples: [],
+  };
 }
 
 const cells = {
@@ -84,7 +89,12 @@ describe('analyzeStreamed', () => {
     const accumulator = new RegressionAccumulator(2, true);
     const a = Float64Array.from(x, (r) => r[0]);
     accumulator.addBlock({ rows: n, x: Float64Array.from([...a, ...a]), y: Float64Array.from(y) });
-    const data: StreamedData = { header: { hasHeader: false, responseName: 'y', predictorNames: ['x1', 'x2'] }, accumulated: accumulator.result(), skipped: 0, skippedExamples: [] };
+    const data: StreamedData = {
+      header: { hasHeader: false, responseName: 'y', predictorNames: ['x1', 'x2'] },
+      accumulated: accumulator.result(),
+      skipped: 0,
+      skippedExamples: [],
+    };
     const stream = analyzeStreamed(data, { ...EMPTY_CHOICES, added: [1] });
     expect(stream.nested).toBeUndefined();
     expect(stream.nestedError).toBe(
@@ -104,7 +114,12 @@ describe('predictStreamed', () => {
   it('gives predict()’s estimates and intervals from the covariance, in fit order', () => {
     const choices = { ...EMPTY_CHOICES, added: [0] };
     const stream = analyzeStreamed(streamed(64), choices);
-    const grid = [['a', 'b', 'c'], [0.5, -1, 2], [1, '', 3], [-2, 0.25, 0]];
+    const grid = [
+      ['a', 'b', 'c'],
+      [0.5, -1, 2],
+      [1, '', 3],
+      [-2, 0.25, 0],
+    ];
     const { predictions, headerRow } = predictStreamed(grid, stream);
     expect(headerRow).toBe(true);
     expect(predictions[1]).toBeUndefined();

@@ -19,7 +19,16 @@ const sources = { response: sheetRef(0), predictors: [sheetRef(1), sheetRef(2), 
 // Row 6 of the data (sheet row 7) is blank in y and must be skipped, keeping the others' numbers.
 const column = (values: (number | string)[], name: string) => [[name], ...values.map((v) => [v])];
 const yCells = y.map((v, i) => (i === 5 ? '' : v));
-const values = { response: column(yCells, 'y'), predictors: [0, 1, 2].map((j) => column(x.map((r) => r[j]), ['a', 'b', 'c'][j])), weights: undefined };
+const values = {
+  response: column(yCells, 'y'),
+  predictors: [0, 1, 2].map((j) =>
+    column(
+      x.map((r) => r[j]),
+      ['a', 'b', 'c'][j],
+    ),
+  ),
+  weights: undefined,
+};
 
 function blocks(size: number) {
   const out = [];

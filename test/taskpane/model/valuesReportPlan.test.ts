@@ -14,19 +14,46 @@ import { randomProblem } from '../../support/random';
 const { y, x } = randomProblem(12, 300, 2);
 const accumulator = new RegressionAccumulator(2, true);
 accumulator.addBlock({ rows: 300, x: Float64Array.from([...x.map((r) => r[0]), ...x.map((r) => r[1])]), y: Float64Array.from(y) });
-const data: StreamedData = { header: { hasHeader: true, responseName: '=Yield', predictorNames: ['Temp', 'Time'] }, accumulated: accumulator.result(), skipped: 4, skippedExamples: [] };
+const data: StreamedData = {
+  header: { hasHeader: true, responseName: '=Yield', predictorNames: ['Temp', 'Time'] },
+  accumulated: accumulator.result(),
+  skipped: 4,
+  skippedExamples: [],
+};
 
 function plan(choices: PaneChoices) {
   const { ranges } = resolveRanges(choices);
   if (ranges === undefined) throw new Error('bad test ranges');
   const analysis = analyzeStreamed(data, choices);
-  const predictions = ranges.newRows === undefined ? undefined : predictStreamed([[20, 3], [25, '']], analysis);
-  return { analysis, plan: planValuesReport({ sheetName: 'Plumbline report', ranges, choices, analysis, predictions, dataRows: 304, writtenAt: new Date('2026-12-02T10:00:00Z') }) };
+  const predictions =
+    ranges.newRows === undefined
+      ? undefined
+      : predictStreamed(
+          [
+            [20, 3],
+            [25, ''],
+          ],
+          analysis,
+        );
+  return {
+    analysis,
+    plan: planValuesReport({
+      sheetName: 'Plumbline report',
+      ranges,
+      choices,
+      analysis,
+      predictions,
+      dataRows: 304,
+      writtenAt: new Date('2026-12-02T10:00:00Z'),
+    }),
+  };
 }
 
 const choices: PaneChoices = { ...EMPTY_CHOICES, response: 'Data!A1:A305', predictors: 'Data!B1:C305' };
 const textAt = (cells: ReturnType<typeof plan>['plan']['cells'], row: number, column: number) =>
-  cells.find((c) => c.row === row && c.column === column && c.kind === 'label')?.kind === 'label' ? (cells.find((c) => c.row === row && c.column === column) as { text: string }).text : undefined;
+  cells.find((c) => c.row === row && c.column === column && c.kind === 'label')?.kind === 'label'
+    ? (cells.find((c) => c.row === row && c.column === column) as { text: string }).text
+    : undefined;
 
 describe('planValuesReport', () => {
   it('writes no formula, and says why the results are values and how to refresh them', () => {

@@ -19,17 +19,7 @@ export const STIRLING_MIN = 8;
 export function stirlingCorrection(z: number): number {
   const r = 1 / z;
   const r2 = r * r;
-  return (
-    r *
-    (1 / 12 +
-      r2 *
-        (-1 / 360 +
-          r2 *
-            (1 / 1260 +
-              r2 *
-                (-1 / 1680 +
-                  r2 * (1 / 1188 + r2 * (-691 / 360360 + r2 * (1 / 156 + r2 * (-3617 / 122400))))))))
-  );
+  return r * (1 / 12 + r2 * (-1 / 360 + r2 * (1 / 1260 + r2 * (-1 / 1680 + r2 * (1 / 1188 + r2 * (-691 / 360360 + r2 * (1 / 156 + r2 * (-3617 / 122400))))))));
 }
 
 function stirlingLogGamma(z: number): number {
@@ -119,7 +109,6 @@ export function digamma(z: number): number {
     w += 1;
   }
   const r2 = 1 / (w * w);
-  const series =
-    r2 * (1 / 12 + r2 * (-1 / 120 + r2 * (1 / 252 + r2 * (-1 / 240 + r2 * (1 / 132 + r2 * (-691 / 32760 + r2 / 12))))));
+  const series = r2 * (1 / 12 + r2 * (-1 / 120 + r2 * (1 / 252 + r2 * (-1 / 240 + r2 * (1 / 132 + r2 * (-691 / 32760 + r2 / 12))))));
   return shift + Math.log(w) - 0.5 / w - series;
 }

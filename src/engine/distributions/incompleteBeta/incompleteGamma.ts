@@ -43,7 +43,7 @@ export function upperIncompleteGamma(a: number, x: number, logR: number, eps: nu
   let bOdd = x;
   let aEven = 1;
   let bEven = x + (1 - a);
-  let value = aEven / bEven;
+  let value: number;
   for (let c = 1; ; c++) {
     aOdd = x * aEven + c * aOdd;
     bOdd = x * bEven + c * bOdd;

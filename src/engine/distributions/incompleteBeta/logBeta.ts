@@ -27,14 +27,7 @@ export function logMinTimesBeta(a: number, b: number): number {
   const hi = Math.max(a, b);
   if (lo >= STIRLING_MIN) {
     // Stirling for all three log Γ: −½·log hi + ½·log 2π + (lo − ½)·log(lo/(lo + hi)) − hi·log(1 + lo/hi) + BCORR.
-    return (
-      Math.log(lo) -
-      0.5 * Math.log(hi) +
-      HALF_LOG_2PI +
-      betaStirlingCorrection(lo, hi) +
-      (lo - 0.5) * Math.log(lo / (lo + hi)) -
-      hi * Math.log1p(lo / hi)
-    );
+    return Math.log(lo) - 0.5 * Math.log(hi) + HALF_LOG_2PI + betaStirlingCorrection(lo, hi) + (lo - 0.5) * Math.log(lo / (lo + hi)) - hi * Math.log1p(lo / hi);
   }
   // m·Γ(m) = Γ(1 + m).
   if (hi >= STIRLING_MIN) return logGammaOnePlus(lo) + logGammaRatio(lo, hi);

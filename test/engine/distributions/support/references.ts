@@ -5,20 +5,7 @@
  * Results are returned as doubles, carried as logarithms until the last step so that tails down
  * to 1e-300 keep their relative accuracy.
  */
-import {
-  atan,
-  div,
-  expToDouble,
-  type Fixed,
-  fromDouble,
-  fromInteger,
-  ln,
-  mul,
-  ONE,
-  PI,
-  sqrt,
-  toDouble,
-} from './fixedPoint';
+import { atan, div, expToDouble, type Fixed, fromDouble, fromInteger, ln, mul, ONE, PI, sqrt, toDouble } from './fixedPoint';
 
 /** Terms below this fraction of the running sum end a series (2^-130 ≈ 7e-40). */
 const SERIES_TOLERANCE_SHIFT = 130n;
@@ -240,9 +227,7 @@ export function tTwoSided(t: number, nu: number): number {
     coefficient = mul(coefficient, coefficientRatio(k));
     zPower = mul(zPower, z);
   }
-  const a = even
-    ? mul(sinTheta, finiteSum)
-    : mul(div(2n * ONE, PI), atan(div(ft, sqrt(fnu))) + mul(mul(sinTheta, cosTheta), finiteSum));
+  const a = even ? mul(sinTheta, finiteSum) : mul(div(2n * ONE, PI), atan(div(ft, sqrt(fnu))) + mul(mul(sinTheta, cosTheta), finiteSum));
   if (ONE - a > ONE >> 100n) return toDouble(ONE - a);
 
   // Tail: leading coefficient c_start (or d_start) times z^start, then the positive remainder.
