@@ -1,4 +1,5 @@
-import { COLLINEARITY_REASON_TEXT, type Collinearity, conditionReading, type TermCollinearity } from '../engine';
+import type { Collinearity, TermCollinearity } from '../engine';
+import { COLLINEARITY_REASON_TEXT, conditionReading } from '../presentation';
 import { finiteOrBlank, type Grid, type GridCell } from './gridCell';
 
 export const COLLINEARITY_HEADER = ['Term', 'VIF', 'Tolerance'];

@@ -1,5 +1,5 @@
 import { INTERCEPT_NAME, type ModelFit } from '../engine';
-import { decimalsFor } from './decimals';
+import { decimalsFor } from '../presentation';
 import type { Grid } from './gridCell';
 
 const MINUS = '−';

@@ -1,4 +1,5 @@
 import type { NestedComparison } from '../engine';
+import { nestedReading } from '../presentation';
 import { finiteOrBlank, type Grid } from './gridCell';
 
 export function nestedGrid(result: NestedComparison): Grid {
@@ -10,6 +11,6 @@ export function nestedGrid(result: NestedComparison): Grid {
     ['Critical F', finiteOrBlank(result.fCritical)],
     ['RSS base', finiteOrBlank(result.rssBase)],
     ['RSS full', finiteOrBlank(result.rssFull)],
-    ['Reading', result.addedHelp ? 'added terms help' : 'no evidence they add anything: the smaller model is enough'],
+    ['Reading', nestedReading(result)],
   ];
 }

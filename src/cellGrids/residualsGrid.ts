@@ -3,10 +3,15 @@ import { finiteOrBlank, type Grid } from './gridCell';
 
 export const RESIDUALS_HEADER = ['Row', 'Observed', 'Fitted', 'Residual', 'Standardized', 'Studentized', 'Leverage', "Cook's distance", 'DFFITS', 'Flag'];
 
+/**
+ * Each row's flags are screens, worded by the rule that raised them: PLUMB.CHECKS names outliers by
+ * the Bonferroni test and influential rows at Cook's distance above 1, so these words must not
+ * claim more than the screen found.
+ */
 const FLAG_TEXT: Record<DiagnosticFlag, string> = {
-  'high-leverage': 'high leverage',
-  outlier: 'outlier',
-  influential: 'influential',
+  'high-leverage': 'high leverage (over 2p/n)',
+  outlier: 'large residual (|t| over 3)',
+  influential: "Cook's over 4/n",
 };
 
 /** Each text names what a blank above it means, so no blank is left unexplained. */

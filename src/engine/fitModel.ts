@@ -46,6 +46,22 @@ function withNames(solved: SolvedModel, names: readonly string[] | undefined): S
   return { ...solved, fit: { ...solved.fit, terms } };
 }
 
+/** Largest parameter list a message spells out; beyond it the parameters are counted. */
+const LISTED_PARAMETERS = 6;
+
+/**
+ * No residual df means rows ≤ rank ≤ the model's parameters, so every parameter is counted, the
+ * aliased ones too: the rows are short of the model as specified, which is what the user can change.
+ */
+function tooFewRows(n: number, parameterNames: readonly string[]): string {
+  const q = parameterNames.length;
+  const listed = q <= LISTED_PARAMETERS ? ` (${parameterNames.join(', ')})` : '';
+  return (
+    `${n === 1 ? '1 row' : `${n} rows`} cannot fit the model's ${q === 1 ? '1 parameter' : `${q} parameters`}${listed} ` +
+    `with any left over to measure the noise: the model needs more rows than parameters. Give at least ${q + 1} rows, or fewer predictors.`
+  );
+}
+
 function approximateBytes(model: SolvedModel): number {
   const n = model.fit.n;
   const q = model.fit.parameters;
@@ -70,12 +86,7 @@ export function assembleFit(solution: LeastSquaresSolution, resolved: ResolvedSe
   const q = design.matrix.cols;
   const rank = solution.qr.accepted.length;
   const residualDf = n - rank;
-  if (residualDf <= 0) {
-    throw new EngineError(
-      'no-residual-df',
-      `${n} rows cannot estimate ${rank} parameters with any left over to measure the noise: ` + 'the model needs more rows than parameters.',
-    );
-  }
+  if (residualDf <= 0) throw new EngineError('no-residual-df', tooFewRows(n, design.names));
 
   const sigmaHat = solution.yScale * Math.sqrt(solution.scaledRss / residualDf);
   const inferenceSigma = resolved.knownSigma ?? sigmaHat;

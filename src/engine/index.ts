@@ -22,12 +22,26 @@ export type { CacheStats } from './cache/modelCache';
 export { buildModelFrame, type FrameInput, type FrameOrigins, type ModelFrame, type SkippedRow } from './design/modelFrame';
 export { cellPlace, type RangeOrigin, rowNumber } from './design/origin';
 export { codeRow, type SourceColumn } from './design/categorical';
+export { badCellMessage, isCategoricalColumn } from './design/cellRules';
+export { type NewRowColumn, type NewRowNaming, type NewRowValues, readNewRowValues } from './design/newRows';
 export { classifyCell, describeCell, type Cell, type CellGrid, type CellValue, type CellErrorValue } from './design/cells';
 export { INTERCEPT_NAME } from './fit/design';
 export { collinearity, type Collinearity, type CollinearityReason, type TermCollinearity } from './infer/collinearity';
-export { assumptionChecks, type AssumptionChecks, type UnusualRow } from './infer/assumptionChecks';
-export { COLLINEARITY_REASON_TEXT, conditionReading, formatP, LARGE_VIF, unusualRowsReading } from './infer/checkReadings';
-export type { DurbinWatson, DurbinWatsonReason } from './infer/durbinWatson';
+export {
+  assumptionChecks,
+  type AssumptionChecks,
+  type BreuschPaganVerdict,
+  type DurbinWatsonVerdict,
+  type JarqueBeraVerdict,
+  type LackOfFitVerdict,
+  type OutlierVerdict,
+  type ShapiroWilkVerdict,
+  type UnusualRow,
+} from './infer/assumptionChecks';
+export { type DurbinWatsonExact, type DurbinWatsonExactReason, type DurbinWatsonMethod, EXACT_MAX_ROWS } from './infer/durbinWatsonExact';
+export { type ShapiroWilk, type ShapiroWilkReason, SHAPIRO_WILK_MAX_N, SHAPIRO_WILK_MIN_N } from './infer/shapiroWilk';
+export type { OutlierTest, OutlierTestReason } from './infer/outlierTest';
+export type { LackOfFit, LackOfFitReason } from './infer/lackOfFit';
 export type { BreuschPagan, BreuschPaganReason } from './infer/breuschPagan';
 export type { JarqueBera } from './infer/jarqueBera';
 export { normalScores, type NormalScorePoint } from './infer/normalScores';

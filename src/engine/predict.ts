@@ -1,8 +1,9 @@
 import { EngineError } from './errors';
 import { columnView } from './linalg/columnMajor';
 import { applyQTranspose } from './linalg/householderQr';
-import { solveUpper, solveUpperTransposed } from './linalg/triangular';
+import { solveUpper } from './linalg/triangular';
 import { solveModel } from './fitModel';
+import { extrapolationFlags, fittingSpan, leverageAt } from './infer/extrapolation';
 import type { LeastSquaresSolution } from './fit/leastSquares';
 import type { FitSettings, ModelData, Prediction } from './types';
 
@@ -10,7 +11,8 @@ import type { FitSettings, ModelData, Prediction } from './types';
  * Predictions at new rows: the interval for the mean response, from σ²·x₀ᵀ(XᵀWX)⁻¹x₀, and the
  * interval for one new observation, which adds σ²/w₀ (w₀ = 1 unless `newWeights` says otherwise).
  * With aliased terms a prediction exists only where it does not depend on how the aliasing is
- * resolved; elsewhere every field is NaN rather than an arbitrary number.
+ * resolved; elsewhere every number is NaN rather than an arbitrary one (the range flags still hold).
+ * Each prediction also says where it stands against the fitting rows (infer/extrapolation.ts).
  */
 export function predict(data: ModelData, xNew: number[][], settings?: FitSettings, newWeights?: number[]): Prediction[] {
   const { solution, inferenceSigma, reference, fit } = solveModel(data, settings);
@@ -21,7 +23,7 @@ export function predict(data: ModelData, xNew: number[][], settings?: FitSetting
   const multiplier = reference.multiplier(fit.settings.level);
   const hasIntercept = solution.design.hasIntercept;
   const aliasMaps = aliasCombinations(solution);
-  const rank = solution.qr.accepted.length;
+  const span = fittingSpan(data.x, solution);
 
   return xNew.map((row, i) => {
     if (row.length !== p) {
@@ -35,31 +37,28 @@ export function predict(data: ModelData, xNew: number[][], settings?: FitSetting
       throw new EngineError('bad-weight', `The weight of new row ${i + 1} is ${w0}; it must be a positive number.`);
     }
     const full = hasIntercept ? [1, ...row] : row;
-    if (!estimable(full, solution, aliasMaps)) return notEstimable();
+    if (!estimable(full, solution, aliasMaps)) return notEstimable(extrapolationFlags(row, Number.NaN, span).outsideRange);
 
     let estimate = 0;
-    const u = new Float64Array(rank);
-    solution.qr.accepted.forEach((col, a) => {
-      estimate += full[col] * solution.coefficients[col];
-      u[a] = full[col] / solution.columnScales[col];
-    });
-    solveUpperTransposed(solution.qr.r, rank, u);
-    let leverageLike = 0;
-    for (const v of u) leverageLike += v * v;
-    const meanHalf = multiplier * inferenceSigma * Math.sqrt(leverageLike);
-    const newHalf = multiplier * inferenceSigma * Math.sqrt(leverageLike + 1 / w0);
+    for (const col of solution.qr.accepted) estimate += full[col] * solution.coefficients[col];
+    const leverage = leverageAt(full, solution);
+    const meanHalf = multiplier * inferenceSigma * Math.sqrt(leverage);
+    const newHalf = multiplier * inferenceSigma * Math.sqrt(leverage + 1 / w0);
     return {
       estimate,
       meanLow: estimate - meanHalf,
       meanHigh: estimate + meanHalf,
       newLow: estimate - newHalf,
       newHigh: estimate + newHalf,
+      leverage,
+      ...extrapolationFlags(row, leverage, span),
     };
   });
 }
 
-function notEstimable(): Prediction {
-  return { estimate: Number.NaN, meanLow: Number.NaN, meanHigh: Number.NaN, newLow: Number.NaN, newHigh: Number.NaN };
+function notEstimable(outsideRange: number[]): Prediction {
+  const nan = Number.NaN;
+  return { estimate: nan, meanLow: nan, meanHigh: nan, newLow: nan, newHigh: nan, leverage: nan, outsideRange, hiddenExtrapolation: false };
 }
 
 /** For each aliased column j, coefficients c with column j = Σₐ cₐ·(accepted column a), in data units. */

@@ -126,4 +126,20 @@ export interface Prediction {
   /** Interval for one new observation at this row. */
   newLow: number;
   newHigh: number;
+  /**
+   * x₀ᵀ(XᵀWX)⁻¹x₀, x₀ the row's model columns (the intercept's 1 included), on the scale of the
+   * predictors: a new row's own weight does not enter. For a fitting row i it equals hᵢ/wᵢ (hᵢ the
+   * weighted hat diagonal), which is hᵢ itself in an unweighted fit. NaN when the row is not estimable.
+   */
+  leverage: number;
+  /**
+   * Indices into the columns of ModelData.x (the coded columns, intercept excluded) where the new
+   * value lies outside the fitting rows' [min, max]; ascending, empty when every value is inside.
+   */
+  outsideRange: number[];
+  /**
+   * Every value lies inside its column's range, yet the leverage exceeds the largest of the fitting
+   * rows' (each xᵢᵀ(XᵀWX)⁻¹xᵢ, the same scale): a combination unlike any row the model was fitted to.
+   */
+  hiddenExtrapolation: boolean;
 }

@@ -4,6 +4,7 @@
  * cells from the host.
  */
 import { type CellGrid, type CellValue, type CovarianceKind, EngineError, type FitSettings, judgeNoiseSd, type NoiseSdVerdict } from '../engine';
+import { noiseSdMessage } from '../presentation';
 
 /** A range argument as Excel passes it: row-major, blanks as "", null or 0, errors as objects. */
 export type RangeArgument = unknown[][];
@@ -128,27 +129,16 @@ export function parseSettings(levelArg: unknown, interceptArg: unknown, sigmaArg
 }
 
 /**
- * noise_sd by the rule the pane applies too (engine/noiseSd.ts): empty estimates σ, and 0 is an
- * error rather than a second way of saying "estimate".
+ * noise_sd by the rule the pane applies too (engine/noiseSd.ts), in the words the pane's field
+ * uses (presentation/noiseSd.ts): empty estimates σ, and 0 is an error rather than a second way
+ * of saying "estimate".
  */
 function parseNoiseSd(sigma: unknown): number | undefined {
   const verdict: NoiseSdVerdict =
     typeof sigma === 'number' || typeof sigma === 'string' ? judgeNoiseSd(sigma) : isUnset(sigma) ? { kind: 'estimate' } : { kind: 'not-a-number' };
-  switch (verdict.kind) {
-    case 'estimate':
-      return undefined;
-    case 'known':
-      return verdict.sigma;
-    case 'zero':
-      throw new EngineError('bad-setting', 'noise_sd is 0, but a noise standard deviation must be positive: leave noise_sd empty to estimate σ from the data.');
-    case 'decimal-comma':
-      throw new EngineError(
-        'bad-setting',
-        `noise_sd must be a number written with a point as the decimal separator, such as 0.35; got the text ${shown(sigma)}.`,
-      );
-    default:
-      throw new EngineError('bad-setting', `noise_sd must be a positive number, or left empty to estimate σ; got ${shown(sigma)}.`);
-  }
+  const problem = noiseSdMessage(verdict, { name: 'noise_sd', where: 'noise_sd', shown: shown(typeof sigma === 'string' ? sigma.trim() : sigma) });
+  if (problem !== undefined) throw new EngineError('bad-setting', problem);
+  return verdict.kind === 'known' ? verdict.sigma : undefined;
 }
 
 const COVARIANCE_NAMES = new Map<string, CovarianceKind>([

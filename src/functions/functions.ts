@@ -32,7 +32,7 @@ import { compareGrid } from '../cellGrids/compareGrid';
 import { equationGrid } from '../cellGrids/equationGrid';
 import { fitStatsGrid } from '../cellGrids/fitStatsGrid';
 import { nestedGrid } from '../cellGrids/nestedGrid';
-import { predictGrid } from '../cellGrids/predictGrid';
+import { frameColumnNames, predictGrid } from '../cellGrids/predictGrid';
 import { residualsGrid } from '../cellGrids/residualsGrid';
 import { termsGrid } from '../cellGrids/termsGrid';
 import { checksGrid } from '../cellGrids/checksGrid';
@@ -362,7 +362,7 @@ export function nestedF(
  * @param [robust] Accepted as in every PLUMB function; both intervals use the classical covariance.
  * @param invocation Passed by Excel: the address of each argument, to name rows and cells as the worksheet does.
  * @requiresParameterAddresses
- * @returns One row per new row: prediction, mean low and high, new low and high.
+ * @returns One row per new row: prediction, mean low and high, new low and high, and an extrapolation note naming the predictors outside the data's range, or saying the mix of values is unlike any row used.
  */
 export function predict(
   response: any[][],
@@ -389,6 +389,7 @@ export function predict(
     return predictGrid(
       rows.map((row) => (row === undefined ? undefined : predicted[next++])),
       r.frame.hasHeader,
+      frameColumnNames(r.frame),
     );
   });
 }
@@ -498,7 +499,7 @@ export function collinearity(
 }
 
 /**
- * Are the model's assumptions plausible? Durbin–Watson for autocorrelation, Breusch–Pagan for uneven spread, Jarque–Bera for normality, plus influential rows and collinearity, each with a reading.
+ * Are the model's assumptions plausible? Durbin–Watson for autocorrelation (exact p up to 300 rows), Breusch–Pagan for uneven spread, Shapiro–Wilk for normality (Jarque–Bera above 5000 rows), the Bonferroni outlier test, lack of fit where predictor settings repeat, plus influential rows and collinearity, each with a reading.
  * @customfunction CHECKS
  * @param response Responses: one column, with an optional text header. Row order matters for Durbin–Watson.
  * @param predictors Predictors: one or more columns with the same rows. Text columns are categorical.

@@ -1,11 +1,14 @@
-import { EngineError, RegressionAccumulator, type SkippedRow } from '../engine';
-import type { ResolvedRanges } from './model/choices';
-import type { ReadData } from './model/analysis';
-import { type BlockHeader, type BlockSources, categoricalInFirstBlock, convertBlock, detectHeader } from './model/blockRows';
-import { asCellGrid } from './model/readValues';
-import type { StreamedData } from './model/streamedAnalysis';
-import { readInBlocks } from './excel/readInBlocks';
+import type { RangeRef } from '../addressing/a1';
 import type { CellGrid } from '../engine';
+import { readInBlocks } from './excel/readInBlocks';
+import { readRanges } from './excel/readRanges';
+import type { ReadData } from './model/analysis';
+import type { BlockSources } from './model/blockRows';
+import type { ResolvedRanges } from './model/choices';
+import type { NewRowsRead } from './model/newRowPredictions';
+import { asCellGrid } from './model/readValues';
+import { StreamFold } from './model/streamFold';
+import type { StreamedData } from './model/streamedAnalysis';
 
 /**
  * Numbers in the model's data past which the pane streams: 250,000 numbers is about what fits in
@@ -14,7 +17,7 @@ import type { CellGrid } from '../engine';
  */
 export const STREAM_THRESHOLD = 250_000;
 
-export type PaneData = { kind: 'cells'; data: ReadData } | { kind: 'streamed'; data: StreamedData; dataRows: number };
+export type PaneData = { kind: 'cells'; data: ReadData } | { kind: 'streamed'; data: StreamedData };
 
 export function numbersInModel(ranges: ResolvedRanges): number {
   const rows = ranges.response.bottom - ranges.response.top + 1;
@@ -36,7 +39,27 @@ export async function readData(
   stream = isLarge(ranges),
 ): Promise<PaneData> {
   const sources: BlockSources = { response: ranges.response, predictors: ranges.predictorColumns, weights: ranges.weights };
-  return stream ? readStreamed(sources, progress, signal) : readCells(sources, progress, signal);
+  const read = stream ? await readStreamed(sources, progress, signal) : await readCells(sources, progress, signal);
+  if (ranges.newRows === undefined) return read;
+  const newRows = await readNewRows(ranges.newRows);
+  return read.kind === 'cells' ? { kind: 'cells', data: { ...read.data, newRows } } : { kind: 'streamed', data: { ...read.data, newRows } };
+}
+
+/**
+ * New rows are few: read at once, their areas joined side by side, with the column just left of
+ * the first area, where a user keeps each row's name.
+ */
+export async function readNewRows(areas: readonly RangeRef[]): Promise<NewRowsRead> {
+  const first = areas[0];
+  const labelColumn: RangeRef | undefined = first.left > 0 ? { ...first, left: first.left - 1, right: first.left - 1 } : undefined;
+  const grids = (await readRanges(labelColumn === undefined ? areas : [...areas, labelColumn])).map(asCellGrid);
+  const areaGrids = grids.slice(0, areas.length);
+  const cells: CellGrid = areaGrids[0].map((_, i) => areaGrids.flatMap((g) => [...(g[i] ?? [])]));
+  return {
+    cells,
+    labelCells: labelColumn === undefined ? undefined : grids[areas.length].map((row) => row[0]),
+    sheetRows: cells.map((_, i) => first.top + i + 1),
+  };
 }
 
 async function readCells(sources: BlockSources, progress: (read: number, total: number) => void, signal: AbortSignal): Promise<PaneData> {
@@ -59,33 +82,7 @@ async function readCells(sources: BlockSources, progress: (read: number, total: 
 }
 
 async function readStreamed(sources: BlockSources, progress: (read: number, total: number) => void, signal: AbortSignal): Promise<PaneData> {
-  const total = sources.response.bottom - sources.response.top + 1;
-  // Always with the intercept column: models without it, or in another order, are derived from R.
-  const accumulator = new RegressionAccumulator(sources.predictors.length, true, sources.weights !== undefined);
-  let header: BlockHeader | undefined;
-  let skipped = 0;
-  const skippedExamples: SkippedRow[] = [];
-  await readInBlocks(
-    sources,
-    {
-      block: (values, offset) => {
-        if (header === undefined) {
-          header = detectHeader(values, sources, total);
-          const categorical = categoricalInFirstBlock(values, header);
-          if (categorical !== undefined) throw new EngineError('bad-value', categorical);
-        }
-        const converted = convertBlock(values, sources, header, offset);
-        accumulator.addBlock(converted.block);
-        skipped += converted.skipped;
-        skippedExamples.push(...converted.skippedExamples.slice(0, 5 - skippedExamples.length));
-      },
-      progress,
-    },
-    signal,
-  );
-  const accumulated = accumulator.result();
-  if (header === undefined || accumulated.n === 0) {
-    throw new EngineError('no-rows', 'No complete rows: every row has a blank or #N/A in the response, a predictor or a weight.');
-  }
-  return { kind: 'streamed', data: { header, accumulated, skipped, skippedExamples }, dataRows: total - (header.hasHeader ? 1 : 0) };
+  const fold = new StreamFold(sources, sources.response.bottom - sources.response.top + 1);
+  await readInBlocks(sources, { block: (values, offset) => fold.add(values, offset), progress }, signal);
+  return { kind: 'streamed', data: fold.result() };
 }

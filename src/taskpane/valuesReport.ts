@@ -1,16 +1,13 @@
-import type { CellGrid } from '../engine';
-import { readRanges } from './excel/readRanges';
 import { ReadCancelled } from './excel/readRowBlocks';
 import { rewriteReport } from './excel/rewriteReport';
 import { writeReport } from './excel/writeReport';
 import { occupiedAddresses } from './excel/occupiedCells';
 import { clearResidualTable, deleteSheet, writeResidualTable } from './excel/writeResidualTable';
 import type { PaneChoices, ResolvedRanges } from './model/choices';
-import { asCellGrid } from './model/readValues';
 import { newlyWrittenAddresses } from './model/refreshFootprint';
 import type { ReportCell } from './model/reportPlan';
-import { analyzeStreamed, type StreamedAnalysis } from './model/streamedAnalysis';
-import { predictStreamed, type StreamedPredictions } from './model/streamedPredict';
+import type { StreamedAnalysis } from './model/paneAnalysis';
+import { analyzeStreamed } from './model/streamedAnalysis';
 import { planValuesReport } from './model/valuesReportPlan';
 import { readData } from './readData';
 
@@ -26,24 +23,10 @@ export interface SavedValuesReport {
 
 const noProgress = (): void => undefined;
 
-/** New rows are few: read at once, their areas joined side by side. */
-async function newRowPredictions(ranges: ResolvedRanges, analysis: StreamedAnalysis): Promise<StreamedPredictions | undefined> {
-  if (ranges.newRows === undefined) return undefined;
-  const grids = (await readRanges(ranges.newRows)).map(asCellGrid);
-  const joined: CellGrid = grids[0].map((_, i) => grids.flatMap((g) => [...(g[i] ?? [])]));
-  return predictStreamed(joined, analysis);
-}
-
-export async function writeValuesReport(
-  ranges: ResolvedRanges,
-  choices: PaneChoices,
-  analysis: StreamedAnalysis,
-  dataRows: number,
-): Promise<SavedValuesReport> {
-  const predictions = await newRowPredictions(ranges, analysis);
+export async function writeValuesReport(ranges: ResolvedRanges, choices: PaneChoices, analysis: StreamedAnalysis): Promise<SavedValuesReport> {
   let cells: ReportCell[] = [];
   const sheetName = await writeReport((name) => {
-    const plan = planValuesReport({ sheetName: name, ranges, choices, analysis, predictions, dataRows, writtenAt: new Date() });
+    const plan = planValuesReport({ sheetName: name, ranges, choices, analysis, writtenAt: new Date() });
     cells = plan.cells;
     return plan;
   });
@@ -67,16 +50,7 @@ export async function refreshValuesReport(
   if (read.kind !== 'streamed') throw new Error('unreachable: a forced streamed read came back as cells');
   const analysis = analyzeStreamed(read.data, saved.choices);
   if (analysis.fit === undefined) throw new Error(analysis.fitError ?? 'The data no longer give a fit.');
-  const predictions = await newRowPredictions(saved.ranges, analysis);
-  const plan = planValuesReport({
-    sheetName: saved.sheetName,
-    ranges: saved.ranges,
-    choices: saved.choices,
-    analysis,
-    predictions,
-    dataRows: read.dataRows,
-    writtenAt: new Date(),
-  });
+  const plan = planValuesReport({ sheetName: saved.sheetName, ranges: saved.ranges, choices: saved.choices, analysis, writtenAt: new Date() });
   const fresh = newlyWrittenAddresses(saved.cells, plan.cells, saved.residualRows, analysis.fit.n);
   const occupied = await occupiedAddresses(saved.sheetName, fresh);
   if (occupied.length > 0) {

@@ -5,8 +5,11 @@
  */
 import { describe, expect, it } from 'vitest';
 import {
+  cellAddress,
+  columnCount,
   columnIndex,
   columnLetters,
+  columnsOf,
   formatAbsolute,
   formatRange,
   isWholeColumns,
@@ -14,7 +17,11 @@ import {
   parseAreas,
   parseRange,
   quoteSheetName,
+  rangeContains,
+  rangesOverlap,
+  rowCount,
   splitAreas,
+  splitSheet,
 } from '../../src/addressing/a1';
 
 describe('cells and ranges', () => {
@@ -81,5 +88,51 @@ describe('multi-area addresses', () => {
     expect(parseAreas('B2:B9,D2', 'Data')?.map((r) => r.sheet)).toEqual(['Data', 'Data']);
     expect(parseAreas('B2:B9,nonsense', 'Data')).toBeUndefined();
     expect(parseAreas('', 'Data')).toBeUndefined();
+  });
+});
+
+describe('parts of an address', () => {
+  it('writes a cell from 0-based row and column', () => {
+    expect(cellAddress(0, 0)).toBe('A1');
+    expect(cellAddress(9, 27)).toBe('AB10');
+  });
+
+  it('splits off the sheet, unquoting a quoted one and keeping a "!" inside the quotes', () => {
+    expect(splitSheet('Data!B2:C9')).toEqual({ sheet: 'Data', address: 'B2:C9' });
+    expect(splitSheet("'Bob''s data'!A1")).toEqual({ sheet: "Bob's data", address: 'A1' });
+    expect(splitSheet("'Wow!'!C3")).toEqual({ sheet: 'Wow!', address: 'C3' });
+    expect(splitSheet('B2')).toEqual({ sheet: undefined, address: 'B2' });
+  });
+});
+
+describe('range arithmetic', () => {
+  const block = { sheet: 'Data', top: 1, left: 1, bottom: 4, right: 3 };
+
+  it('counts rows and columns inclusively', () => {
+    expect(rowCount(block)).toBe(4);
+    expect(columnCount(block)).toBe(3);
+  });
+
+  it('splits a block into its single columns, in order', () => {
+    expect(columnsOf(block)).toEqual([
+      { sheet: 'Data', top: 1, left: 1, bottom: 4, right: 1 },
+      { sheet: 'Data', top: 1, left: 2, bottom: 4, right: 2 },
+      { sheet: 'Data', top: 1, left: 3, bottom: 4, right: 3 },
+    ]);
+  });
+
+  it('contains a cell on its own sheet and within its corners only', () => {
+    expect(rangeContains(block, 'Data', 1, 1)).toBe(true);
+    expect(rangeContains(block, 'Data', 4, 3)).toBe(true);
+    expect(rangeContains(block, 'Data', 5, 3)).toBe(false);
+    expect(rangeContains(block, 'Data', 2, 0)).toBe(false);
+    expect(rangeContains(block, 'Other', 2, 2)).toBe(false);
+  });
+
+  it('overlaps a range sharing a cell, not one that only touches it or sits on another sheet', () => {
+    expect(rangesOverlap(block, { sheet: 'Data', top: 4, left: 3, bottom: 8, right: 8 })).toBe(true);
+    expect(rangesOverlap(block, { sheet: 'Data', top: 5, left: 1, bottom: 8, right: 3 })).toBe(false);
+    expect(rangesOverlap(block, { sheet: 'Data', top: 0, left: 4, bottom: 9, right: 4 })).toBe(false);
+    expect(rangesOverlap(block, { ...block, sheet: 'Other' })).toBe(false);
   });
 });

@@ -83,12 +83,12 @@ const cases: [string, () => unknown, string][] = [
   [
     'every row incomplete',
     () => terms([['y'], [null], [''], [1]], [['a'], [1], [2], [null]]),
-    'No complete rows: every row has a blank or #N/A in the response, a predictor or a weight.',
+    'No complete rows: every row has a blank or #N/A in y (2 rows) or a (1 row).',
   ],
   [
     'as many rows as parameters',
     () => terms(yPlain.slice(0, 3), xPlain.slice(0, 3)),
-    '3 rows cannot estimate 3 parameters with any left over to measure the noise: the model needs more rows than parameters.',
+    "3 rows cannot fit the model's 3 parameters (Intercept, x1, x2) with any left over to measure the noise: the model needs more rows than parameters. Give at least 4 rows, or fewer predictors.",
   ],
   [
     'a negative weight',
@@ -114,7 +114,7 @@ const cases: [string, () => unknown, string][] = [
   ['level of 95', () => terms(y, x, 95), 'level must be a number between 0 and 1, such as 0.95 for 95%; got 95.'],
   ['level as text', () => terms(y, x, '95%'), 'level must be a number between 0 and 1, such as 0.95 for 95%; got 95%.'],
   ['intercept as text', () => terms(y, x, null, 'yes'), 'intercept must be TRUE or FALSE; got yes.'],
-  ['negative known sigma', () => terms(y, x, null, null, -1), 'noise_sd must be a positive number, or left empty to estimate σ; got -1.'],
+  ['negative known sigma', () => terms(y, x, null, null, -1), 'noise_sd is a standard deviation, so it must be positive; got -1.'],
   ['new_rows of the wrong width', () => predict(y, x, [[1, 2, 3]]), 'new_rows row 1 has 3 columns; predictors has 2. Lay new rows out like predictors.'],
   ['text in new_rows', () => predict(y, x, [[12, 'hot']]), 'new_rows row 1, column 2 ("Temp") holds the text "hot"; it needs a number.'],
   [

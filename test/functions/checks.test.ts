@@ -7,6 +7,7 @@
 import { describe, expect, it } from 'vitest';
 import { assumptionChecks, collinearity as engineCollinearity } from '../../src/engine';
 import { checks, collinearity } from '../../src/functions/functions';
+import { jarqueBeraReading, overallReading, shapiroWilkReading } from '../../src/presentation';
 import { column, columns, thrownBy } from '../support/cells';
 import { randomProblem } from '../support/random';
 
@@ -15,14 +16,27 @@ const CHECK_LABELS = [
   'DW expected d',
   'DW p-value (ρ > 0)',
   'DW p-value (two-sided)',
+  'DW method',
   'DW reading',
   'Breusch–Pagan LM',
   'BP df',
   'BP p-value',
   'BP reading',
+  'Shapiro–Wilk W',
+  'SW p-value',
+  'SW reading',
   'Jarque–Bera',
   'JB p-value',
   'JB reading',
+  'Largest |studentized residual|',
+  'at row',
+  'Outlier p-value (Bonferroni)',
+  'Outlier reading',
+  'Lack-of-fit F',
+  'LOF df',
+  'Pure-error df',
+  'LOF p-value',
+  'LOF reading',
   "Largest Cook's distance",
   'at row',
   'High-leverage rows',
@@ -38,8 +52,9 @@ function expectOnlyFiniteNumbersOrText(grid: unknown[][], width: number): void {
   }
 }
 
-function valueOf(grid: unknown[][], label: string): unknown {
-  const row = grid.find((r) => r[0] === label);
+/** The value beside a label; `occurrence` picks among rows of the same label ('at row' appears twice). */
+function valueOf(grid: unknown[][], label: string, occurrence = 0): unknown {
+  const row = grid.filter((r) => r[0] === label)[occurrence];
   if (row === undefined) throw new Error(`no row labelled ${label}`);
   return row[1];
 }
@@ -126,10 +141,17 @@ describe('PLUMB.CHECKS', () => {
     expect(valueOf(grid, 'DW p-value (two-sided)')).toBe(engine.durbinWatson.pTwoSided);
     expect(valueOf(grid, 'Breusch–Pagan LM')).toBe(engine.breuschPagan.statistic);
     expect(valueOf(grid, 'BP df')).toBe(2);
+    expect(valueOf(grid, 'DW method')).toBe('exact');
+    expect(valueOf(grid, 'Shapiro–Wilk W')).toBe(engine.shapiroWilk.statistic);
+    expect(valueOf(grid, 'SW p-value')).toBe(engine.shapiroWilk.pValue);
+    expect(valueOf(grid, 'SW reading')).toBe(shapiroWilkReading(engine));
     expect(valueOf(grid, 'Jarque–Bera')).toBe(engine.jarqueBera.statistic);
-    expect(valueOf(grid, 'JB reading')).toBe(engine.jarqueBera.reading);
+    expect(valueOf(grid, 'JB reading')).toBe(jarqueBeraReading(engine.jarqueBera));
+    expect(valueOf(grid, 'JB reading')).toMatch(/^for information: up to 5000 rows the shape is tested by Shapiro–Wilk/);
+    expect(valueOf(grid, 'Largest |studentized residual|')).toBe(Math.abs(engine.outlierTest.studentized));
+    expect(valueOf(grid, 'Outlier p-value (Bonferroni)')).toBe(engine.outlierTest.bonferroniP);
     expect(valueOf(grid, 'Largest VIF')).toBe(engine.largestVif);
-    expect(valueOf(grid, 'Overall reading')).toBe(engine.overall);
+    expect(valueOf(grid, 'Overall reading')).toBe(overallReading(engine));
     expectOnlyFiniteNumbersOrText(grid, 2);
   });
 
@@ -142,8 +164,11 @@ describe('PLUMB.CHECKS', () => {
       planted.map((v, i) => (i === 2 ? null : v)),
     );
     const grid = checks(yCells, columns(['Dose'], x));
-    // Data index 9 is the 9th row used (index 2 is skipped) and sits in range row 11 under the header.
-    expect(valueOf(grid, 'at row')).toBe(11);
+    // Data index 9 is the 9th row used (index 2 is skipped) and sits in range row 11 under the header:
+    // both the most outlying row and the row of the largest Cook's distance.
+    expect(valueOf(grid, 'at row', 0)).toBe(11);
+    expect(valueOf(grid, 'at row', 1)).toBe(11);
+    expect(valueOf(grid, 'Outlier reading')).toMatch(/^row 11 is an outlier \(studentized residual \d+\.\d, Bonferroni p/);
     expect(valueOf(grid, 'for term')).toBe('Dose');
   });
 
@@ -156,11 +181,25 @@ describe('PLUMB.CHECKS', () => {
       ),
       x,
     );
-    for (const label of ['Durbin–Watson', 'Breusch–Pagan LM', 'Jarque–Bera', 'JB p-value', "Largest Cook's distance"]) {
+    for (const label of [
+      'Durbin–Watson',
+      'DW method',
+      'Breusch–Pagan LM',
+      'Shapiro–Wilk W',
+      'SW p-value',
+      'Jarque–Bera',
+      'JB p-value',
+      'Largest |studentized residual|',
+      'Outlier p-value (Bonferroni)',
+      'Lack-of-fit F',
+      'LOF p-value',
+      "Largest Cook's distance",
+    ]) {
       expect(valueOf(grid, label)).toBe('');
     }
-    expect(valueOf(grid, 'DW reading')).toMatch(/^exact fit/);
-    expect(valueOf(grid, 'at row')).toBe('none: exact fit, every residual is 0');
+    for (const label of ['DW reading', 'SW reading', 'JB reading', 'Outlier reading']) expect(valueOf(grid, label)).toMatch(/^exact fit/);
+    expect(valueOf(grid, 'at row', 0)).toBe('');
+    expect(valueOf(grid, 'at row', 1)).toBe('none: exact fit, every residual is 0');
     expect(valueOf(grid, 'Overall reading')).toMatch(/^exact fit/);
     expectOnlyFiniteNumbersOrText(grid, 2);
   });
@@ -188,7 +227,7 @@ describe('PLUMB.CHECKS', () => {
     const oneSided = valueOf(grid, 'DW p-value (ρ > 0)') as number;
     const twoSided = valueOf(grid, 'DW p-value (two-sided)') as number;
     expect(twoSided).toBeCloseTo(Math.min(1, 2 * Math.min(oneSided, 1 - oneSided)), 12);
-    expect(valueOf(grid, 'DW reading')).toMatch(/read on the two-sided p [=<] /);
+    expect(valueOf(grid, 'DW reading')).toMatch(/read on the exact two-sided p [=<] /);
   });
 
   // One response typed far off (studentized residual far past 3, the flag of RESIDUALS): the
@@ -205,7 +244,7 @@ describe('PLUMB.CHECKS', () => {
       parameterAddresses: ['Data!B3:B43', 'Data!C3:C43', '', '', '', '', ''],
     });
     const overall = String(valueOf(grid, 'Overall reading'));
-    expect(overall).toMatch(/^worth a look first: row 20 \(studentized residual \d+\.\d/);
+    expect(overall).toMatch(/^worth a look first: row 20 \(studentized residual \d+\.\d, Bonferroni p < 0\.0001/);
     expect(overall).toContain('can cause the other signals');
   });
 
@@ -214,7 +253,8 @@ describe('PLUMB.CHECKS', () => {
     const strict = checks(column(undefined, y), x, 0.5);
     const lenient = checks(column(undefined, y), x, 0.999999);
     expect(valueOf(lenient, 'Overall reading')).toBe('nothing stands out at the 99.9999% level');
-    expect(valueOf(strict, 'Overall reading')).toMatch(/^worth a look: /);
+    // At level 0.5 even rows with a Bonferroni p near 0.3 are outliers, named first.
+    expect(valueOf(strict, 'Overall reading')).toMatch(/^worth a look/);
   });
 
   it('fails like every PLUMB function: #VALUE! with the message', () => {

@@ -119,7 +119,7 @@ describe('PLUMB.COMPARE input errors', () => {
       ]),
     );
     expect(error.message).toBe(
-      'Candidate 2: 3 rows cannot estimate 3 parameters with any left over to measure the noise: the model needs more rows than parameters.',
+      "Candidate 2: 3 rows cannot fit the model's 5 parameters (Intercept, Steep, Temp, Origin: Kenya, Origin: Peru) with any left over to measure the noise: the model needs more rows than parameters. Give at least 6 rows, or fewer predictors.",
     );
   });
 });

@@ -127,8 +127,10 @@ describe('delivery-time example (Montgomery, Peck & Vining, Examples 3.1–3.3; 
       ['Cases', 'Distance'],
       [8, 275],
     ]);
-    expect(out[0]).toEqual(['Prediction', 'Mean low', 'Mean high', 'New low', 'New high']);
+    expect(out[0]).toEqual(['Prediction', 'Mean low', 'Mean high', 'New low', 'New high', 'Extrapolation']);
     const [estimate, meanLow, meanHigh, newLow, newHigh] = out[1] as number[];
+    // Inside both ranges (2–30 cases, 36–1460 ft) and an ordinary mix of them: no note.
+    expect(out[1][5]).toBe('');
     expect(estimate).toBeCloseTo(19.22, 2);
     expect(Math.abs(meanLow - 17.66)).toBeLessThan(0.02);
     expect(Math.abs(meanHigh - 20.78)).toBeLessThan(0.02);

@@ -23,7 +23,7 @@ const ys = [2.1, 3.9, 6.2, 7.8, 10.1, 12.2, 13.8, 16.1];
 describe('hard cases', () => {
   it('all-blank y: no complete rows', () => {
     const error = thrownBy(() => terms([[''], [null], [''], [null]], column([1, 2, 3, 4])));
-    expect(error).toEqual({ code: '#VALUE!', message: 'No complete rows: every row has a blank or #N/A in the response, a predictor or a weight.' });
+    expect(error).toEqual({ code: '#VALUE!', message: 'No complete rows: response is blank or #N/A in every row. Select the column that holds the values.' });
   });
 
   // Decision: a constant response is a valid, exact fit (intercept = the constant, slopes 0), not
@@ -44,7 +44,7 @@ describe('hard cases', () => {
 
   it('one row: too few rows for the parameters', () => {
     expect(thrownBy(() => estimates([[1]], [[2]])).message).toBe(
-      '1 rows cannot estimate 1 parameters with any left over to measure the noise: the model needs more rows than parameters.',
+      "1 row cannot fit the model's 2 parameters (Intercept, x1) with any left over to measure the noise: the model needs more rows than parameters. Give at least 3 rows, or fewer predictors.",
     );
   });
 
@@ -57,7 +57,9 @@ describe('hard cases', () => {
           [3, 7],
         ]),
       ).message,
-    ).toBe('3 rows cannot estimate 3 parameters with any left over to measure the noise: the model needs more rows than parameters.');
+    ).toBe(
+      "3 rows cannot fit the model's 3 parameters (Intercept, x1, x2) with any left over to measure the noise: the model needs more rows than parameters. Give at least 4 rows, or fewer predictors.",
+    );
   });
 
   it('two identical predictors: the second is aliased, the first keeps the one-predictor fit', () => {
@@ -119,13 +121,15 @@ describe('hard cases', () => {
     expectClose(datedIntercept, shiftedIntercept - shiftedSlope * 45000, 1e-9);
   });
 
-  // Excel's widest range: the answer names rows against parameters. The count is of independent
-  // parameters (the rank), as the engine reports it for aliased designs. No timing is asserted
+  // Excel's widest range: the answer names rows against parameters. The count is of the model's
+  // parameters, aliased ones included: what the user would have to cut. No timing is asserted
   // (speed is the bench's job); the old per-column refactorization would exceed the test timeout.
   it('a 16,384-column x over 3 rows: a clear rows-versus-parameters error', () => {
     const wide = [0, 1, 2].map((i) => Array.from({ length: 16_384 }, (_, j) => (i * 7 + j * 13) % 17));
     const error = thrownBy(() => terms(column([1, 2, 3]), wide));
-    expect(error.message).toBe('3 rows cannot estimate 3 parameters with any left over to measure the noise: the model needs more rows than parameters.');
+    expect(error.message).toBe(
+      "3 rows cannot fit the model's 16385 parameters with any left over to measure the noise: the model needs more rows than parameters. Give at least 16386 rows, or fewer predictors.",
+    );
   });
 
   // Before the fix each aliased column got its own refactorization: about five minutes, far past

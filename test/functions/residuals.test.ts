@@ -46,7 +46,7 @@ describe('PLUMB.RESIDUALS', () => {
     expect(leverageSum).toBeCloseTo(3, 12);
   });
 
-  it('flags a planted outlier as an outlier and a far-out x that follows the trend as high leverage only', () => {
+  it('flags a planted outlier as a large residual and a far-out x that follows the trend as high leverage only', () => {
     const { y, x, beta } = randomProblem(23, 30, 1);
     const yPlanted = [...y];
     yPlanted[10] += 10;
@@ -56,11 +56,11 @@ describe('PLUMB.RESIDUALS', () => {
     yPlanted[20] = 1 + 8 * beta[0] + (y[20] - 1 - beta[0] * x[20][0]);
     const grid = residuals(column('y', yPlanted), columns(['x'], xPlanted));
     const flags = grid.slice(1).map((r) => r[FLAG] as string);
-    expect(flags[10]).toContain('outlier');
+    expect(flags[10]).toContain('large residual (|t| over 3)');
     expect(flags[20]).toContain('high leverage');
-    expect(flags[20]).not.toContain('outlier');
+    expect(flags[20]).not.toContain('large residual');
     flags.forEach((f, i) => {
-      if (i !== 10) expect(f).not.toContain('outlier');
+      if (i !== 10) expect(f).not.toContain('large residual');
       if (i !== 20) expect(f).not.toContain('high leverage');
     });
     expectOnlyFiniteNumbersOrText(grid);
@@ -87,7 +87,7 @@ describe('PLUMB.RESIDUALS', () => {
     expect(row[LEVERAGE]).toBeCloseTo(1, 12);
     expect([row[STANDARDIZED], row[STUDENTIZED]]).toEqual(['', '']);
     expect([row[COOKS], row[DFFITS]]).toEqual(['', '']);
-    expect(row[FLAG]).toBe('high leverage, leverage 1: fit passes through this row');
+    expect(row[FLAG]).toBe('high leverage (over 2p/n), leverage 1: fit passes through this row');
     expectOnlyFiniteNumbersOrText(grid);
   });
 

@@ -24,17 +24,16 @@ describe('settings', () => {
     expect(intervals(yCells, x, [[0.95]])).toEqual(base);
   });
 
-  // The noise_sd rule shared with the pane (src/engine/noiseSd.ts): empty estimates σ; anything
-  // else must be a positive finite number with a point as decimal separator. Common practice (no source).
+  // The noise_sd rule shared with the pane (src/engine/noiseSd.ts), in the pane's words
+  // (src/presentation/noiseSd.ts): empty estimates σ; anything else must be a positive finite
+  // number with a point as decimal separator. Common practice (no source).
   it('noise_sd refuses 0, negatives, text and a decimal comma, each saying why', () => {
     expect(thrownBy(() => terms(yCells, x, null, null, 0)).message).toBe(
-      'noise_sd is 0, but a noise standard deviation must be positive: leave noise_sd empty to estimate σ from the data.',
+      'noise_sd cannot be 0: noise-free measurements leave nothing to estimate. Leave noise_sd empty to estimate σ from the data.',
     );
-    expect(thrownBy(() => terms(yCells, x, null, null, -1)).message).toBe('noise_sd must be a positive number, or left empty to estimate σ; got -1.');
-    expect(thrownBy(() => terms(yCells, x, null, null, 'abc')).message).toBe('noise_sd must be a positive number, or left empty to estimate σ; got abc.');
-    expect(thrownBy(() => terms(yCells, x, null, null, '0,35')).message).toBe(
-      'noise_sd must be a number written with a point as the decimal separator, such as 0.35; got the text 0,35.',
-    );
+    expect(thrownBy(() => terms(yCells, x, null, null, -1)).message).toBe('noise_sd is a standard deviation, so it must be positive; got -1.');
+    expect(thrownBy(() => terms(yCells, x, null, null, 'abc')).message).toBe('noise_sd must be a number, such as 0.35, or left empty to estimate σ; got abc.');
+    expect(thrownBy(() => terms(yCells, x, null, null, '0,35')).message).toBe('Use a point as the decimal separator in noise_sd: 0.35 rather than 0,35.');
     expect(terms(yCells, x, null, null, '0.35')).toEqual(terms(yCells, x, null, null, 0.35));
   });
 

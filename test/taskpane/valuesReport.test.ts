@@ -29,10 +29,10 @@ describe('values report against the strict host', () => {
 
   it('writes, and later refreshes, while the user edits a cell: each waits for the edit to end and then completes', async () => {
     const { model } = freshHost({ syncDelayMs: 1 });
-    const { ranges, choices, analysis, dataRows } = await streamedFixture(model, { rows: 2_000, predictors: 2 });
+    const { ranges, choices, analysis } = await streamedFixture(model, { rows: 2_000, predictors: 2 });
     const before = model.sheetNames();
     model.setCellEditMode(true);
-    const writing = writeValuesReport(ranges, choices, analysis, dataRows);
+    const writing = writeValuesReport(ranges, choices, analysis);
     await afterPendingWork();
     expect(model.sheetNames()).toEqual(before);
     model.setCellEditMode(false);
@@ -52,8 +52,8 @@ describe('values report against the strict host', () => {
 
   it('keeps the report’s cells and clears the table when a refresh’s table write fails, saying so', async () => {
     const { model } = freshHost({ syncDelayMs: 1 });
-    const { ranges, choices, analysis, dataRows } = await streamedFixture(model, { rows: 2_000, predictors: 2 });
-    const saved = await writeValuesReport(ranges, choices, analysis, dataRows);
+    const { ranges, choices, analysis } = await streamedFixture(model, { rows: 2_000, predictors: 2 });
+    const saved = await writeValuesReport(ranges, choices, analysis);
     const intercept = shownIntercept(model, saved.sheetName);
     expect(model.valueAt(firstEntry(saved.sheetName))).toBe(2);
     model.setInputs('Data', 1, 0, [[1_000]]);

@@ -3,7 +3,8 @@ import { INTERCEPT_NAME } from '../fit/design';
 import type { ModelData } from '../types';
 import { type Cell, type CellGrid, classifyCell, describeCell, shortName } from './cells';
 import { codeCategorical, type SourceColumn } from './categorical';
-import { cellPlace, type RangeOrigin, rowNumber } from './origin';
+import { badCellMessage, isCategoricalColumn } from './cellRules';
+import { cellPlace, columnLetters, type RangeOrigin, rowNumber } from './origin';
 
 export interface FrameInput {
   y: CellGrid;
@@ -98,7 +99,7 @@ export function buildModelFrame(input: FrameInput): ModelFrame {
   const names = xColumns.map((cellAt, j) => headerName(hasHeader ? classifyCell(cellAt(0)) : undefined, j, located(j, '', false)));
 
   const classified = xColumns.map((cellAt) => Array.from({ length: rowCount - firstData }, (_, k) => classifyCell(cellAt(k + firstData))));
-  const categorical = classified.map((cells) => cells.some((c) => c.kind === 'text') && !cells.some((c) => c.kind === 'number'));
+  const categorical = classified.map(isCategoricalColumn);
 
   const usedRows: number[] = [];
   const skipped: SkippedRow[] = [];
@@ -108,6 +109,9 @@ export function buildModelFrame(input: FrameInput): ModelFrame {
   const xPlaces = xColumns.map((_, j) => located(j, names[j], categorical[j]));
   const yPlace: Located = { argument: 'response', origin: origins.y, column: 0, singleColumn: true, name: responseName, categorical: false };
   const wPlace: Located = { argument: 'weights', origin: origins.weights, column: 0, singleColumn: true, name: 'weight', categorical: false };
+  // Per column (response, predictors, weights), the rows with a blank or #N/A, to name them if no row is complete.
+  const columnNames = [yPlace, ...xPlaces, ...(input.weights === undefined ? [] : [wPlace])].map((where) => columnLabel(where, hasHeader));
+  const missingCounts = columnNames.map(() => 0);
   for (let k = 0; k < rowCount - firstData; k++) {
     const position = k + firstData;
     const row = rowNumber(origins.y, position);
@@ -116,6 +120,9 @@ export function buildModelFrame(input: FrameInput): ModelFrame {
     const cells: [Cell, Located][] = [[yCell, yPlace], ...classified.map((column, j): [Cell, Located] => [column[k], xPlaces[j]])];
     if (wCell !== undefined) cells.push([wCell, wPlace]);
     cells.forEach(([cell, where]) => rejectBadCell(cell, where, position));
+    cells.forEach(([cell], c) => {
+      if (cell.kind === 'missing') missingCounts[c] += 1;
+    });
     const missing = cells.find(([cell]) => cell.kind === 'missing');
     if (missing !== undefined) {
       const [cell, where] = missing;
@@ -130,11 +137,10 @@ export function buildModelFrame(input: FrameInput): ModelFrame {
     numericX.push(classified.map((cells) => valueOf(cells[k])));
     if (wCell !== undefined) weights.push((wCell as { value: number }).value);
   }
-  if (usedRows.length === 0) {
-    throw new EngineError('no-rows', 'No complete rows: every row has a blank or #N/A in the response, a predictor or a weight.');
-  }
+  if (usedRows.length === 0) throw new EngineError('no-rows', noCompleteRows(columnNames, missingCounts, rowCount - firstData));
 
   const coded = codeCategorical(numericX, names, categorical, input.intercept);
+  rejectIdentifierColumns(coded.columns, usedRows.length, skipped.length > 0);
   return {
     hasHeader,
     responseName,
@@ -146,6 +152,62 @@ export function buildModelFrame(input: FrameInput): ModelFrame {
     termBlocks: coded.termColumns.map((c) => columnBlocks[c]),
     termColumns: coded.termColumns,
   };
+}
+
+/** Names the columns that left no row complete: those blank in every row, else each one with blanks. */
+function noCompleteRows(columnNames: readonly string[], missingCounts: readonly number[], dataRows: number): string {
+  const everywhere = columnNames.filter((_, c) => missingCounts[c] === dataRows);
+  if (everywhere.length > 0) {
+    const verb = everywhere.length === 1 ? 'is' : 'are';
+    return `No complete rows: ${listOf(everywhere)} ${verb} blank or #N/A in every row. Select the column that holds the values.`;
+  }
+  const partly = columnNames.flatMap((name, c) => (missingCounts[c] > 0 ? [`${name} (${rowsText(missingCounts[c])})`] : []));
+  return `No complete rows: every row has a blank or #N/A in ${listOf(partly, 'or')}.`;
+}
+
+/**
+ * From this many rows on, a text column with a different level in every row is taken for an
+ * identifier. Below it such a column is as likely a coincidence of few rows, and the fit's own
+ * message (rows against parameters) says what is wrong.
+ */
+const IDENTIFIER_MIN_ROWS = 10;
+
+/**
+ * A text column with a level per row gives every row a term of its own: no model that includes it
+ * has rows left to measure the noise (with or without the intercept), so it is named here, where
+ * the cause is known, instead of as a count of parameters.
+ */
+function rejectIdentifierColumns(columns: readonly SourceColumn[], rowsUsed: number, someSkipped: boolean): void {
+  if (rowsUsed < IDENTIFIER_MIN_ROWS) return;
+  for (const column of columns) {
+    if (column.kind === 'categorical' && column.levels.length === rowsUsed) {
+      throw new EngineError(
+        'no-residual-df',
+        `${column.name} looks like an identifier: ${column.levels.length} levels for ${rowsUsed} rows${someSkipped ? ' used' : ''}, ` +
+          `so every row would have a term of its own and none would be left to measure the noise. ` +
+          `Leave ${column.name} out of the predictors, or enter its values as numbers if it measures an amount.`,
+      );
+    }
+  }
+}
+
+/** A column as a message names it: by its header, else by its argument and place. */
+function columnLabel(where: Located, hasHeader: boolean): string {
+  if (where.argument === 'weights') return 'weights';
+  if (hasHeader) return where.name;
+  if (where.singleColumn) return where.argument;
+  const column = where.origin === undefined ? String(where.column + 1) : columnLetters(where.origin.column + where.column);
+  return `${where.argument} column ${column}`;
+}
+
+function rowsText(count: number): string {
+  return count === 1 ? '1 row' : `${count} rows`;
+}
+
+/** "a", "a and b", "a, b and c". */
+function listOf(items: readonly string[], conjunction = 'and'): string {
+  if (items.length <= 1) return items.join('');
+  return `${items.slice(0, -1).join(', ')} ${conjunction} ${items[items.length - 1]}`;
 }
 
 function valueOf(cell: Cell): number | string {
@@ -172,12 +234,7 @@ function headerName(cell: Cell | undefined, j: number, where: Located): string {
 function rejectBadCell(cell: Cell, where: Located, position: number): void {
   const ok = cell.kind === 'number' || cell.kind === 'missing' || (cell.kind === 'text' && where.categorical);
   if (ok) return;
-  const place = `${placeOf(where, position)} ("${where.name}")`;
-  const hint =
-    cell.kind === 'text' && /^[-+]?[\d.,\s]+$/.test(cell.text)
-      ? ' It looks like a number stored as text: re-enter it as a number without separators.'
-      : ' Use a number, or leave the cell blank to skip the row.';
-  throw new EngineError('bad-value', `${place} holds ${describeCell(cell)}.${hint}`);
+  throw new EngineError('bad-value', badCellMessage(cell, `${placeOf(where, position)} ("${where.name}")`));
 }
 
 function requireRectangular(grid: CellGrid, argument: string): void {

@@ -18,7 +18,8 @@ export function rowNumber(origin: RangeOrigin | undefined, position: number): nu
   return origin === undefined ? position + 1 : origin.row + position + 1;
 }
 
-function columnLetters(column: number): string {
+/** "A", …, "Z", "AA", …: a 0-based worksheet column as the sheet labels it. */
+export function columnLetters(column: number): string {
   let letters = '';
   for (let n = column + 1; n > 0; n = Math.floor((n - 1) / 26)) letters = String.fromCharCode(65 + ((n - 1) % 26)) + letters;
   return letters;

@@ -1,27 +1,29 @@
+import { normalQuantile } from '../distributions/normal';
+import { studentTTwoSidedP } from '../distributions/studentT';
 import { solveModel } from '../fitModel';
+import type { LeastSquaresSolution } from '../fit/leastSquares';
 import type { FitSettings, ModelData } from '../types';
-import { type BreuschPagan, breuschPagan } from './breuschPagan';
-import {
-  unusualRowsReading,
-  breuschPaganReading,
-  COLLINEARITY_REASON_TEXT,
-  durbinWatsonReading,
-  jarqueBeraReading,
-  LARGE_COOKS_DISTANCE,
-  LARGE_VIF,
-} from './checkReadings';
-import { collinearity } from './collinearity';
-import { type DurbinWatson, durbinWatson } from './durbinWatson';
-import { highLeverageCount, residualDiagnostics } from './influence';
+import { type BreuschPagan, type BreuschPaganReason, breuschPagan } from './breuschPagan';
+import { type CollinearityReason, collinearity } from './collinearity';
+import { durbinWatsonMoments } from './durbinWatson';
+import { type DurbinWatsonExact, type DurbinWatsonExactReason, durbinWatsonExact } from './durbinWatsonExact';
+import { highLeverageCount, residualDiagnostics, type RowDiagnostics } from './influence';
 import { type JarqueBera, jarqueBera } from './jarqueBera';
+import { type LackOfFit, type LackOfFitReason, lackOfFit } from './lackOfFit';
+import { bonferroniP, type OutlierTest, type OutlierTestReason, outlierTest } from './outlierTest';
+import { SHAPIRO_WILK_MAX_N, type ShapiroWilk, type ShapiroWilkReason, shapiroWilk } from './shapiroWilk';
 
 /**
- * The model's assumptions checked in one place: serial independence (Durbin–Watson), constant
- * spread (Breusch–Pagan, Koenker's form), normal residuals (Jarque–Bera), influential and
- * high-leverage rows, and collinearity (largest VIF). Each test is read at α = 1 − level.
+ * The model's assumptions checked in one place: serial independence (Durbin–Watson, exact up to
+ * EXACT_MAX_ROWS rows), constant spread (Breusch–Pagan, Koenker's form), normal residuals
+ * (Shapiro–Wilk for 3 ≤ n ≤ 5000, Jarque–Bera above), the most outlying row (the Bonferroni outlier
+ * test), the model's shape against pure error where settings repeat (lack of fit), influential and
+ * high-leverage rows, and collinearity (largest VIF). Each test is decided at α = 1 − level and the
+ * decision returned as a verdict code; the words for it are the presentation module's.
  *
- * Weights: the three tests use uᵢ = √wᵢ·eᵢ, the residuals that share one variance under the model
- * (see each test). Known σ: the three tests are free of σ and ignore it; Cook's distance uses it,
+ * Weights: the residual tests use uᵢ = √wᵢ·eᵢ, the residuals that share one variance under the model
+ * (see each test); lack of fit weights its pure error alike. Known σ: the tests are free of σ and
+ * ignore it (the studentized residual uses the deleted σ̂ whatever σ is); Cook's distance uses it,
  * as in residualDiagnostics.
  */
 export interface AssumptionChecks {
@@ -29,9 +31,17 @@ export interface AssumptionChecks {
   /** Parameters estimated. */
   p: number;
   alpha: number;
-  durbinWatson: DurbinWatson & { reading: string };
-  breuschPagan: BreuschPagan & { reading: string };
-  jarqueBera: JarqueBera & { reading: string };
+  /** The exact (or beta-approximated) test, with the exact null mean and variance of d. */
+  durbinWatson: DurbinWatsonExact & { mean: number; variance: number; verdict: DurbinWatsonVerdict };
+  breuschPagan: BreuschPagan & { verdict: BreuschPaganVerdict };
+  shapiroWilk: ShapiroWilk & { verdict: ShapiroWilkVerdict };
+  /** Shown for information up to SHAPIRO_WILK_MAX_N rows; the normality test above them. */
+  jarqueBera: JarqueBera & { verdict: JarqueBeraVerdict };
+  /** `row`: the most outlying row's number as the user knows it (see rowNumbers), or −1. */
+  outlierTest: OutlierTest & { row: number; verdict: OutlierVerdict };
+  lackOfFit: LackOfFit & { verdict: LackOfFitVerdict };
+  /** Every residual is 0: the residual checks do not apply. */
+  exactFit: boolean;
   /** NaN when no row has one (an exact fit with σ estimated, or every row at leverage 1). */
   largestCooksDistance: number;
   /** Index of that row among the rows of `data`, or −1. */
@@ -41,23 +51,45 @@ export interface AssumptionChecks {
   /** Infinity when a term is constant or an exact combination of others; NaN without predictors. */
   largestVif: number;
   largestVifTerm: string | undefined;
-  /** Why largestVif is infinite, in words. */
-  largestVifReason: string | undefined;
+  /** Why largestVif is infinite. */
+  largestVifReason: CollinearityReason | undefined;
   /**
-   * Rows that are outliers (|studentized residual| above 3) or influential (Cook's distance above
-   * 1), most extreme first. One such row can by itself produce the autocorrelation, uneven spread
-   * or non-normal shape the tests report, so the overall reading names them first.
+   * Rows that are outliers (their own Bonferroni p below α, as car::outlierTest lists them) or
+   * influential (Cook's distance above UNUSUAL_COOKS_DISTANCE), most extreme first. One such row can
+   * by itself produce the autocorrelation, uneven spread or non-normal shape the tests report, so
+   * readings name them first.
    */
   unusualRows: UnusualRow[];
-  overall: string;
 }
+
+/** Durbin–Watson read on the two-sided p at α: the sign of the autocorrelation found, or why d was not tested. */
+export type DurbinWatsonVerdict = 'positive-autocorrelation' | 'negative-autocorrelation' | 'none' | DurbinWatsonExactReason;
+/** Breusch–Pagan at α: the spread changes with the predictors, or not, or why it was not tested. */
+export type BreuschPaganVerdict = 'uneven-spread' | 'none' | BreuschPaganReason;
+/** Shapiro–Wilk at α, or why it was not computed ('too-many': Jarque–Bera decides instead). */
+export type ShapiroWilkVerdict = 'non-normal' | 'none' | 'exact-fit' | ShapiroWilkReason;
+/** Jarque–Bera at α above SHAPIRO_WILK_MAX_N rows; 'shapiro-wilk-decides' at or below. */
+export type JarqueBeraVerdict = 'non-normal' | 'none' | 'exact-fit' | 'shapiro-wilk-decides';
+/** The Bonferroni p of the most outlying row at α, or why there is no studentized residual to test. */
+export type OutlierVerdict = 'outlier' | 'none' | 'exact-fit' | OutlierTestReason;
+/** Lack of fit at α, or why it could not be tested (most often: no setting repeats). */
+export type LackOfFitVerdict = 'lack-of-fit' | 'none' | 'exact-fit' | LackOfFitReason;
+
+/**
+ * Cook & Weisberg (Residuals and Influence in Regression, 1982): a Cook's distance above 1 marks a
+ * row that moves the fit, and puts it among the unusual rows.
+ */
+const UNUSUAL_COOKS_DISTANCE = 1;
 
 export interface UnusualRow {
   /** Index among the rows of `data`. */
   index: number;
   /** The row's number as the user knows it: its worksheet row when given, else its place (1-based). */
   row: number;
+  /** ±Infinity for a row the other rows fit exactly. */
   studentized: number;
+  /** Its Bonferroni p; NaN where not computed (no studentized residual, or |t| too small to be an outlier). */
+  bonferroniP: number;
   cooksDistance: number;
   outlier: boolean;
   influential: boolean;
@@ -70,11 +102,24 @@ export interface UnusualRow {
 export function assumptionChecks(data: ModelData, settings?: FitSettings, rowNumbers?: readonly number[]): AssumptionChecks {
   const { fit, solution } = solveModel(data, settings);
   const alpha = 1 - fit.settings.level;
-  const dw = durbinWatson(solution);
+  const rowNumber = (index: number) => (index < 0 ? -1 : (rowNumbers?.[index] ?? index + 1));
+  const exactFit = fit.perfectFit;
+
+  const dw = durbinWatsonExact(solution);
   const bp = breuschPagan(solution, data.x);
+  const sw = shapiroWilk(scaledResiduals(solution));
   const jb = jarqueBera(solution);
+  const lof = lackOfFit(data, fit.rss, fit.rank);
 
   const diagnostics = residualDiagnostics(data, settings);
+  const studentized = diagnostics.rows.map(testedStudentized);
+  const outliers = outlierTest(studentized, fit.n, fit.rank);
+  // P(|T| > t) ≥ P(|Z| > t): a row inside the normal's Bonferroni bound cannot be an outlier, so
+  // only the rows past it pay for a t tail.
+  const candidateBound = -normalQuantile(alpha / (2 * Math.max(1, outliers.rowsTested)));
+  const bonferroniOf = (t: number) =>
+    Math.abs(t) > candidateBound ? bonferroniP(studentTTwoSidedP(t, fit.n - fit.rank - 1), outliers.rowsTested) : Number.NaN;
+
   let largestCooksRow = -1;
   diagnostics.rows.forEach((row, i) => {
     if (Number.isFinite(row.cooksDistance) && (largestCooksRow < 0 || row.cooksDistance > diagnostics.rows[largestCooksRow].cooksDistance)) {
@@ -83,14 +128,18 @@ export function assumptionChecks(data: ModelData, settings?: FitSettings, rowNum
   });
   const largestCooksDistance = largestCooksRow < 0 ? Number.NaN : diagnostics.rows[largestCooksRow].cooksDistance;
   const unusualRows = diagnostics.rows
-    .map((d, index): UnusualRow => ({
-      index,
-      row: rowNumbers?.[index] ?? index + 1,
-      studentized: d.studentized,
-      cooksDistance: d.cooksDistance,
-      outlier: d.flags.includes('outlier'),
-      influential: d.cooksDistance > LARGE_COOKS_DISTANCE,
-    }))
+    .map((d, index): UnusualRow => {
+      const p = bonferroniOf(studentized[index]);
+      return {
+        index,
+        row: rowNumber(index),
+        studentized: studentized[index],
+        bonferroniP: p,
+        cooksDistance: d.cooksDistance,
+        outlier: p < alpha,
+        influential: d.cooksDistance > UNUSUAL_COOKS_DISTANCE,
+      };
+    })
     .filter((u) => u.outlier || u.influential)
     .sort((a, b) => extremity(b) - extremity(a));
 
@@ -100,54 +149,54 @@ export function assumptionChecks(data: ModelData, settings?: FitSettings, rowNum
     .filter((t) => t.undefinedBecause !== 'spans-intercept')
     .reduce<(typeof terms)[number] | undefined>((best, t) => (best === undefined || t.vif > best.vif ? t : best), undefined);
 
-  const checks: AssumptionChecks = {
+  return {
     n: fit.n,
     p: fit.rank,
     alpha,
-    durbinWatson: { ...dw, reading: durbinWatsonReading(dw, alpha) },
-    breuschPagan: { ...bp, reading: breuschPaganReading(bp, alpha) },
-    jarqueBera: { ...jb, reading: jarqueBeraReading(jb, alpha) },
+    durbinWatson: { ...dw, ...durbinWatsonMoments(solution), verdict: durbinWatsonVerdict(dw, alpha) },
+    breuschPagan: { ...bp, verdict: bp.undefinedBecause ?? (bp.pValue < alpha ? 'uneven-spread' : 'none') },
+    shapiroWilk: { ...sw, verdict: exactFit ? 'exact-fit' : (sw.undefinedBecause ?? (sw.pValue < alpha ? 'non-normal' : 'none')) },
+    jarqueBera: {
+      ...jb,
+      verdict: jb.undefinedBecause ?? (fit.n <= SHAPIRO_WILK_MAX_N ? 'shapiro-wilk-decides' : jb.pValue < alpha ? 'non-normal' : 'none'),
+    },
+    outlierTest: {
+      ...outliers,
+      row: rowNumber(outliers.index),
+      verdict: exactFit ? 'exact-fit' : (outliers.undefinedBecause ?? (outliers.bonferroniP < alpha ? 'outlier' : 'none')),
+    },
+    lackOfFit: { ...lof, verdict: exactFit ? 'exact-fit' : (lof.undefinedBecause ?? (lof.pValue < alpha ? 'lack-of-fit' : 'none')) },
+    exactFit,
     largestCooksDistance,
     largestCooksRow,
     highLeverageRows: highLeverageCount(diagnostics),
     largestVif: top?.vif ?? Number.NaN,
     largestVifTerm: top?.name,
-    largestVifReason: top?.undefinedBecause === undefined ? undefined : COLLINEARITY_REASON_TEXT[top.undefinedBecause],
+    largestVifReason: top?.undefinedBecause,
     unusualRows,
-    overall: '',
   };
-  checks.overall = overallReading(checks, fit.perfectFit);
-  return checks;
 }
 
-function overallReading(c: AssumptionChecks, perfectFit: boolean): string {
-  const concerns: string[] = [];
-  if (c.durbinWatson.pTwoSided < c.alpha)
-    concerns.push(c.durbinWatson.statistic < c.durbinWatson.mean ? 'positive autocorrelation' : 'negative autocorrelation');
-  if (c.breuschPagan.pValue < c.alpha) concerns.push('uneven residual spread');
-  if (c.jarqueBera.pValue < c.alpha) concerns.push('non-normal residuals');
-  // Named rows already cover an influential row; without them (Cook's distance of a row the
-  // studentized residual cannot judge) the concern is still said.
-  if (c.largestCooksDistance > LARGE_COOKS_DISTANCE && c.unusualRows.length === 0) concerns.push("an influential row (Cook's distance above 1)");
-  if (c.largestVif === Number.POSITIVE_INFINITY) concerns.push('terms that are exact combinations of others');
-  else if (c.largestVif > LARGE_VIF) concerns.push('strong collinearity (a VIF above 10)');
-  if (perfectFit) {
-    return ['exact fit: every residual is 0, so the residual checks do not apply', ...concerns].join('; ');
-  }
-  if (c.unusualRows.length > 0) {
-    const then = concerns.length > 0 ? `; then ${concerns.join(', ')}` : '';
-    return `worth a look first: ${unusualRowsReading(c.unusualRows)}${then}`;
-  }
-  if (concerns.length === 0) return `nothing stands out at the ${formatLevel(1 - c.alpha)} level`;
-  return `worth a look: ${concerns.join(', ')}`;
+/** uᵢ = √wᵢ·eᵢ/yScale: the residuals of equal variance, in units that neither over- nor underflow. */
+function scaledResiduals(solution: LeastSquaresSolution): number[] {
+  return Array.from(solution.residuals, (e, i) => ((solution.design.rootWeights?.[i] ?? 1) * e) / solution.yScale);
+}
+
+/** The studentized residual the outlier test reads: ±Infinity for a row the other rows fit exactly. */
+function testedStudentized(row: RowDiagnostics): number {
+  if (row.undefinedBecause !== 'rest-fit-exactly') return row.studentized;
+  return row.residual < 0 ? Number.NEGATIVE_INFINITY : Number.POSITIVE_INFINITY;
+}
+
+/** Autocorrelation of either sign is a concern, so d is decided on the two-sided p; its side gives the sign. */
+function durbinWatsonVerdict(dw: DurbinWatsonExact, alpha: number): DurbinWatsonVerdict {
+  if (dw.undefinedBecause !== undefined) return dw.undefinedBecause;
+  if (!(dw.pTwoSided < alpha)) return 'none';
+  return dw.pPositive < dw.pNegative ? 'positive-autocorrelation' : 'negative-autocorrelation';
 }
 
 /** How far out a row is: its studentized residual, or for a row only Cook's distance flags, that distance. */
 function extremity(u: UnusualRow): number {
   const t = Math.abs(u.studentized);
-  return Number.isFinite(t) ? t : u.outlier ? Number.POSITIVE_INFINITY : u.cooksDistance;
-}
-
-function formatLevel(level: number): string {
-  return `${Number((100 * level).toPrecision(6))}%`;
+  return Number.isNaN(t) ? u.cooksDistance : t;
 }

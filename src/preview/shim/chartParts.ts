@@ -77,25 +77,72 @@ export class ShimChartAxisTitle extends ChartPart {
 }
 refuseMembers(ShimChartAxisTitle.prototype, 'ChartAxisTitle', ['format', 'visible', 'textOrientation']);
 
+type Bound = 'minimum' | 'maximum';
+
 export class ShimChartAxis extends ChartPart {
   protected readonly typeName = 'ChartAxis';
-  protected readonly scalarNames: readonly string[] = [];
+  protected readonly scalarNames: readonly string[] = ['minimum', 'maximum'];
   readonly title: ShimChartAxisTitle;
 
-  constructor(context: ShimRequestContext, locator: Locate, axis: AxisKind) {
+  constructor(
+    context: ShimRequestContext,
+    locator: Locate,
+    private readonly axis: AxisKind,
+  ) {
     super(context, locator);
     this.title = new ShimChartAxisTitle(context, locator, axis);
   }
 
-  protected readScalar(name: string): unknown {
-    throw invalidArgument(`ChartAxis.${name}`);
+  /**
+   * A fixed bound reads back as set. Excel returns its automatic value as a number too ("The
+   * returned value is always a number"), computed by rules the API docs do not give, so the
+   * preview refuses that read rather than invent a number.
+   */
+  protected readScalar(name: string, target: ChartTarget): unknown {
+    const location = `ChartAxis.${name}`;
+    if (name !== 'minimum' && name !== 'maximum') throw invalidArgument(location);
+    const bound = liveChart(this.context, target, location).chart.axisScales[this.axis][name];
+    if (bound !== null) return bound;
+    const error = invalidArgument(location);
+    error.debugInfo.message = `${error.message} (preview: an automatic axis value is Excel's own and not modelled)`;
+    throw error;
+  }
+
+  get minimum(): number {
+    return this.loadedValue('minimum');
+  }
+  set minimum(value: number | '') {
+    this.writeBound('minimum', value);
+  }
+  get maximum(): number {
+    return this.loadedValue('maximum');
+  }
+  set maximum(value: number | '') {
+    this.writeBound('maximum', value);
+  }
+
+  /**
+   * "Excel.ChartAxis" minimum and maximum (ExcelApi 1.1): "a numeric value or an empty string
+   * (for automatic axis values)". The docs do not say what Excel does with a minimum at or above
+   * the maximum; the preview refuses it.
+   */
+  private writeBound(name: Bound, value: unknown): void {
+    this.queueWrite(name, value, (target, location) => {
+      if (value !== '' && (typeof value !== 'number' || !Number.isFinite(value))) throw invalidArgument(location);
+      const bound = value === '' ? null : value;
+      changeChart(this.context, target, location, (chart) => {
+        const scale = { ...chart.axisScales[this.axis], [name]: bound };
+        if (scale.minimum !== null && scale.maximum !== null && scale.minimum >= scale.maximum) throw invalidArgument(location);
+        return { axisScales: { ...chart.axisScales, [this.axis]: scale } };
+      });
+    });
   }
 
   protected override navigation(name: string): Loadable | undefined {
     return name === 'title' ? this.title : undefined;
   }
 }
-refuseMembers(ShimChartAxis.prototype, 'ChartAxis', ['minimum', 'maximum', 'majorUnit', 'minorUnit', 'format', 'majorGridlines', 'numberFormat', 'visible']);
+refuseMembers(ShimChartAxis.prototype, 'ChartAxis', ['majorUnit', 'minorUnit', 'format', 'majorGridlines', 'numberFormat', 'visible']);
 
 /** For a scatter chart the category axis is the horizontal (X) axis and the value axis the vertical one. */
 export class ShimChartAxes extends ChartPart {

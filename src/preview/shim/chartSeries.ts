@@ -1,6 +1,7 @@
 /** Excel.ChartSeriesCollection and ChartSeries: which cells each series of a chart reads. */
 import { seriesName } from '../workbook/chartData';
-import type { ChartSeriesSource, RangeRef } from '../workbook/types';
+import type { ChartSeriesSource, RangeRef, SeriesChartType } from '../workbook/types';
+import { ChartType } from './chartEnums';
 import { ShimClientObject, ShimClientResult } from './clientObject';
 import { changeChart, liveChart, type ChartTarget } from './chartTarget';
 import { splitCollectionLoad } from './collectionLoad';
@@ -18,7 +19,7 @@ interface SeriesTarget {
 
 export class ShimChartSeries extends ShimClientObject<SeriesTarget> {
   protected readonly typeName = 'ChartSeries';
-  protected readonly scalarNames: readonly string[] = ['name'];
+  protected readonly scalarNames: readonly string[] = ['name', 'chartType'];
 
   constructor(
     context: ShimRequestContext,
@@ -48,8 +49,30 @@ export class ShimChartSeries extends ShimClientObject<SeriesTarget> {
 
   protected readScalar(name: string, target: SeriesTarget): unknown {
     const location = `ChartSeries.${name}`;
+    if (name === 'chartType') return this.source(target, location).chartType;
     if (name !== 'name') throw invalidArgument(location);
     return seriesName(this.context.model, this.source(target, location));
+  }
+
+  get chartType(): string {
+    return this.loadedValue('chartType');
+  }
+  /**
+   * "Excel.ChartSeries" chartType (ExcelApi 1.7): one series of a chart drawn as another type.
+   * The preview draws only scatter points and straight lines without markers; any other type
+   * Excel knows is refused with InvalidArgument and a note, one it does not know plainly so.
+   */
+  set chartType(type: string) {
+    this.queueWrite('chartType', type, (_target, location) => {
+      if (!isSeriesChartType(type)) {
+        const error = invalidArgument(location);
+        if ((Object.values(ChartType) as string[]).includes(type)) {
+          error.debugInfo.message = `${error.message} (preview: a series can be XYScatter or XYScatterLinesNoMarkers only)`;
+        }
+        throw error;
+      }
+      this.change(location, (s) => ({ ...s, chartType: type }));
+    });
   }
 
   get name(): string {
@@ -104,8 +127,13 @@ refuseMembers(ShimChartSeries.prototype, 'ChartSeries', [
   'markerForegroundColor',
   'trendlines',
   'points',
-  'chartType',
 ]);
+
+const SERIES_CHART_TYPES: readonly string[] = [ChartType.xyscatter, ChartType.xyscatterLinesNoMarkers] satisfies SeriesChartType[];
+
+function isSeriesChartType(type: unknown): type is SeriesChartType {
+  return typeof type === 'string' && SERIES_CHART_TYPES.includes(type);
+}
 
 export class ShimChartSeriesCollection extends ShimClientObject<ChartTarget> {
   protected readonly typeName = 'ChartSeriesCollection';
@@ -187,7 +215,8 @@ export class ShimChartSeriesCollection extends ShimClientObject<ChartTarget> {
         changeChart(this.context, chart, location, (c) => {
           at = index ?? c.series.length;
           if (!Number.isInteger(at) || at < 0 || at > c.series.length) throw invalidArgument(location);
-          const added = { name: name ?? `Series${c.series.length + 1}`, x: null, y: null };
+          // A new series takes its chart's type.
+          const added: ChartSeriesSource = { name: name ?? `Series${c.series.length + 1}`, x: null, y: null, chartType: c.type };
           return { series: [...c.series.slice(0, at), added, ...c.series.slice(at)] };
         });
         return { chart, index: at };

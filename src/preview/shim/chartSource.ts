@@ -19,5 +19,5 @@ export function seriesFromSource(ref: RangeRef, seriesBy: SeriesBy): ChartSeries
   const line = (i: number): RangeRef => (byColumns ? { ...ref, left: ref.left + i, right: ref.left + i } : { ...ref, top: ref.top + i, bottom: ref.top + i });
   const x = count === 1 ? null : line(0);
   const firstY = count === 1 ? 0 : 1;
-  return Array.from({ length: count - firstY }, (_, k) => ({ name: `Series${k + 1}`, x, y: line(k + firstY) }));
+  return Array.from({ length: count - firstY }, (_, k) => ({ name: `Series${k + 1}`, x, y: line(k + firstY), chartType: 'XYScatter' }));
 }

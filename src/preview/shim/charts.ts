@@ -15,6 +15,8 @@ import { ShimRange } from './range';
 import { rangeRefOf } from './rangeRef';
 import type { SheetHandle, ShimRequestContext } from './requestContext';
 
+const AUTOMATIC_SCALE = { minimum: null, maximum: null };
+
 /** Excel's size for a new chart: 5 by 3 inches. */
 const NEW_CHART_WIDTH = 360;
 const NEW_CHART_HEIGHT = 216;
@@ -124,6 +126,7 @@ export class ShimChartCollection extends ShimClientObject<SheetHandle> {
           title: null,
           series: seriesFromSource(source, seriesBy),
           axisTitles: { category: '', value: '' },
+          axisScales: { category: AUTOMATIC_SCALE, value: AUTOMATIC_SCALE },
           bounds: this.besideData(sheetName, source),
         });
         return { sheet, id: chart.id };

@@ -58,8 +58,10 @@
  * - Chart: name (read/write), id, chartType, top/left/width/height (points, read/write),
  *   setPosition(startCell, endCell?) with ranges or addresses, delete(), worksheet, title.text,
  *   axes.categoryAxis.title.text (the X axis of a scatter chart), axes.valueAxis.title.text;
+ *   ChartAxis minimum/maximum (a number, or "" for automatic; an automatic one cannot be read);
  *   series: getItemAt, add(name?, index?) (no values until setValues), getCount, count, items;
- *   ChartSeries: name (read/write), setXAxisValues(range), setValues(range), delete(). Charts
+ *   ChartSeries: name (read/write), chartType (XYScatter or XYScatterLinesNoMarkers only),
+ *   setXAxisValues(range), setValues(range), delete(). Charts
  *   read their cells live (blank and error Y cells are gaps, text Y cells plot at 0) and move
  *   and size with the cells under them.
  * - CustomFunctions.associate(id, fn) and associate(mappings) into model.registerFunction
@@ -72,7 +74,7 @@
  *   fill patterns, row heights (rows keep one height, so wrapped text shows its first line).
  *   Touching one of these throws ApiNotFound rather than being silently ignored.
  * - Chart types other than xyscatter (add rejects them with InvalidArgument), setData, legends,
- *   data labels, chart and series formatting, axis scales (minimum, maximum, units), title
+ *   data labels, chart and series formatting, axis units, title
  *   visibility, getImage, chart events. A new chart goes beside its data rather than in the
  *   middle of the window as in Excel.
  * - Range.set(), insert, delete, getEntireRow/Column, getIntersection, getBoundingRect,

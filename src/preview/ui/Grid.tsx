@@ -4,7 +4,7 @@ import { plotChart } from '../workbook/chartData';
 import { anchorAt, PIXELS_PER_POINT } from '../workbook/layout';
 import type { RangeRef } from '../workbook/types';
 import type { PreviewWorkbook } from '../workbook/workbook';
-import { formatValue } from './formatValue';
+import { formatValue } from '../workbook/numberFormat';
 import { ScatterChart } from './ScatterChart';
 
 const ROW_HEIGHT = 24;

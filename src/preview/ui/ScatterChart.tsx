@@ -1,5 +1,5 @@
 import type { PlottedChart } from '../workbook/chartData';
-import { extent, hasZeroLine, linearScale, niceTicks, tickLabel } from './chartScale';
+import { axisTicks, extent, hasZeroLine, linearScale, tickLabel } from './chartScale';
 
 interface ScatterChartProps {
   name: string;
@@ -15,14 +15,18 @@ interface ScatterChartProps {
 const SERIES_COLOURS = ['#0f766e', '#52525b', '#b45309', '#1d4ed8'];
 const TICK_TARGET = 5;
 
+const colourOf = (index: number) => SERIES_COLOURS[index % SERIES_COLOURS.length];
+
 /**
- * One scatter chart over the grid, drawn as inline SVG from the values its cells hold now. Axis
- * titles and the series names (when there are several) take space only when present.
+ * One scatter chart over the grid, drawn as inline SVG from the values its cells hold now: marker
+ * series as dots, line series as straight lines without markers. Axes follow Excel's automatic
+ * scale unless their bounds are fixed; what lies outside fixed bounds is clipped, as in Excel.
+ * Axis titles and the series names (when there are several) take space only when present.
  */
 export function ScatterChart({ name, plotted, left, top, width, height }: ScatterChartProps) {
   const points = plotted.series.flatMap((s) => s.points);
-  const xTicks = niceTicks(...extent(points.map((p) => p.x)), TICK_TARGET);
-  const yTicks = niceTicks(...extent(points.map((p) => p.y)), TICK_TARGET);
+  const xTicks = axisTicks(plotted.xScale, ...extent(points.map((p) => p.x)), TICK_TARGET);
+  const yTicks = axisTicks(plotted.yScale, ...extent(points.map((p) => p.y)), TICK_TARGET);
   const legend = plotted.series.length > 1;
   const plot = {
     left: 52 + (plotted.yTitle ? 18 : 0),
@@ -33,6 +37,7 @@ export function ScatterChart({ name, plotted, left, top, width, height }: Scatte
   const x = linearScale(xTicks.min, xTicks.max, plot.left, plot.right);
   const y = linearScale(yTicks.min, yTicks.max, plot.bottom, plot.top);
   const label = plotted.title || name;
+  const clipId = `chart-plot-${name.replace(/[^A-Za-z0-9_-]/g, '_')}`;
 
   return (
     <div class="chart" data-chart={name} style={{ left: `${left}px`, top: `${top}px`, width: `${width}px`, height: `${height}px` }}>
@@ -46,7 +51,11 @@ export function ScatterChart({ name, plotted, left, top, width, height }: Scatte
           <g class="chart-legend">
             {plotted.series.map((s, i) => (
               <g key={i} transform={`translate(${plot.left + i * 130}, ${plot.top - 12})`}>
-                <circle r={4} cx={4} cy={-4} fill={SERIES_COLOURS[i % SERIES_COLOURS.length]} />
+                {s.drawn === 'lines' ? (
+                  <line x1={-2} x2={10} y1={-4} y2={-4} stroke={colourOf(i)} stroke-width={2} />
+                ) : (
+                  <circle r={4} cx={4} cy={-4} fill={colourOf(i)} />
+                )}
                 <text x={12} y={0}>
                   {s.name}
                 </text>
@@ -55,7 +64,7 @@ export function ScatterChart({ name, plotted, left, top, width, height }: Scatte
           </g>
         )}
         {yTicks.values.map((v) => (
-          <g key={`y${v}`} class="chart-tick">
+          <g key={`y${v}`} class="chart-tick" data-axis="y">
             <line x1={plot.left} x2={plot.right} y1={y(v)} y2={y(v)} class="chart-grid" />
             <text x={plot.left - 6} y={y(v) + 4} text-anchor="end">
               {tickLabel(v, yTicks.step)}
@@ -63,7 +72,7 @@ export function ScatterChart({ name, plotted, left, top, width, height }: Scatte
           </g>
         ))}
         {xTicks.values.map((v) => (
-          <g key={`x${v}`} class="chart-tick">
+          <g key={`x${v}`} class="chart-tick" data-axis="x">
             <line x1={x(v)} x2={x(v)} y1={plot.bottom} y2={plot.bottom + 4} class="chart-axis" />
             <text x={x(v)} y={plot.bottom + 17} text-anchor="middle">
               {tickLabel(v, xTicks.step)}
@@ -73,13 +82,26 @@ export function ScatterChart({ name, plotted, left, top, width, height }: Scatte
         {hasZeroLine(yTicks) && <line class="chart-zero" x1={plot.left} x2={plot.right} y1={y(0)} y2={y(0)} />}
         <line class="chart-axis" x1={plot.left} x2={plot.left} y1={plot.top} y2={plot.bottom} />
         <line class="chart-axis" x1={plot.left} x2={plot.right} y1={plot.bottom} y2={plot.bottom} />
-        {plotted.series.map((s, i) => (
-          <g key={i} class="chart-series" fill={SERIES_COLOURS[i % SERIES_COLOURS.length]}>
-            {s.points.map((p, j) => (
-              <circle key={j} cx={x(p.x)} cy={y(p.y)} r={3.5} />
-            ))}
-          </g>
-        ))}
+        <clipPath id={clipId}>
+          <rect x={plot.left} y={plot.top} width={Math.max(0, plot.right - plot.left)} height={Math.max(0, plot.bottom - plot.top)} />
+        </clipPath>
+        {plotted.series.map((s, i) =>
+          s.drawn === 'lines' ? (
+            <g key={i} class="chart-line" data-series={s.name} clip-path={`url(#${clipId})`} stroke={colourOf(i)}>
+              {s.runs
+                .filter((run) => run.length > 1)
+                .map((run, j) => (
+                  <polyline key={j} fill="none" stroke-width={1.5} points={run.map((p) => `${x(p.x)},${y(p.y)}`).join(' ')} />
+                ))}
+            </g>
+          ) : (
+            <g key={i} class="chart-series" data-series={s.name} clip-path={`url(#${clipId})`} fill={colourOf(i)}>
+              {s.points.map((p, j) => (
+                <circle key={j} cx={x(p.x)} cy={y(p.y)} r={3.5} />
+              ))}
+            </g>
+          ),
+        )}
         {plotted.xTitle && (
           <text class="chart-axis-title" x={(plot.left + plot.right) / 2} y={height - 8} text-anchor="middle">
             {plotted.xTitle}

@@ -64,3 +64,43 @@ export function extent(values: readonly number[]): [number, number] {
   }
   return [lo, hi];
 }
+
+/** A fixed axis bound, or null where the axis is automatic. */
+export interface AxisBounds {
+  minimum: number | null;
+  maximum: number | null;
+}
+
+/**
+ * The span an automatic axis covers, by Excel's rule (Microsoft's knowledge-base article "How
+ * Chart Axis Limits Are Determined", as Peltier, "How Excel Calculates Automatic Chart Axis
+ * Limits", 2012, restates it): when every value is above zero the axis starts at 0 unless the
+ * lowest is at least 5/6 of the highest, and mirrored below zero. So the preview, like Excel,
+ * squeezes data far from zero into the top of the chart unless the axis is fixed.
+ */
+export function automaticExtent(low: number, high: number): [number, number] {
+  if (low > 0 && low < (5 / 6) * high) return [0, high];
+  if (high < 0 && -high < (5 / 6) * -low) return [low, 0];
+  return [low, high];
+}
+
+/**
+ * Ticks for an axis. A fixed bound is the axis's end exactly, and the ticks are counted in steps
+ * from the minimum, as Excel counts major units from the axis minimum (from memory).
+ */
+export function axisTicks(bounds: AxisBounds, low: number, high: number, target = 5): Ticks {
+  const [autoLow, autoHigh] = automaticExtent(low, high);
+  const ticks = niceTicks(bounds.minimum ?? autoLow, bounds.maximum ?? autoHigh, target);
+  if (bounds.minimum === null && bounds.maximum === null) return ticks;
+  const min = bounds.minimum ?? ticks.min;
+  const max = bounds.maximum ?? ticks.max;
+  const decimals = Math.max(stepDecimals(ticks.step), decimalsOf(min));
+  const values: number[] = [];
+  for (let k = 0; min + k * ticks.step <= max + ticks.step * 1e-9; k++) values.push(Number((min + k * ticks.step).toFixed(decimals)));
+  return { min, max, step: ticks.step, values };
+}
+
+function decimalsOf(value: number): number {
+  const text = String(value);
+  return text.includes('e') ? 0 : (text.split('.')[1]?.length ?? 0);
+}

@@ -3,19 +3,34 @@
  * `title.text` and `series.name` from here and the grid draws from here, so an edit to a source
  * cell reaches the picture without the chart storing any values.
  */
-import type { CellValue, ChartSeriesSource, ChartSpec, RangeRef, WorkbookModel } from './types';
+import type { AxisScale, CellValue, ChartSeriesSource, ChartSpec, RangeRef, WorkbookModel } from './types';
 
 export type CellReader = Pick<WorkbookModel, 'valueAt' | 'hasSheet'>;
 
+export interface PlottedPoint {
+  x: number;
+  y: number;
+}
+
 export interface PlottedSeries {
   name: string;
-  points: { x: number; y: number }[];
+  /** 'markers' for an XYScatter series, 'lines' for XYScatterLinesNoMarkers. */
+  drawn: 'markers' | 'lines';
+  points: PlottedPoint[];
+  /**
+   * For lines, the runs of consecutive points: a blank or error cell breaks the line, as Excel's
+   * default for empty cells, "Gaps", does (from memory). Empty for markers.
+   */
+  runs: PlottedPoint[][];
 }
 
 export interface PlottedChart {
   title: string;
   xTitle: string;
   yTitle: string;
+  /** Fixed bounds of the horizontal and vertical axes, null where automatic. */
+  xScale: AxisScale;
+  yScale: AxisScale;
   series: PlottedSeries[];
 }
 
@@ -52,15 +67,20 @@ export function plotSeries(model: CellReader, series: ChartSeriesSource): Plotte
   const xs = series.x ? rangeValues(model, series.x) : [];
   // Any text among the X values makes Excel number the points 1, 2, 3… instead.
   const numbered = series.x === null || xs.some((x) => x !== null && typeof x !== 'number');
-  const points: { x: number; y: number }[] = [];
+  const points: PlottedPoint[] = [];
+  const runs: PlottedPoint[][] = [[]];
   ys.forEach((y, i) => {
     const x = numbered ? i + 1 : xs[i];
     // Blank and error cells leave a gap. Text, "" from a formula included, is plotted at zero
     // (from memory, as Excel does; the reason reports must not chart cells holding "").
     const plotted = typeof y === 'string' ? 0 : y;
-    if (typeof plotted === 'number' && typeof x === 'number') points.push({ x, y: plotted });
+    if (typeof plotted === 'number' && typeof x === 'number') {
+      points.push({ x, y: plotted });
+      runs[runs.length - 1].push({ x, y: plotted });
+    } else if (runs[runs.length - 1].length > 0) runs.push([]);
   });
-  return { name: seriesName(model, series), points };
+  const drawn = series.chartType === 'XYScatterLinesNoMarkers' ? 'lines' : 'markers';
+  return { name: seriesName(model, series), drawn, points, runs: drawn === 'lines' ? runs.filter((r) => r.length > 0) : [] };
 }
 
 export function plotChart(model: CellReader, chart: ChartSpec): PlottedChart {
@@ -68,6 +88,8 @@ export function plotChart(model: CellReader, chart: ChartSpec): PlottedChart {
     title: chartTitle(model, chart),
     xTitle: chart.axisTitles.category,
     yTitle: chart.axisTitles.value,
+    xScale: chart.axisScales.category,
+    yScale: chart.axisScales.value,
     series: chart.series.map((s) => plotSeries(model, s)),
   };
 }

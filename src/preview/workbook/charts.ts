@@ -66,6 +66,7 @@ export class ChartList {
     const moved = (ref: RangeRef): RangeRef => (ref.sheet.toLowerCase() === lower ? { ...ref, sheet: to } : ref);
     for (const { spec } of this.records) {
       spec.series = spec.series.map((s) => ({
+        ...s,
         name: typeof s.name === 'string' ? s.name : moved(s.name),
         x: s.x && moved(s.x),
         y: s.y && moved(s.y),

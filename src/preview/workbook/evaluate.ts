@@ -4,6 +4,7 @@
  * give it (functionArguments.ts), and its result or thrown CustomFunctions.Error becomes the
  * cell's value or error.
  */
+import { callBuiltin, divide, isBuiltin, type BuiltinResult, type OperandOf } from './builtins';
 import { CustomFunctionsError } from './customFunctionError';
 import { buildArguments, type CalculationBehaviour } from './functionArguments';
 import type { FunctionShape } from './functionMetadata';
@@ -51,8 +52,39 @@ export function evaluate(expression: Expression, context: EvaluationContext): Fo
       return { grid };
     }
     case 'call':
-      return callFunction(expression, context);
+      return isBuiltin(expression.name) ? fromBuiltin(callBuiltin(expression.name, expression.args, operands(context))) : callFunction(expression, context);
+    case 'divide': {
+      const operandOf = operands(context);
+      return fromBuiltin(divide(operandOf(expression.dividend), operandOf(expression.divisor)));
+    }
   }
+}
+
+/** A built-in's argument: a reference's cells as they are (blanks stay blank), else one value. */
+function operands(context: EvaluationContext): OperandOf {
+  const operandOf: OperandOf = (expression) => {
+    if (expression.kind === 'reference') {
+      const range = expression.range;
+      if (!context.hasSheet(range.sheet)) return { error: { error: '#REF!', message: `There is no sheet named ${range.sheet}.` } };
+      const cells: CellValue[] = [];
+      for (let r = range.top; r <= range.bottom; r++) for (let c = range.left; c <= range.right; c++) cells.push(context.valueAt(range.sheet, r, c));
+      return { cells };
+    }
+    const settled = (result: FormulaResult) => {
+      if ('error' in result) return result;
+      if (result.grid.length !== 1 || result.grid[0].length !== 1)
+        return { error: { error: '#VALUE!', message: 'The preview does not calculate over a spilled result.' } };
+      return { value: result.grid[0][0] };
+    };
+    const result = evaluate(expression, context);
+    return result instanceof Promise ? result.then(settled) : settled(result);
+  };
+  return operandOf;
+}
+
+function fromBuiltin(result: BuiltinResult | Promise<BuiltinResult>): FormulaResult | Promise<FormulaResult> {
+  const toFormula = (r: BuiltinResult): FormulaResult => ('error' in r ? r : { grid: [[r.value]] });
+  return result instanceof Promise ? result.then(toFormula) : toFormula(result);
 }
 
 function callFunction(call: Extract<Expression, { kind: 'call' }>, context: EvaluationContext): FormulaResult | Promise<FormulaResult> {

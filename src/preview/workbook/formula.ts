@@ -1,7 +1,10 @@
 /**
- * The preview's formula language: what Plumbline's users type, and no more. A formula is a
- * function call (`=PLUMB.TERMS(B1:B61, 'Planned batches'!$C$1:$F$6, 0.9, , FALSE)`), a reference
- * (`=B2`) or a constant. Arguments may be left empty, which passes an omitted argument.
+ * The preview's formula language: what Plumbline's users type and its reports write, and no more.
+ * A formula is a function call (`=PLUMB.TERMS(B1:B61, 'Planned batches'!$C$1:$F$6, 0.9, , FALSE)`),
+ * a reference (`=B2`), a constant, or a division of those (`=4/COUNT(A2:A61)`); `/` is the one
+ * operator, taken left to right as Excel's equal-precedence operators are ("Calculation operators
+ * and precedence in Excel", Microsoft Support). Arguments may be left empty, which passes an
+ * omitted argument.
  */
 import { parseRange } from '../../addressing/a1';
 import type { RangeRef } from './types';
@@ -11,7 +14,8 @@ export type Expression =
   | { kind: 'reference'; range: RangeRef }
   | { kind: 'number'; value: number }
   | { kind: 'text'; value: string }
-  | { kind: 'boolean'; value: boolean };
+  | { kind: 'boolean'; value: boolean }
+  | { kind: 'divide'; dividend: Expression; divisor: Expression };
 
 export class FormulaSyntaxError extends Error {}
 
@@ -27,6 +31,7 @@ export function parseFormula(formula: string, currentSheet: string): Expression 
 export function referencedRanges(expression: Expression): RangeRef[] {
   if (expression.kind === 'reference') return [expression.range];
   if (expression.kind === 'call') return expression.args.flatMap((a) => (a === null ? [] : referencedRanges(a)));
+  if (expression.kind === 'divide') return [...referencedRanges(expression.dividend), ...referencedRanges(expression.divisor)];
   return [];
 }
 
@@ -51,6 +56,16 @@ class Parser {
   }
 
   expression(): Expression {
+    let expression = this.operand();
+    for (;;) {
+      this.skipSpace();
+      if (this.text[this.at] !== '/') return expression;
+      this.at++;
+      expression = { kind: 'divide', dividend: expression, divisor: this.operand() };
+    }
+  }
+
+  private operand(): Expression {
     this.skipSpace();
     const ch = this.text[this.at];
     if (ch === undefined) throw new FormulaSyntaxError('The formula is incomplete.');

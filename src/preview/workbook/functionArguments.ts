@@ -90,7 +90,8 @@ class Builder {
     const dimensionality = parameter?.dimensionality ?? 'matrix';
     switch (expression.kind) {
       case 'call':
-        throw new NotCalled({ error: '#VALUE!', message: 'Nested function calls are not supported in the preview.' });
+      case 'divide':
+        throw new NotCalled({ error: '#VALUE!', message: 'Nested calculations are not supported in the preview.' });
       case 'reference': {
         const range = expression.range;
         if (!this.source.hasSheet(range.sheet)) throw new NotCalled({ error: '#REF!', message: `There is no sheet named ${range.sheet}.` });

@@ -49,6 +49,19 @@ export interface ChartSeriesSource {
   x: RangeRef | null;
   /** Null only for a series added without values yet. */
   y: RangeRef | null;
+  /**
+   * The series' own chart type (ChartSeries.chartType): a new series takes its chart's; the
+   * preview draws points ('XYScatter') or straight lines through them without markers.
+   */
+  chartType: SeriesChartType;
+}
+
+export type SeriesChartType = 'XYScatter' | 'XYScatterLinesNoMarkers';
+
+/** An axis's fixed bounds (ChartAxis.minimum, maximum); null where Excel scales it automatically. */
+export interface AxisScale {
+  minimum: number | null;
+  maximum: number | null;
 }
 
 export interface ChartSpec {
@@ -61,6 +74,7 @@ export interface ChartSpec {
   series: ChartSeriesSource[];
   /** For a scatter chart the category axis is the horizontal (X) one; '' means no title. */
   axisTitles: { category: string; value: string };
+  axisScales: { category: AxisScale; value: AxisScale };
   bounds: ChartBounds;
 }
 

@@ -439,7 +439,9 @@ export class PreviewWorkbook implements WorkbookModel {
 
   private formulasCalling(id: string): Set<FormulaCell> {
     const calls = (e: Expression | undefined | null): boolean =>
-      e !== undefined && e !== null && e.kind === 'call' && (e.name === `${NAMESPACE}${id}` || e.args.some(calls));
+      e !== undefined &&
+      e !== null &&
+      ((e.kind === 'call' && (e.name === `${NAMESPACE}${id}` || e.args.some(calls))) || (e.kind === 'divide' && (calls(e.dividend) || calls(e.divisor))));
     return new Set([...this.everyFormula()].filter((f) => calls(f.expression)));
   }
 

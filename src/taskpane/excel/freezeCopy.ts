@@ -1,5 +1,5 @@
 import { formatRange, type RangeRef } from '../../addressing/a1';
-import { LIVE_NOTE, LIVE_QQ_LABEL, LIVE_SETTINGS_HEADING, REPORT_TITLE_PREFIX } from '../model/reportPlan';
+import { LIVE_NOTE, LIVE_QQ_LABEL, LIVE_SETTINGS_HEADING, REFRESH_NOTE, REPORT_TITLE_PREFIX, VALUES_SETTINGS_HEADING } from '../model/reportSections';
 import { inPieces } from './inPieces';
 import { longRun } from './longRun';
 import { jsonBytes } from './payload';
@@ -11,9 +11,13 @@ export function frozenTitle(title: string, reportName: string, asOf: string): st
   return `${title}: frozen copy of "${reportName}", values as of ${asOf} UTC`;
 }
 
-/** What the copy says where the live report speaks of itself: no line promises formulas or cells that recalculate. */
+/**
+ * What the copy says where a report speaks of itself: no line promises formulas or cells that
+ * recalculate, nor a Refresh that a copy never gets; it says the values are as of the copy.
+ */
 export function frozenText(text: string, asOf: string): string {
-  if (text === LIVE_SETTINGS_HEADING) return `Settings used (as of ${asOf} UTC; editing them here changes nothing)`;
+  if (text === LIVE_SETTINGS_HEADING || text === VALUES_SETTINGS_HEADING) return `Settings used (as of ${asOf} UTC; editing them here changes nothing)`;
+  if (text.endsWith(REFRESH_NOTE)) return `${text.slice(0, -REFRESH_NOTE.length)}This copy keeps the values as of ${asOf} UTC: Refresh does not reach it.`;
   if (text === LIVE_QQ_LABEL) return 'Normal Q–Q points';
   if (text.endsWith(LIVE_NOTE))
     return `${text.slice(0, -LIVE_NOTE.length)}Every number below is a value as of ${asOf} UTC, not a formula: nothing here recalculates.`;
@@ -63,16 +67,18 @@ export async function freezeActiveReport(now: Date): Promise<string> {
     return { reportName: report.name, used: extent, name: copyName };
   });
   const asOf = now.toISOString().slice(0, 16).replace('T', ' ');
-  const labelRows: number[] = [];
+  const textCells: { row: number; column: number }[] = [];
   try {
     await readRowBlocks(
       [used],
       ({ values, numberFormats, offset }) => {
         const top = used.top + offset;
-        // Headings are text in the report's first column; only those cells are asked for bold.
-        values[0].forEach((row, i) => {
-          if (typeof row[0] === 'string' && row[0] !== '') labelRows.push(top + i);
-        });
+        // Headings are text (in the first column, and beside the charts); only text cells are asked for bold.
+        values[0].forEach((row, i) =>
+          row.forEach((v, j) => {
+            if (typeof v === 'string' && v !== '') textCells.push({ row: top + i, column: used.left + j });
+          }),
+        );
         const isTitle = (i: number, j: number) => top + i === 0 && used.left + j === 0;
         const text = values[0].map((row, i) =>
           row.map((v, j) => (typeof v !== 'string' ? v : isTitle(i, j) ? frozenTitle(v, reportName, asOf) : frozenText(v, asOf))),
@@ -81,7 +87,7 @@ export async function freezeActiveReport(now: Date): Promise<string> {
       },
       { numberFormats: true },
     );
-    await copyBold(reportName, name, used.left, labelRows);
+    await copyBold(reportName, name, textCells);
     await longRun(async (context) => {
       const copy = context.workbook.worksheets.getItem(name);
       copy.getRange('A1').format.columnWidth = 170;
@@ -101,24 +107,24 @@ export async function freezeActiveReport(now: Date): Promise<string> {
 const isBlank = (value: unknown) => value === '' || value === null;
 
 /**
- * Bold, cell by cell, from the report's first-column labels to the same cells of the copy: a
- * range's font.bold reads null over cells that differ, so each label is asked on its own.
+ * Bold, cell by cell, from the report's text cells to the same cells of the copy: a range's
+ * font.bold reads null over cells that differ, so each text cell is asked on its own.
  */
-async function copyBold(reportName: string, copyName: string, column: number, rows: readonly number[]): Promise<void> {
+async function copyBold(reportName: string, copyName: string, cells: readonly { row: number; column: number }[]): Promise<void> {
   await inPieces(
-    rows.length,
+    cells.length,
     () => BOLD_CELL_BYTES,
     (start, count) =>
       longRun(async (context) => {
         const report = context.workbook.worksheets.getItem(reportName);
-        const fonts = rows.slice(start, start + count).map((row) => {
+        const fonts = cells.slice(start, start + count).map(({ row, column }) => {
           const font = report.getRange(formatRange({ sheet: reportName, top: row, left: column, bottom: row, right: column }, false)).format.font;
           font.load('bold');
-          return { row, font };
+          return { row, column, font };
         });
         await context.sync();
         const copy = context.workbook.worksheets.getItem(copyName);
-        for (const { row, font } of fonts) {
+        for (const { row, column, font } of fonts) {
           if (font.bold) copy.getRange(formatRange({ sheet: copyName, top: row, left: column, bottom: row, right: column }, false)).format.font.bold = true;
         }
         await context.sync();

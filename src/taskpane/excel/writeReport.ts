@@ -1,5 +1,6 @@
 import { cellAddress, formatRange } from '../../addressing/a1';
-import type { ReportCell, ReportChart, ReportPlan } from '../model/reportPlan';
+import type { AxisBounds, ReportChartPlan } from '../model/reportCharts';
+import type { ReportCell, ReportPlan } from '../model/reportPlan';
 import { longRun } from './longRun';
 import { uniqueSheetName } from './uniqueSheetName';
 
@@ -38,18 +39,24 @@ export async function writeReport(plan: (sheetName: string) => ReportPlan): Prom
 }
 
 /**
- * Each chart gets exactly the one series its plan names. `charts.add` needs a source range and
- * lays out series from it by its own rules, on cells whose formulas may still be calculating, so
- * whatever series it made are deleted and the planned one is added and pointed at its cells
- * (ChartSeriesCollection.add, ChartSeries.setXAxisValues and setValues: ExcelApi 1.7).
+ * Each chart gets exactly the series its plan names: the points, then any guide lines. `charts.add`
+ * needs a source range and lays out series from it by its own rules, on cells whose formulas may
+ * still be calculating, so whatever series it made are deleted and the planned ones are added and
+ * pointed at their cells (ChartSeriesCollection.add, ChartSeries.setXAxisValues and setValues:
+ * ExcelApi 1.7). A guide line is a series of its own chart type, XYScatterLinesNoMarkers
+ * (ChartSeries.chartType, ExcelApi 1.7): straight lines through its points, no markers. Fixed axis
+ * bounds go to ChartAxis.minimum and maximum (ExcelApi 1.1); the category axis is a scatter
+ * chart's X axis. An axis planned 'auto' is left as Excel made it.
  */
-async function addCharts(sheet: Excel.Worksheet, planned: readonly ReportChart[], context: Excel.RequestContext): Promise<void> {
+async function addCharts(sheet: Excel.Worksheet, planned: readonly ReportChartPlan[], context: Excel.RequestContext): Promise<void> {
   const added = planned.map((c) => {
-    const chart = sheet.charts.add(Excel.ChartType.xyscatter, sheet.getRange(formatRange(c.y, false)), Excel.ChartSeriesBy.columns);
+    const chart = sheet.charts.add(Excel.ChartType.xyscatter, sheet.getRange(formatRange(c.series[0].y, false)), Excel.ChartSeriesBy.columns);
     chart.name = c.name;
     chart.title.text = c.title;
-    chart.axes.categoryAxis.title.text = c.xTitle;
-    chart.axes.valueAxis.title.text = c.yTitle;
+    chart.axes.categoryAxis.title.text = c.xAxis.title;
+    chart.axes.valueAxis.title.text = c.yAxis.title;
+    setBounds(chart.axes.categoryAxis, c.xAxis.bounds);
+    setBounds(chart.axes.valueAxis, c.yAxis.bounds);
     chart.setPosition(c.topLeft, c.bottomRight);
     chart.series.load('items');
     return { chart, c };
@@ -58,10 +65,19 @@ async function addCharts(sheet: Excel.Worksheet, planned: readonly ReportChart[]
   for (const { chart, c } of added) {
     // From the last, so each deletion leaves the positions of those still to go unchanged.
     for (const made of [...chart.series.items].reverse()) made.delete();
-    const series = chart.series.add(c.yTitle);
-    series.setXAxisValues(sheet.getRange(formatRange(c.x, false)));
-    series.setValues(sheet.getRange(formatRange(c.y, false)));
+    for (const s of c.series) {
+      const series = chart.series.add(s.name);
+      series.setXAxisValues(sheet.getRange(formatRange(s.x, false)));
+      series.setValues(sheet.getRange(formatRange(s.y, false)));
+      if (s.drawn === 'line') series.chartType = Excel.ChartType.xyscatterLinesNoMarkers;
+    }
   }
+}
+
+function setBounds(axis: Excel.ChartAxis, bounds: AxisBounds): void {
+  if (bounds === 'auto') return;
+  axis.minimum = bounds.minimum;
+  axis.maximum = bounds.maximum;
 }
 
 /** Number formats, then cells; a label gets the text format before its value so it stays text. */

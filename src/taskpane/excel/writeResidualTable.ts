@@ -1,7 +1,7 @@
 import { cellAddress } from '../../addressing/a1';
 import type { ResolvedRanges } from '../model/choices';
 import { convertBlock } from '../model/blockRows';
-import type { StreamedAnalysis } from '../model/streamedAnalysis';
+import type { StreamedAnalysis } from '../model/paneAnalysis';
 import { headerAddresses, pieceAddress, RESIDUAL_TABLE_LEFT, RESIDUAL_TABLE_TOP, tablePieces } from '../model/residualTableLayout';
 import { RESIDUAL_TABLE_HEADER, residualRows } from '../model/streamedResiduals';
 import { inPieces } from './inPieces';

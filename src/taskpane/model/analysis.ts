@@ -1,22 +1,21 @@
 import {
-  type AssumptionChecks,
   assumptionChecks,
   buildModelFrame,
   type CellGrid,
+  codeRow,
   compareNested,
-  EngineError,
-  type FitSettings,
   fitModel,
   type ModelFit,
   type ModelFrame,
   type NestedComparison,
-  type RangeOrigin,
+  predict,
 } from '../../engine';
-import type { RangeRef } from '../../addressing/a1';
-import type { BlockSources } from './blockRows';
+import { failureMessage, fitOrder, settingsOf } from './analysisParts';
+import { type BlockSources, originOf } from './blockRows';
 import type { PaneChoices } from './choices';
-import { knownSigmaOf } from './noiseSdField';
-import { dataWarnings } from './warnings';
+import { labelled, type LabelledPrediction, type NewRowsRead, type PredictorColumn, readNewRowInputs } from './newRowPredictions';
+import type { CellsAnalysis } from './paneAnalysis';
+import { type ColumnFacts, paneWarnings } from './paneWarnings';
 
 /** The cells the pane has read, one grid per chosen range, and the ranges they were read from. */
 export interface ReadData {
@@ -24,47 +23,57 @@ export interface ReadData {
   predictorColumns: CellGrid[];
   weights: CellGrid | undefined;
   sources: BlockSources;
+  newRows?: NewRowsRead;
 }
 
-export interface PaneAnalysis {
-  frame: ModelFrame;
-  fit: ModelFit | undefined;
-  fitError: string | undefined;
-  nested: NestedComparison | undefined;
-  nestedError: string | undefined;
-  addedNames: string[];
-  settings: FitSettings;
-  warnings: string[];
-  checks: AssumptionChecks | undefined;
+/** Constant and repeated term columns, looked up in every row used. */
+function columnFacts(frame: ModelFrame): ColumnFacts {
+  const { x } = frame.data;
+  const names = frame.data.names ?? [];
+  const constant = names.filter((_, j) => x.length > 1 && x.every((row) => row[j] === x[0][j]));
+  const identical: [string, string][] = [];
+  for (let a = 0; a < names.length; a++) {
+    for (let b = a + 1; b < names.length; b++) if (x.every((row) => row[a] === row[b])) identical.push([names[a], names[b]]);
+  }
+  return { constant, identical };
 }
 
-export function settingsOf(choices: PaneChoices): FitSettings {
-  return {
-    level: choices.level,
-    intercept: choices.intercept,
-    knownSigma: knownSigmaOf(choices.knownSigma),
-    covariance: choices.robust,
-  };
+/** Each source column in sheet order, with its coding. */
+function predictorColumns(frame: ModelFrame, order: readonly number[]): PredictorColumn[] {
+  const columns: PredictorColumn[] = [];
+  order.forEach((j, position) => {
+    const column = frame.columns[position];
+    columns[j] = { name: column.name, levels: column.kind === 'categorical' ? column.levels : undefined };
+  });
+  return columns;
 }
 
-function message(error: unknown): string {
-  return error instanceof EngineError ? error.message : `Unexpected problem: ${String(error)}`;
-}
-
-function originOf(range: RangeRef): RangeOrigin {
-  return { sheet: range.sheet, row: range.top, column: range.left };
+function predictions(frame: ModelFrame, fit: ModelFit, newRows: NewRowsRead, columns: PredictorColumn[], order: readonly number[]): LabelledPrediction[] {
+  const inputs = readNewRowInputs(newRows, columns, frame.hasHeader);
+  const estimable = inputs.filter((input) => input.blank === undefined);
+  const coded = estimable.map((input) =>
+    codeRow(
+      order.map((j) => input.cells[j].value),
+      frame.columns,
+    ),
+  );
+  const predicted = coded.length === 0 ? [] : predict(frame.data, coded, fit.settings);
+  const columnNames = frame.termColumns.map((c) => frame.columns[c].name);
+  return inputs.map((input) => {
+    const at = estimable.indexOf(input);
+    return labelled(input, at < 0 ? undefined : predicted[at], columnNames);
+  });
 }
 
 /**
- * Everything the pane shows about the data and the model, from the engine (and so from the same
- * cache as the cell functions). Base predictors come first and added ones last, the order the
- * report's formulas use. Each column goes in as its own block with its worksheet origin, so rows
- * are numbered as the sheet numbers them and a bad cell is named by its address.
+ * The in-memory source of the pane's analysis, from the engine (and so from the same cache as the
+ * cell functions). Base predictors come first and added ones last, the order the report's
+ * formulas use. Each column goes in as its own block with its worksheet origin, so rows are
+ * numbered as the sheet numbers them and a bad cell is named by its address.
  */
-export function analyze(data: ReadData, choices: PaneChoices): PaneAnalysis {
+export function analyzeCells(data: ReadData, choices: PaneChoices): CellsAnalysis {
   const settings = settingsOf(choices);
-  const isAdded = (j: number) => choices.added.includes(j);
-  const order = data.predictorColumns.map((_, j) => j).sort((a, b) => Number(isAdded(a)) - Number(isAdded(b)));
+  const order = fitOrder(data.predictorColumns.length, choices.added);
   const { sources } = data;
   const frame = buildModelFrame({
     y: data.response,
@@ -82,14 +91,14 @@ export function analyze(data: ReadData, choices: PaneChoices): PaneAnalysis {
   try {
     fit = fitModel(frame.data, settings);
   } catch (error) {
-    fitError = message(error);
+    fitError = failureMessage(error);
   }
 
-  const addedSources = new Set(order.map((j, position) => (isAdded(j) ? position : -1)).filter((p) => p >= 0));
-  const inAdded = frame.termColumns.map((c) => addedSources.has(c));
+  const addedPositions = new Set(order.map((j, position) => (choices.added.includes(j) ? position : -1)).filter((p) => p >= 0));
+  const inAdded = frame.termColumns.map((c) => addedPositions.has(c));
   let nested: NestedComparison | undefined;
   let nestedError: string | undefined;
-  if (fit !== undefined && addedSources.size > 0) {
+  if (fit !== undefined && addedPositions.size > 0) {
     try {
       const { x, y, weights } = frame.data;
       nested = compareNested(
@@ -97,10 +106,10 @@ export function analyze(data: ReadData, choices: PaneChoices): PaneAnalysis {
         settings,
       );
     } catch (error) {
-      nestedError = message(error);
+      nestedError = failureMessage(error);
     }
   }
-  let checks: AssumptionChecks | undefined;
+  let checks: CellsAnalysis['checks'];
   if (fit !== undefined) {
     try {
       checks = assumptionChecks(frame.data, settings, frame.usedRows);
@@ -109,15 +118,43 @@ export function analyze(data: ReadData, choices: PaneChoices): PaneAnalysis {
       checks = undefined;
     }
   }
+  const columns = predictorColumns(frame, order);
+  let labelledPredictions: LabelledPrediction[] = [];
+  let predictionError: string | undefined;
+  if (fit !== undefined && data.newRows !== undefined) {
+    try {
+      labelledPredictions = predictions(frame, fit, data.newRows, columns, order);
+    } catch (error) {
+      predictionError = failureMessage(error);
+    }
+  }
+  const spanning = frame.columns.find((c) => c.kind === 'categorical' && c.reference === undefined);
   return {
+    source: 'cells',
     frame,
-    fit,
     checks,
+    responseName: frame.responseName,
+    hasHeader: frame.hasHeader,
+    predictorNames: columns.map((c) => c.name),
+    rowsUsed: frame.usedRows.length,
+    rowsSkipped: frame.skipped.length,
+    skippedExamples: frame.skipped,
+    fit,
     fitError,
     nested,
     nestedError,
-    addedNames: frame.columns.filter((_, c) => addedSources.has(c)).map((c) => c.name),
+    addedNames: frame.columns.filter((_, c) => addedPositions.has(c)).map((c) => c.name),
     settings,
-    warnings: dataWarnings(frame, fit),
+    warnings: paneWarnings({
+      fit,
+      columns: columnFacts(frame),
+      spanning: spanning?.name,
+      rowsSkipped: frame.skipped.length,
+      skippedExamples: frame.skipped,
+      checks,
+    }),
+    unchecked: [],
+    predictions: labelledPredictions,
+    predictionError,
   };
 }

@@ -1,5 +1,15 @@
 import { cellAddress, quoteSheetName, type RangeRef } from '../../addressing/a1';
-import { type Cell, classifyCell, describeCell, EngineError, type RowBlock, type SkippedRow } from '../../engine';
+import {
+  badCellMessage,
+  buildModelFrame,
+  type Cell,
+  classifyCell,
+  EngineError,
+  isCategoricalColumn,
+  type RangeOrigin,
+  type RowBlock,
+  type SkippedRow,
+} from '../../engine';
 import { asCellValue } from './readValues';
 
 /** One block of Range.values per chosen column (each rows × 1), as the sheet gave them. */
@@ -34,24 +44,32 @@ export interface ConvertedBlock {
 const EXAMPLES = 5;
 
 /**
- * The header is decided as the cell functions decide it: a text first response cell (with more
- * than one row) makes the first row a header, and every predictor then needs a text or blank header.
+ * The header as the engine decides it for the cell functions and the in-memory pane (its model
+ * frame, not a copy of its rule): the frame of the first row and, when the ranges have more rows,
+ * a stand-in data row of zeros, which can neither fail nor change what the first row says. The
+ * predictors go in `order` (sheet order unless given), as the fit reads them, since a column
+ * without a header is named by its place there; names come back in sheet order. A numeric
+ * predictor header under a text response header is the engine's error, naming the cell.
  */
-export function detectHeader(first: BlockValues, sources: BlockSources, totalRows: number): BlockHeader {
-  const responseCell = classifyCell(asCellValue(first.response[0]?.[0]));
-  const hasHeader = totalRows > 1 && responseCell.kind === 'text';
-  const predictorNames = first.predictors.map((column, j) => {
-    if (!hasHeader) return `x${j + 1}`;
-    const cell = classifyCell(asCellValue(column[0]?.[0]));
-    if (cell.kind === 'missing') return `x${j + 1}`;
-    if (cell.kind === 'text') return cell.text;
-    throw new EngineError(
-      'bad-value',
-      `The response starts with a header but predictor ${j + 1}'s first cell (${place(sources.predictors[j], 0)}) holds ${describeCell(cell)}: ` +
-        'give every predictor column a text header, or select the ranges without headers.',
-    );
+export function detectHeader(first: BlockValues, sources: BlockSources, totalRows: number, order?: readonly number[]): BlockHeader {
+  const fitOrder = order ?? first.predictors.map((_, j) => j);
+  const rows = (column: readonly (readonly unknown[])[]) => (totalRows > 1 ? [[asCellValue(column[0]?.[0])], [0]] : [[asCellValue(column[0]?.[0])]]);
+  const frame = buildModelFrame({
+    y: rows(first.response),
+    x: fitOrder.map((j) => rows(first.predictors[j])),
+    intercept: false,
+    origins: { y: originOf(sources.response), x: fitOrder.map((j) => originOf(sources.predictors[j])) },
   });
-  return { hasHeader, responseName: hasHeader && responseCell.kind === 'text' ? responseCell.text : 'y', predictorNames };
+  const predictorNames: string[] = [];
+  fitOrder.forEach((j, position) => {
+    predictorNames[j] = frame.columns[position].name;
+  });
+  return { hasHeader: frame.hasHeader, responseName: frame.responseName, predictorNames };
+}
+
+/** Where a chosen range sits on its sheet, for the engine's messages and row numbers. */
+export function originOf(range: RangeRef): RangeOrigin {
+  return { sheet: range.sheet, row: range.top, column: range.left };
 }
 
 /** "Data!C5": the cell `offset` rows down a column, as a user finds it on the sheet. */
@@ -65,10 +83,7 @@ function place(source: RangeRef, offset: number): string {
  */
 export function categoricalInFirstBlock(first: BlockValues, header: BlockHeader): string | undefined {
   const start = header.hasHeader ? 1 : 0;
-  const index = first.predictors.findIndex((column) => {
-    const cells = column.slice(start).map((row) => classifyCell(asCellValue(row[0])));
-    return cells.some((c) => c.kind === 'text') && !cells.some((c) => c.kind === 'number');
-  });
+  const index = first.predictors.findIndex((column) => isCategoricalColumn(column.slice(start).map((row) => classifyCell(asCellValue(row[0])))));
   if (index < 0) return undefined;
   return (
     `${header.predictorNames[index]} holds text, so it would be a categorical predictor: categorical columns need the data to fit in a live report. ` +
@@ -78,6 +93,8 @@ export function categoricalInFirstBlock(first: BlockValues, header: BlockHeader)
 
 interface Located {
   cell: Cell;
+  /** The argument the engine's messages name it by: response, predictors or weights. */
+  argument: string;
   what: string;
   source: RangeRef;
 }
@@ -98,13 +115,17 @@ export function convertBlock(values: BlockValues, sources: BlockSources, header:
   let skipped = 0;
   let rows = 0;
   for (let i = start; i < length; i++) {
-    const located: Located[] = [{ cell: classifyCell(asCellValue(values.response[i][0])), what: header.responseName, source: sources.response }];
-    for (let j = 0; j < p; j++)
-      located.push({ cell: classifyCell(asCellValue(values.predictors[j][i][0])), what: header.predictorNames[j], source: sources.predictors[j] });
-    if (values.weights !== undefined && sources.weights !== undefined) {
-      located.push({ cell: classifyCell(asCellValue(values.weights[i][0])), what: 'weight', source: sources.weights });
+    const located: Located[] = [
+      { cell: classifyCell(asCellValue(values.response[i][0])), argument: 'response', what: header.responseName, source: sources.response },
+    ];
+    for (let j = 0; j < p; j++) {
+      const cell = classifyCell(asCellValue(values.predictors[j][i][0]));
+      located.push({ cell, argument: 'predictors', what: header.predictorNames[j], source: sources.predictors[j] });
     }
-    for (const l of located) rejectBadCell(l, offset + i, worksheetRow(i));
+    if (values.weights !== undefined && sources.weights !== undefined) {
+      located.push({ cell: classifyCell(asCellValue(values.weights[i][0])), argument: 'weights', what: 'weight', source: sources.weights });
+    }
+    for (const l of located) rejectBadCell(l, offset + i);
     const missing = located.find((l) => l.cell.kind === 'missing');
     if (missing !== undefined) {
       skipped++;
@@ -133,14 +154,10 @@ export function convertBlock(values: BlockValues, sources: BlockSources, header:
   return { block: fill(values, used, rows, p), usedRows, skipped, skippedExamples };
 }
 
-/** `offset`: the cell's row within the chosen ranges; `row`: the worksheet row it is on. */
-function rejectBadCell({ cell, what, source }: Located, offset: number, row: number): void {
+/** `offset`: the cell's row within the chosen ranges. Worded by the engine's rule, as the model frame words it. */
+function rejectBadCell({ cell, argument, what, source }: Located, offset: number): void {
   if (cell.kind === 'number' || cell.kind === 'missing') return;
-  const hint =
-    cell.kind === 'text' && /^[-+]?[\d.,\s]+$/.test(cell.text)
-      ? ' It looks like a number stored as text: re-enter it as a number without separators.'
-      : ' Use a number, or leave the cell blank to skip the row.';
-  throw new EngineError('bad-value', `Row ${row}, cell ${place(source, offset)} ("${what}"), holds ${describeCell(cell)}.${hint}`);
+  throw new EngineError('bad-value', badCellMessage(cell, `${argument} cell ${place(source, offset)} ("${what}")`));
 }
 
 /** Second pass: the used rows only, x column-major, so no row-major copy is ever built. */

@@ -57,6 +57,11 @@ function parseField(text: string, field: keyof PaneChoices, label: string, probl
   return ranges as RangeRef[];
 }
 
+/** The confidence level's rule, applied when the data are read and as the level is typed. */
+export function levelProblem(level: number): string | undefined {
+  return level > 0 && level < 1 ? undefined : 'The confidence level must be between 0 and 1, such as 0.95.';
+}
+
 /**
  * Turns the typed or picked addresses into ranges and checks their shapes against each other,
  * so the pane can say what to fix before anything is read.
@@ -90,9 +95,29 @@ export function resolveRanges(choices: PaneChoices): { ranges?: ResolvedRanges; 
   }
   const sigmaProblem = noiseSdProblem(choices.knownSigma);
   if (sigmaProblem !== undefined) problems.push({ field: 'knownSigma', message: sigmaProblem });
-  if (!(choices.level > 0 && choices.level < 1)) problems.push({ field: 'level', message: 'The confidence level must be between 0 and 1, such as 0.95.' });
+  const level = levelProblem(choices.level);
+  if (level !== undefined) problems.push({ field: 'level', message: level });
   if (problems.length > 0) return { problems };
   return { ranges: { response, predictorColumns, weights, newRows: newAreas.length > 0 ? newAreas : undefined }, problems };
+}
+
+/** The fields that hold addresses, in the order the pane shows them. */
+export const ADDRESS_FIELDS = ['response', 'predictors', 'weights', 'newRows'] as const;
+
+/** Each sheet an address field names, once per field; text that is no address with a sheet names none. */
+export function sheetsNamed(choices: PaneChoices): { field: (typeof ADDRESS_FIELDS)[number]; sheet: string }[] {
+  return ADDRESS_FIELDS.flatMap((field) => {
+    const sheets = splitAreas(choices[field]).flatMap((area) => {
+      const range = parseRange(area, '');
+      return range === undefined || range.sheet === '' ? [] : [range.sheet];
+    });
+    return [...new Set(sheets)].map((sheet) => ({ field, sheet }));
+  });
+}
+
+/** A typed address whose sheet the workbook lacks, said on its own field. */
+export function noSuchSheetProblem(field: keyof PaneChoices, sheet: string): FieldProblem {
+  return { field, message: `There is no sheet named ${sheet}. Check the spelling, or select the range in the sheet and press "Use selection".` };
 }
 
 const SINGLE_AREA_FIELDS: Partial<Record<keyof PaneChoices, string>> = { response: 'The response', weights: 'Weights' };

@@ -1,26 +1,13 @@
 import { judgeNoiseSd } from '../../engine';
+import { noiseSdMessage } from '../../presentation';
 
 /**
- * The pane's wording for the known-σ field, over the rule the cell functions apply too
- * (engine/noiseSd.ts), so the field refuses exactly what noise_sd refuses in a cell.
+ * The known-σ field's problem, by the rule the cell functions apply too (engine/noiseSd.ts) and in
+ * the words noise_sd gets in a cell (presentation/noiseSd.ts), so the field refuses exactly what
+ * noise_sd refuses, for the same reason.
  */
 export function noiseSdProblem(typed: string): string | undefined {
-  const verdict = judgeNoiseSd(typed);
-  switch (verdict.kind) {
-    case 'estimate':
-    case 'known':
-      return undefined;
-    case 'zero':
-      return 'Known σ cannot be 0: noise-free measurements leave nothing to estimate. Leave the field empty to estimate σ from the data.';
-    case 'negative':
-      return 'Known σ is a standard deviation, so it must be positive.';
-    case 'decimal-comma':
-      return `Use a point as the decimal separator: ${typed.trim().replace(',', '.')} rather than ${typed.trim()}.`;
-    case 'not-finite':
-      return 'Known σ must be a finite number.';
-    case 'not-a-number':
-      return 'Known σ must be a number, such as 0.35, or left empty to estimate it.';
-  }
+  return noiseSdMessage(judgeNoiseSd(typed), { name: 'Known σ', where: 'the field', shown: typed.trim() });
 }
 
 /** The known σ the field asks for; undefined when it is empty (estimate σ) or refused. */

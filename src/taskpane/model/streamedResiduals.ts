@@ -1,6 +1,6 @@
 import { blockResiduals, type RowBlock } from '../../engine';
 import type { ConvertedBlock } from './blockRows';
-import type { StreamedAnalysis } from './streamedAnalysis';
+import type { StreamedAnalysis } from './paneAnalysis';
 
 export const RESIDUAL_TABLE_HEADER = ['Row', 'Fitted', 'Residual'];
 

@@ -1,3 +1,5 @@
+import { describedBy, ProblemNote } from './ProblemNote';
+
 interface RangeFieldProps {
   id: string;
   label: string;
@@ -23,7 +25,7 @@ export function RangeField({ id, label, hint, value, problem, onChange, onUseSel
           type="text"
           value={value}
           spellcheck={false}
-          aria-describedby={problem ? `${hintId} ${problemId}` : hintId}
+          aria-describedby={describedBy(problem, problemId, hintId)}
           aria-invalid={problem !== undefined}
           onChange={(e) => onChange((e.currentTarget as HTMLInputElement).value)}
         />
@@ -39,11 +41,7 @@ export function RangeField({ id, label, hint, value, problem, onChange, onUseSel
       <p id={hintId} class="hint">
         {hint}
       </p>
-      {problem && (
-        <p id={problemId} class="problem" role="alert">
-          {problem}
-        </p>
-      )}
+      <ProblemNote id={problemId} problem={problem} />
     </div>
   );
 }

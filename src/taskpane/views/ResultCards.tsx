@@ -1,20 +1,20 @@
-import type { PaneAnalysis } from '../model/analysis';
-import { checkWarnings } from '../model/checkWarnings';
+import type { PaneAnalysis } from '../model/paneAnalysis';
 import { fitSentence, nestedSentence, type SentenceFrame, termSentence } from '../model/sentences';
-import type { StreamedAnalysis } from '../model/streamedAnalysis';
 
 interface ResultCardsProps {
-  analysis: PaneAnalysis | StreamedAnalysis;
+  analysis: PaneAnalysis;
   level: number;
   /** Present when robust standard errors are not in use yet: switches them on. */
   onUseRobust: (() => void) | undefined;
 }
 
+function sentenceFrame(analysis: PaneAnalysis): SentenceFrame {
+  return analysis.source === 'cells' ? analysis.frame : { responseName: analysis.responseName, columns: [], skipped: { length: analysis.rowsSkipped } };
+}
+
 /** The results in words: checks that failed first, then the fit, the nested verdict and one card per term. */
 export function ResultCards({ analysis, level, onUseRobust }: ResultCardsProps) {
   const { fit } = analysis;
-  const frame: SentenceFrame =
-    'frame' in analysis ? analysis.frame : { responseName: analysis.header.responseName, columns: [], skipped: { length: analysis.skipped } };
   if (fit === undefined) {
     return (
       <p class="problem" role="alert">
@@ -22,12 +22,13 @@ export function ResultCards({ analysis, level, onUseRobust }: ResultCardsProps) 
       </p>
     );
   }
-  const warnings = 'checks' in analysis && analysis.checks !== undefined ? checkWarnings(analysis.checks, analysis.frame.usedRows) : [];
+  const frame = sentenceFrame(analysis);
+  const failedChecks = analysis.warnings.filter((w) => w.about === 'checks');
   return (
     <div class="results">
-      {warnings.length > 0 && (
+      {failedChecks.length > 0 && (
         <ul class="cards check-warnings" aria-label="Checks that failed">
-          {warnings.map((w) => (
+          {failedChecks.map((w) => (
             <li key={w.text} class="card warning">
               {w.text}
               {w.suggestsRobust && onUseRobust && (

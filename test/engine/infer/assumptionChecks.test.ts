@@ -1,19 +1,27 @@
 /**
- * Durbin–Watson, Breusch–Pagan (Koenker's form) and Jarque–Bera. Sources:
+ * The checks together: Durbin–Watson, Breusch–Pagan (Koenker's form), Shapiro–Wilk and
+ * Jarque–Bera, the Bonferroni outlier test and lack of fit, each decided at α = 1 − level. The
+ * exact Durbin–Watson p-values, Shapiro–Wilk, the outlier test and lack of fit are checked against
+ * R (lmtest's dwtest, shapiro.test, car::outlierTest, anova) in their own tests beside this one and
+ * through CHECKS in test/functions/checksReference.test.ts. Sources here:
  * - an independent oracle built with ml-matrix (npm, general-purpose linear algebra): residuals
  *   from its QR solve, each statistic from its defining formula; the exact null moments of d
  *   from M = I − X(XᵀX)⁻¹Xᵀ and the first-difference matrix A formed explicitly as n×n matrices
  *   (Durbin & Watson 1950: E[d] = tr(MA)/(n−p), Var[d] = 2[tr((MA)²) − tr(MA)E[d]]/((n−p)(n−p+2)));
  * - closed forms: for the intercept-only model MA = A, so E[d] = 2 and Var[d] = 4(n−2)/(n²−1);
  *   χ² upper tails exp(−x/2) for 2 df and exp(−x/2)(1 + x/2) for 4 df;
- * - a seeded Monte-Carlo estimate of P(D ≤ d) under the null, as a loose check of the normal
- *   approximation only (tolerance 0.03: Monte-Carlo SE ≈ 0.004 plus the approximation's own error).
+ * - a seeded Monte-Carlo estimate of P(D ≤ d) under the null, as a check that CHECKS carries the
+ *   exact p (tolerance 0.015: four Monte-Carlo standard errors of 20,000 draws);
+ * - Bonferroni's adjustment min(1, n·p) of the two-sided t tail on n − p − 1 df (Cook & Weisberg
+ *   1982), from the engine's own t tail (itself checked in test/engine/distributions/).
  * No published worked example is used: none whose digits I am certain of.
  */
 import { Matrix, QrDecomposition, inverse } from 'ml-matrix';
 import { describe, expect, it } from 'vitest';
 import { assumptionChecks, collinearity, highLeverageCount, residualDiagnostics } from '../../../src/engine';
 import { chiSquareUpperTail } from '../../../src/engine/distributions/chiSquare';
+import { studentTTwoSidedP } from '../../../src/engine/distributions/studentT';
+import { shapiroWilk } from '../../../src/engine/infer/shapiroWilk';
 import { gaussian, mulberry32, randomProblem } from '../../support/random';
 
 /** √w-scaled residuals of weighted least squares, by ml-matrix. */
@@ -125,7 +133,7 @@ describe('Durbin–Watson', () => {
     expectRelative(dw.variance, (4 * 18) / (400 - 1), 1e-12);
   });
 
-  it('p-values: the normal approximation is near a Monte-Carlo estimate of P(D ≤ d) (loose check)', () => {
+  it('p-values: the exact P(D ≤ d) agrees with a Monte-Carlo estimate under the null', () => {
     const { y, x } = ar1Problem(34, 30, 2, 0.25);
     const dw = assumptionChecks({ y, x }).durbinWatson;
     const m = residualMaker(
@@ -139,44 +147,45 @@ describe('Durbin–Watson', () => {
       const e = m.mmul(Matrix.columnVector(y.map(() => normal()))).getColumn(0);
       if (durbinWatsonOf(e) <= dw.statistic) below++;
     }
-    expect(Math.abs(dw.pPositive - below / draws)).toBeLessThan(0.03);
+    expect(dw.method).toBe('exact');
+    expect(Math.abs(dw.pPositive - below / draws)).toBeLessThan(0.015);
     expect(dw.pPositive + dw.pNegative).toBeCloseTo(1, 12);
     expect(dw.pTwoSided).toBeCloseTo(2 * Math.min(dw.pPositive, dw.pNegative), 12);
   });
 
   // One response typed far off: its studentized residual is far past 3 (the RESIDUALS flag) and it
-  // alone makes the residuals look non-normal; the overall reading names it before any other signal
-  // (Cook & Weisberg 1982 on single-row influence; common practice, no source).
-  it('names an outlying row first, by the row number given, with the note that it can cause the other signals', () => {
+  // alone makes the residuals look non-normal; it heads the unusual rows, which readings name before
+  // any other signal (Cook & Weisberg 1982 on single-row influence; common practice, no source).
+  it('lists an outlying row first among the unusual rows, by the row number given', () => {
     const normal = gaussian(mulberry32(44));
     const x = Array.from({ length: 60 }, (_, i) => [1 + (i % 12) / 2]);
     const y = x.map(([v]) => 3 + 2 * v + 0.3 * normal());
     y[23] += 25;
     const rowNumbers = x.map((_, i) => i + 5);
     const checks = assumptionChecks({ y, x }, undefined, rowNumbers);
-    expect(checks.jarqueBera.pValue).toBeLessThan(0.05);
     expect(checks.unusualRows[0]).toMatchObject({ index: 23, row: 28, outlier: true });
     expect(checks.unusualRows[0].studentized).toBeGreaterThan(10);
-    expect(checks.overall).toMatch(
-      /^worth a look first: row 28 \(studentized residual \d+\.\d, Cook's distance \d\.\d\d\) stands out: check its data first, since such a row can cause the other signals; then .*non-normal residuals/,
-    );
+    expect(checks.unusualRows[0].bonferroniP).toBeLessThan(1e-10);
+    expect(checks.unusualRows[0].influential).toBe(true);
+    expect(checks.outlierTest).toMatchObject({ index: 23, row: 28, verdict: 'outlier' });
+    expect(checks.outlierTest.bonferroniP).toBe(checks.unusualRows[0].bonferroniP);
+    expect(checks.shapiroWilk.verdict).toBe('non-normal');
     expect(assumptionChecks({ y, x }).unusualRows[0].row).toBe(24);
   });
 
-  it('finds strong positive autocorrelation and reads it; independent noise reads as none', () => {
+  it('finds strong positive autocorrelation on the two-sided p; independent noise gives none', () => {
     const correlated = assumptionChecks(ar1Problem(36, 60, 2, 0.8));
     expect(correlated.durbinWatson.pPositive).toBeLessThan(0.001);
-    expect(correlated.durbinWatson.reading).toMatch(/^neighbouring residuals move together: positive autocorrelation \(read on the two-sided p < 0\.001\)/);
-    expect(correlated.overall).toContain('positive autocorrelation');
+    expect(correlated.durbinWatson.verdict).toBe('positive-autocorrelation');
     const independent = assumptionChecks(ar1Problem(37, 60, 2, 0));
     expect(independent.durbinWatson.pTwoSided).toBeGreaterThan(0.05);
-    expect(independent.durbinWatson.reading).toMatch(/^no sign of autocorrelation in row order \(read on the two-sided p = 0\.\d\d\)$/);
+    expect(independent.durbinWatson.verdict).toBe('none');
   });
 
-  it('alternating residuals read as negative autocorrelation', () => {
+  it('alternating residuals give negative autocorrelation', () => {
     const dw = assumptionChecks(ar1Problem(38, 60, 1, -0.8)).durbinWatson;
     expect(dw.pNegative).toBeLessThan(0.001);
-    expect(dw.reading).toMatch(/^neighbouring residuals alternate in sign: negative autocorrelation/);
+    expect(dw.verdict).toBe('negative-autocorrelation');
   });
 });
 
@@ -200,15 +209,15 @@ describe('Breusch–Pagan (Koenker)', () => {
     expectRelative(assumptionChecks({ y, x, weights: w }).breuschPagan.statistic, koenkerOf(x, scaledResiduals(x, y, w)));
   });
 
-  it('spread growing with x is found and read; constant variance is not flagged', () => {
+  it('spread growing with x is found; constant variance is not flagged', () => {
     const normal = gaussian(mulberry32(44));
     const x = Array.from({ length: 200 }, (_, i) => [1 + i / 20]);
     const uneven = assumptionChecks({ y: x.map(([v]) => 2 + v + v * normal()), x }).breuschPagan;
     expect(uneven.pValue).toBeLessThan(0.01);
-    expect(uneven.reading).toMatch(/^residual spread changes with the predictors \(p (<|=) 0\.0\d*\): consider robust standard errors$/);
+    expect(uneven.verdict).toBe('uneven-spread');
     const even = assumptionChecks({ y: x.map(([v]) => 2 + v + normal()), x }).breuschPagan;
     expect(even.pValue).toBeGreaterThan(0.05);
-    expect(even.reading).toMatch(/^no sign that the residual spread changes with the predictors/);
+    expect(even.verdict).toBe('none');
   });
 
   it('residuals all of one size: the squares have no spread, so LM is NaN with the reason', () => {
@@ -216,17 +225,17 @@ describe('Breusch–Pagan (Koenker)', () => {
     const bp = assumptionChecks({ y: [1, -1, -1, 1, 1, -1, -1, 1], x: [[1], [1], [-1], [-1], [2], [2], [-2], [-2]] }).breuschPagan;
     expect(bp.statistic).toBeNaN();
     expect(bp.undefinedBecause).toBe('equal-squares');
-    expect(bp.reading).toContain('every residual has the same size');
+    expect(bp.verdict).toBe('equal-squares');
   });
 
   it('intercept-only model: no predictors to test against', () => {
     const { y } = randomProblem(45, 10, 0);
     const bp = assumptionChecks({ y, x: y.map(() => []) }).breuschPagan;
-    expect([bp.statistic, bp.df, bp.undefinedBecause]).toEqual([NaN, 0, 'no-predictors']);
+    expect([bp.statistic, bp.df, bp.undefinedBecause, bp.verdict]).toEqual([NaN, 0, 'no-predictors', 'no-predictors']);
   });
 });
 
-describe('Jarque–Bera', () => {
+describe('normality: Shapiro–Wilk up to 5000 rows, Jarque–Bera above', () => {
   it('agrees with the definition on ml-matrix residuals; p = exp(−JB/2) is the χ²(2) tail', () => {
     const { y, x } = randomProblem(51, 60, 3);
     const jb = assumptionChecks({ y, x }).jarqueBera;
@@ -243,16 +252,32 @@ describe('Jarque–Bera', () => {
     expectRelative(assumptionChecks({ y, x, weights: w }).jarqueBera.statistic, jarqueBeraOf(scaledResiduals(x, y, w)).jb);
   });
 
-  it('skewed (exponential) noise is found and described; normal noise looks roughly normal', () => {
+  it('up to 5000 rows Shapiro–Wilk decides: skewed (exponential) noise is found, normal noise is not', () => {
     const uniform = mulberry32(53);
     const { x } = randomProblem(54, 300, 1);
-    const skewed = assumptionChecks({ y: x.map(([v]) => 1 + v - Math.log(uniform())), x }).jarqueBera;
-    expect(skewed.pValue).toBeLessThan(0.001);
-    expect(skewed.skewness).toBeGreaterThan(1);
-    expect(skewed.reading).toMatch(/^residuals depart from a normal shape \(p < 0\.001\): a long right tail/);
-    const normal = assumptionChecks(randomProblem(55, 300, 1)).jarqueBera;
-    expect(normal.pValue).toBeGreaterThan(0.05);
-    expect(normal.reading).toMatch(/^residuals look roughly normal \(p = 0\.\d\d\)$/);
+    const skewed = assumptionChecks({ y: x.map(([v]) => 1 + v - Math.log(uniform())), x });
+    expect(skewed.shapiroWilk.pValue).toBeLessThan(0.001);
+    expect(skewed.shapiroWilk.verdict).toBe('non-normal');
+    expect(skewed.jarqueBera.skewness).toBeGreaterThan(1);
+    expect(skewed.jarqueBera.verdict).toBe('shapiro-wilk-decides');
+    const normal = assumptionChecks(randomProblem(55, 300, 1));
+    expect(normal.shapiroWilk.pValue).toBeGreaterThan(0.05);
+    expect(normal.shapiroWilk.verdict).toBe('none');
+  });
+
+  it('Shapiro–Wilk reads the √w-scaled residuals', () => {
+    const { y, x } = randomProblem(59, 40, 2);
+    const w = y.map((_, i) => 1 + (i % 3));
+    expectRelative(assumptionChecks({ y, x, weights: w }).shapiroWilk.statistic, shapiroWilk(scaledResiduals(x, y, w)).statistic, 1e-12);
+  });
+
+  it('above 5000 rows Jarque–Bera decides and Shapiro–Wilk says it is out of range', () => {
+    const uniform = mulberry32(56);
+    const { x } = randomProblem(57, 5001, 1);
+    const skewed = assumptionChecks({ y: x.map(([v]) => 1 + v - Math.log(uniform())), x });
+    expect(skewed.shapiroWilk.verdict).toBe('too-many');
+    expect(skewed.jarqueBera.verdict).toBe('non-normal');
+    expect(assumptionChecks(randomProblem(58, 5001, 1)).jarqueBera.verdict).toBe('none');
   });
 });
 
@@ -270,7 +295,7 @@ describe('assumptionChecks: together', () => {
     expect(checks.largestVifTerm).toBe(`x${vifs.indexOf(Math.max(...vifs)) + 1}`);
   });
 
-  it('reads each test at α = 1 − level: a p between 0.01 and 0.05 is flagged at 0.95 and not at 0.99', () => {
+  it('decides each test at α = 1 − level: a p between 0.01 and 0.05 is flagged at 0.95 and not at 0.99', () => {
     // Seed chosen (by search over a few seeds) so that Koenker's p lands between 0.01 and 0.05.
     const normal = gaussian(mulberry32(70));
     const x = Array.from({ length: 80 }, (_, i) => [i / 10]);
@@ -278,11 +303,11 @@ describe('assumptionChecks: together', () => {
     const at95 = assumptionChecks({ y, x }, { level: 0.95 });
     expect(at95.breuschPagan.pValue).toBeGreaterThan(0.01);
     expect(at95.breuschPagan.pValue).toBeLessThan(0.05);
-    expect(at95.breuschPagan.reading).toMatch(/^residual spread changes/);
-    expect(at95.overall).toBe('worth a look: uneven residual spread');
+    expect(at95.alpha).toBeCloseTo(0.05, 12);
+    expect(at95.breuschPagan.verdict).toBe('uneven-spread');
+    expect([at95.durbinWatson.verdict, at95.shapiroWilk.verdict, at95.outlierTest.verdict]).toEqual(['none', 'none', 'none']);
     const at99 = assumptionChecks({ y, x }, { level: 0.99 });
-    expect(at99.breuschPagan.reading).toMatch(/^no sign that the residual spread/);
-    expect(at99.overall).toBe('nothing stands out at the 99% level');
+    expect(at99.breuschPagan.verdict).toBe('none');
   });
 
   it('the three tests ignore a known σ and do not change when y is multiplied by 1e200', () => {
@@ -298,7 +323,7 @@ describe('assumptionChecks: together', () => {
     expect(known.largestCooksDistance).not.toBeCloseTo(base.largestCooksDistance, 6);
   });
 
-  it('an exact fit: every statistic NaN with the reason, and the overall reading says why', () => {
+  it('an exact fit: every statistic NaN with the reason, and the checks say the fit is exact', () => {
     const x = [[1], [2], [3], [4], [6], [7]];
     const checks = assumptionChecks({ y: x.map(([v]) => 2 + 0.5 * v), x });
     expect([checks.durbinWatson.statistic, checks.breuschPagan.statistic, checks.jarqueBera.statistic]).toEqual([NaN, NaN, NaN]);
@@ -307,10 +332,11 @@ describe('assumptionChecks: together', () => {
       'exact-fit',
       'exact-fit',
     ]);
-    expect(checks.durbinWatson.reading).toMatch(/^exact fit/);
+    expect([checks.durbinWatson.verdict, checks.breuschPagan.verdict, checks.jarqueBera.verdict]).toEqual(['exact-fit', 'exact-fit', 'exact-fit']);
+    expect([checks.shapiroWilk.verdict, checks.outlierTest.verdict, checks.lackOfFit.verdict]).toEqual(['exact-fit', 'exact-fit', 'exact-fit']);
+    expect(checks.exactFit).toBe(true);
     expect(checks.largestCooksDistance).toBeNaN();
     expect(checks.largestCooksRow).toBe(-1);
-    expect(checks.overall).toMatch(/^exact fit: every residual is 0/);
   });
 
   it('n = p + 1: d is fixed by the design (Var[d] = 0), so it has no p-value', () => {
@@ -320,15 +346,54 @@ describe('assumptionChecks: together', () => {
     expectRelative(dw.statistic, dw.mean, 1e-9);
     expect(dw.pPositive).toBeNaN();
     expect(dw.undefinedBecause).toBe('fixed-by-design');
-    expect(dw.reading).toContain('fixed by the design');
+    expect(dw.verdict).toBe('fixed-by-design');
   });
 
-  it('perfectly collinear predictors: largest VIF ∞ with its term and reason, named in the overall reading', () => {
+  it('perfectly collinear predictors: largest VIF ∞ with its term and reason', () => {
     const { y, x } = randomProblem(65, 20, 2);
     const checks = assumptionChecks({ y, x: x.map((r) => [...r, r[0] + r[1]]) });
     expect(checks.largestVif).toBe(Infinity);
     expect(checks.largestVifTerm).toBe('x1');
-    expect(checks.largestVifReason).toContain('perfectly collinear');
-    expect(checks.overall).toContain('terms that are exact combinations of others');
+    expect(checks.largestVifReason).toBe('collinear');
+  });
+
+  // Bonferroni (Cook & Weisberg 1982): a row is an outlier when n·P(|T| > |tᵢ|) on n − p − 1 df is
+  // below α, so |t| above 3 (the RESIDUALS flag) is not enough among many rows.
+  it('a row is an outlier by its Bonferroni p, not by |t| > 3 alone', () => {
+    const normal = gaussian(mulberry32(66));
+    const x = Array.from({ length: 200 }, (_, i) => [i / 20]);
+    const y = x.map(([v]) => 1 + v + normal());
+    y[50] = 1 + x[50][0] + 3.6;
+    const checks = assumptionChecks({ y, x });
+    const row = residualDiagnostics({ y, x }).rows[50];
+    expect(Math.abs(row.studentized)).toBeGreaterThan(3);
+    const expected = Math.min(1, 200 * studentTTwoSidedP(row.studentized, 200 - 2 - 1));
+    expect(expected).toBeGreaterThan(0.05);
+    expect(checks.unusualRows.some((u) => u.index === 50)).toBe(false);
+    expect(checks.outlierTest.verdict).toBe('none');
+    y[50] = 1 + x[50][0] + 6;
+    const planted = assumptionChecks({ y, x });
+    expect(planted.unusualRows[0]).toMatchObject({ index: 50, outlier: true });
+    expectRelative(planted.unusualRows[0].bonferroniP, Math.min(1, 200 * studentTTwoSidedP(planted.unusualRows[0].studentized, 197)), 1e-12);
+  });
+
+  it('a row the other rows fit exactly is an outlier with an unbounded studentized residual', () => {
+    const x = [[1], [2], [3], [4], [5], [6]];
+    const y = x.map(([v]) => 2 + 0.5 * v);
+    y[3] += 1;
+    const checks = assumptionChecks({ y, x });
+    expect(checks.outlierTest).toMatchObject({ index: 3, studentized: Infinity, bonferroniP: 0, verdict: 'outlier' });
+    expect(checks.unusualRows[0]).toMatchObject({ index: 3, outlier: true });
+  });
+
+  it('lack of fit reads the fit it is given: replicated settings, weighted RSS, verdict at α', () => {
+    const x = [1, 1, 2, 2, 3, 3, 4, 4, 5, 5].map((v) => [v]);
+    // A curve through replicated settings: the straight line misses the settings' means.
+    const y = x.map(([v], i) => v * v + (i % 2 === 0 ? 0.1 : -0.1));
+    const checks = assumptionChecks({ y, x });
+    expect([checks.lackOfFit.lackDf, checks.lackOfFit.pureDf]).toEqual([3, 5]);
+    expect(checks.lackOfFit.verdict).toBe('lack-of-fit');
+    expect(assumptionChecks({ y: x.map(([v], i) => 1 + v + (i % 2 === 0 ? 0.1 : -0.1) + 0.01 * v * v), x }).lackOfFit.verdict).toBe('none');
+    expect(assumptionChecks(randomProblem(67, 20, 2)).lackOfFit.verdict).toBe('no-replicates');
   });
 });

@@ -3,10 +3,13 @@
  * draw a scatter chart over the grid that follows its cells, and bold, fill and column widths
  * show in the grid. The chart is built as the report builds its charts, series by series
  * (Microsoft Learn, "Excel.ChartSeriesCollection class": add(name, index); "Excel.ChartSeries
- * class": delete, setXAxisValues, setValues), not left to the layout charts.add picks.
+ * class": delete, setXAxisValues, setValues, chartType), not left to the layout charts.add picks;
+ * its axis bounds are fixed as "Excel.ChartAxis class" describes (minimum, maximum). A report
+ * written from the pane then draws its guide lines as lines without markers.
  */
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { type BrowserSession, chromiumAvailable, openPage, screenshot } from '../../support/browser';
+import { goTo } from '../../support/previewPage';
 
 const available = chromiumAvailable();
 if (!available) console.warn('Browser tests skipped: /usr/bin/chromium is absent (apt-get install -y chromium).');
@@ -46,6 +49,9 @@ describe.skipIf(!available)('charts and formatting in the preview workbook', () 
           chart.title.text = title;
           chart.axes.categoryAxis.title.text = 'Steep time (h)';
           chart.axes.valueAxis.title.text = 'Extraction yield (%)';
+          // Excel's automatic axis would start at 0 for values this far from it; fixed bounds do not.
+          chart.axes.valueAxis.minimum = 10;
+          chart.axes.valueAxis.maximum = 40;
           chart.setPosition('H2', 'K20');
           sheet.activate();
           chart.load('name');
@@ -60,7 +66,8 @@ describe.skipIf(!available)('charts and formatting in the preview workbook', () 
     await figure.waitFor();
     expect(await circles().count()).toBe(60);
     expect(await session.page.locator('[data-chart="Chart 1"] .chart-title').textContent()).toBe(TITLE);
-    // Yields lie far from zero, so no zero line is drawn.
+    // The value axis runs over its fixed bounds, away from zero, so no zero line is drawn.
+    expect(await session.page.locator('[data-chart="Chart 1"] [data-axis="y"] text').allTextContents()).toEqual(['10', '20', '30', '40']);
     expect(await session.page.locator('[data-chart="Chart 1"] .chart-zero').count()).toBe(0);
     const chartBox = await session.page.locator('[data-chart="Chart 1"]').boundingBox();
     const cellBox = await session.page.locator('[data-cell="H2"]').boundingBox();
@@ -100,5 +107,35 @@ describe.skipIf(!available)('charts and formatting in the preview workbook', () 
     expect((await a1.boundingBox())?.width).toBe(80);
     expect(await session.page.locator('[data-cell="A2"]').evaluate((el) => getComputedStyle(el).fontWeight)).toBe('400');
     await screenshot(session.page, 'charts');
+  });
+
+  it("draws a report's guide lines as lines without markers: y = x twice and the 4/n cut-off", async () => {
+    const page = session.page;
+    await goTo(page, 'Batches!B1:B61');
+    await page.getByRole('button', { name: 'Use selection for Response (one column)' }).click();
+    await goTo(page, 'Batches!C1:G61');
+    await page.getByRole('button', { name: 'Use selection for Predictors' }).click();
+    await page.getByRole('button', { name: 'Read data and fit' }).click();
+    await page.getByRole('button', { name: 'Write report' }).click();
+    const chart = (name: string) => page.locator(`[data-chart="${name}"]`);
+    await chart('CooksDistance').waitFor();
+    // The guide cells are formulas over PLUMB results, so the lines appear once those have calculated.
+    for (const name of ['ObservedVsFitted', 'NormalQQ', 'CooksDistance']) {
+      await expect.poll(() => chart(name).locator('.chart-line polyline').count()).toBe(1);
+      expect(await chart(name).locator('.chart-line circle').count()).toBe(0);
+    }
+    expect(await chart('ResidualsVsFitted').locator('.chart-line').count()).toBe(0);
+    expect(await chart('ObservedVsFitted').locator('.chart-series circle').count()).toBe(60);
+    // y = x rises from its lower left end to its upper right one (SVG's y runs downwards).
+    const ends = (await chart('ObservedVsFitted').locator('.chart-line polyline').getAttribute('points'))?.split(' ').map((p) => p.split(',').map(Number));
+    expect(ends).toHaveLength(2);
+    const [[x1, y1], [x2, y2]] = ends ?? [];
+    expect(x2).toBeGreaterThan(x1);
+    expect(y2).toBeLessThan(y1);
+    // The 4/n line is level.
+    const cut = (await chart('CooksDistance').locator('.chart-line polyline').getAttribute('points'))?.split(' ').map((p) => p.split(',')[1]);
+    expect(new Set(cut).size).toBe(1);
+    await chart('NormalQQ').scrollIntoViewIfNeeded();
+    await screenshot(page, 'report-guide-lines');
   });
 });

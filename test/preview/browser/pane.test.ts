@@ -89,9 +89,9 @@ describe.skipIf(!available)('guided pane in the preview workbook', () => {
     const fit = engineFit(generateBatchLog());
     const termsRow = firstReport.values.findIndex((r) => r[0] === 'Term');
     fit.terms.forEach((t, i) => expect(firstReport.values[termsRow + 1 + i][1]).toBe(t.estimate));
-    expect(await page().locator('[data-chart="ObservedVsFitted"] circle').count()).toBe(60);
+    expect(await page().locator('[data-chart="ObservedVsFitted"] .chart-series circle').count()).toBe(60);
     for (const chart of ['ResidualsVsFitted', 'NormalQQ', 'CooksDistance']) {
-      expect(await page().locator(`[data-chart="${chart}"] circle`).count(), chart).toBe(60);
+      expect(await page().locator(`[data-chart="${chart}"] .chart-series circle`).count(), chart).toBe(60);
     }
     expect(firstReport.values.flat()).toContain('Durbin–Watson');
     await screenshot(page(), 'report');
@@ -163,7 +163,7 @@ describe.skipIf(!available)('guided pane in the preview workbook', () => {
         await context.sync();
       }),
     );
-    await expect.poll(() => page().locator('[data-chart="ObservedVsFitted"] circle').count()).toBe(59);
-    expect(await page().locator('[data-chart="CooksDistance"] circle').count()).toBe(59);
+    await expect.poll(() => page().locator('[data-chart="ObservedVsFitted"] .chart-series circle').count()).toBe(59);
+    expect(await page().locator('[data-chart="CooksDistance"] .chart-series circle').count()).toBe(59);
   });
 });

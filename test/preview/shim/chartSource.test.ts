@@ -13,16 +13,16 @@ const ref = (top: number, left: number, bottom: number, right: number): RangeRef
 describe('seriesFromSource', () => {
   it('reads series down columns: the first column is X, each further column one series of Y', () => {
     expect(seriesFromSource(ref(0, 0, 2, 2), 'Columns')).toEqual([
-      { name: 'Series1', x: ref(0, 0, 2, 0), y: ref(0, 1, 2, 1) },
-      { name: 'Series2', x: ref(0, 0, 2, 0), y: ref(0, 2, 2, 2) },
+      { name: 'Series1', x: ref(0, 0, 2, 0), y: ref(0, 1, 2, 1), chartType: 'XYScatter' },
+      { name: 'Series2', x: ref(0, 0, 2, 0), y: ref(0, 2, 2, 2), chartType: 'XYScatter' },
     ]);
   });
 
   it('reads series along rows likewise', () => {
-    expect(seriesFromSource(ref(0, 0, 1, 3), 'Rows')).toEqual([{ name: 'Series1', x: ref(0, 0, 0, 3), y: ref(1, 0, 1, 3) }]);
+    expect(seriesFromSource(ref(0, 0, 1, 3), 'Rows')).toEqual([{ name: 'Series1', x: ref(0, 0, 0, 3), y: ref(1, 0, 1, 3), chartType: 'XYScatter' }]);
   });
 
   it('plots a lone column as Y values with no X', () => {
-    expect(seriesFromSource(ref(0, 0, 2, 0), 'Columns')).toEqual([{ name: 'Series1', x: null, y: ref(0, 0, 2, 0) }]);
+    expect(seriesFromSource(ref(0, 0, 2, 0), 'Columns')).toEqual([{ name: 'Series1', x: null, y: ref(0, 0, 2, 0), chartType: 'XYScatter' }]);
   });
 });

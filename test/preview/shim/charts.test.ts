@@ -48,7 +48,12 @@ describe('charts.add', () => {
     const chart = only();
     expect(chart.type).toBe('XYScatter');
     expect(chart.series).toEqual([
-      { name: 'Series1', x: { sheet: 'Data', top: 1, left: 0, bottom: 3, right: 0 }, y: { sheet: 'Data', top: 1, left: 1, bottom: 3, right: 1 } },
+      {
+        name: 'Series1',
+        x: { sheet: 'Data', top: 1, left: 0, bottom: 3, right: 0 },
+        y: { sheet: 'Data', top: 1, left: 1, bottom: 3, right: 1 },
+        chartType: 'XYScatter',
+      },
     ]);
     await Excel.run(async (context) => {
       const loaded = dataSheet(context).charts.getItem('Chart 1');
@@ -201,6 +206,7 @@ describe('series', () => {
       name: 'Series1',
       x: { sheet: 'Data', top: 1, left: 2, bottom: 3, right: 2 },
       y: { sheet: 'Data', top: 1, left: 0, bottom: 3, right: 0 },
+      chartType: 'XYScatter',
     });
   });
 
@@ -235,7 +241,12 @@ describe('series', () => {
       expect(chart.series.count).toBe(1);
     });
     expect(only().series).toEqual([
-      { name: 'Planned', x: { sheet: 'Data', top: 1, left: 0, bottom: 2, right: 0 }, y: { sheet: 'Data', top: 1, left: 2, bottom: 2, right: 2 } },
+      {
+        name: 'Planned',
+        x: { sheet: 'Data', top: 1, left: 0, bottom: 2, right: 0 },
+        y: { sheet: 'Data', top: 1, left: 2, bottom: 2, right: 2 },
+        chartType: 'XYScatter',
+      },
     ]);
   });
 
@@ -248,6 +259,98 @@ describe('series', () => {
       }),
     );
     expect(error.code).toBe('ItemNotFound');
+  });
+});
+
+// "Excel.ChartSeries" (Microsoft Learn): chartType, "the chart type of a series" (ExcelApi 1.7),
+// which lets one series of a scatter chart be drawn as a line.
+describe('a series chart type', () => {
+  it('starts as its chart type, and turns a series into a line without markers', async () => {
+    await addChart();
+    await Excel.run(async (context) => {
+      const sheet = dataSheet(context);
+      const chart = sheet.charts.getItem('Chart 1');
+      const guide = chart.series.add('Guide');
+      guide.setXAxisValues(sheet.getRange('A2:A3'));
+      guide.setValues(sheet.getRange('A2:A3'));
+      guide.load('chartType');
+      await context.sync();
+      expect(guide.chartType).toBe('XYScatter');
+      guide.chartType = Excel.ChartType.xyscatterLinesNoMarkers;
+      await context.sync();
+    });
+    expect(only().series.map((s) => s.chartType)).toEqual(['XYScatter', 'XYScatterLinesNoMarkers']);
+    const plotted = plotChart(model, only()).series[1];
+    expect(plotted.drawn).toBe('lines');
+    expect(plotted.runs).toEqual([
+      [
+        { x: 12, y: 12 },
+        { x: 18, y: 18 },
+      ],
+    ]);
+  });
+
+  it.each([['Line'], ['XYScatterSmooth'], ['Diagonal']])('refuses %s, which the preview cannot draw, with InvalidArgument', async (type) => {
+    await addChart();
+    const error = await officeError(
+      Excel.run(async (context) => {
+        dataSheet(context).charts.getItem('Chart 1').series.getItemAt(0).chartType = type as Excel.ChartType;
+        await context.sync();
+      }),
+    );
+    expect(error.code).toBe('InvalidArgument');
+    expect(error.debugInfo.errorLocation).toBe('ChartSeries.chartType');
+    expect(only().series[0].chartType).toBe('XYScatter');
+  });
+});
+
+// "Excel.ChartAxis" (Microsoft Learn): minimum and maximum "can be set to a numeric value or an
+// empty string (for automatic axis values). The returned value is always a number." (ExcelApi 1.1)
+describe('axis bounds', () => {
+  it('fixes an axis minimum and maximum, reads them back, and returns to automatic with ""', async () => {
+    await addChart();
+    await Excel.run(async (context) => {
+      const axes = dataSheet(context).charts.getItem('Chart 1').axes;
+      axes.categoryAxis.minimum = 10;
+      axes.categoryAxis.maximum = 30;
+      axes.valueAxis.minimum = 15;
+      await context.sync();
+      const x = axes.categoryAxis.load('minimum, maximum');
+      await context.sync();
+      expect([x.minimum, x.maximum]).toEqual([10, 30]);
+    });
+    expect(only().axisScales).toEqual({ category: { minimum: 10, maximum: 30 }, value: { minimum: 15, maximum: null } });
+    expect(plotChart(model, only()).xScale).toEqual({ minimum: 10, maximum: 30 });
+    await Excel.run(async (context) => {
+      dataSheet(context).charts.getItem('Chart 1').axes.valueAxis.minimum = '';
+      await context.sync();
+    });
+    expect(only().axisScales.value).toEqual({ minimum: null, maximum: null });
+  });
+
+  it('refuses to invent the number Excel reads back for an automatic bound', async () => {
+    await addChart();
+    const error = await officeError(
+      Excel.run(async (context) => {
+        dataSheet(context).charts.getItem('Chart 1').axes.valueAxis.load('maximum');
+        await context.sync();
+      }),
+    );
+    expect(error.code).toBe('InvalidArgument');
+  });
+
+  it.each([[Number.NaN], ['ten'], [40]])('refuses a bound of %s (40: at or above the maximum of 30)', async (bound) => {
+    await addChart();
+    const error = await officeError(
+      Excel.run(async (context) => {
+        const axis = dataSheet(context).charts.getItem('Chart 1').axes.categoryAxis;
+        axis.maximum = 30;
+        axis.minimum = bound as number;
+        await context.sync();
+      }),
+    );
+    expect(error.code).toBe('InvalidArgument');
+    expect(error.debugInfo.errorLocation).toBe('ChartAxis.minimum');
   });
 });
 

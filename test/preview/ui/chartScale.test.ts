@@ -3,7 +3,7 @@
  * states: steps of 1, 2 or 5 times a power of ten, about five of them, covering the data.
  */
 import { describe, expect, it } from 'vitest';
-import { extent, hasZeroLine, linearScale, niceTicks, tickLabel } from '../../../src/preview/ui/chartScale';
+import { automaticExtent, axisTicks, extent, hasZeroLine, linearScale, niceTicks, tickLabel } from '../../../src/preview/ui/chartScale';
 
 describe('niceTicks', () => {
   it.each([
@@ -61,5 +61,33 @@ describe('labels, scale and zero line', () => {
   it('finds the extent of many values', () => {
     expect(extent(Array.from({ length: 200_000 }, (_, i) => i - 7))).toEqual([-7, 199_992]);
     expect(extent([])).toEqual([Infinity, -Infinity]);
+  });
+});
+
+// Excel's automatic scale: Microsoft's knowledge-base article "How Chart Axis Limits Are
+// Determined", as restated by Peltier, "How Excel Calculates Automatic Chart Axis Limits" (2012):
+// with every value above zero the axis starts at 0 unless the lowest is at least 5/6 of the highest.
+describe('automaticExtent', () => {
+  it.each([
+    [40, 60, [0, 60]],
+    [50, 60, [50, 60]],
+    [-60, -40, [-60, 0]],
+    [-60, -50, [-60, -50]],
+    [-3, 4, [-3, 4]],
+  ])('takes %s to %s to %j', (lo, hi, expected) => {
+    expect(automaticExtent(lo, hi)).toEqual(expected);
+  });
+});
+
+describe('axisTicks', () => {
+  it('stretches an automatic axis of values far from zero down to 0, as Excel does', () => {
+    expect(axisTicks({ minimum: null, maximum: null }, 40, 60)).toMatchObject({ min: 0, max: 60 });
+  });
+
+  // From memory: Excel counts major units from a fixed minimum.
+  it('ends a fixed axis exactly at its bounds, with ticks counted from the minimum', () => {
+    expect(axisTicks({ minimum: 35, maximum: 65 }, 40, 60)).toEqual({ min: 35, max: 65, step: 10, values: [35, 45, 55, 65] });
+    // Step 5: about five ticks over 38.5 to 60.
+    expect(axisTicks({ minimum: 38.5, maximum: null }, 40, 60)).toMatchObject({ min: 38.5, max: 60, values: [38.5, 43.5, 48.5, 53.5, 58.5] });
   });
 });

@@ -11,7 +11,8 @@ import { createWorkbook } from '../../../src/preview/workbook/workbook';
 const ref = (sheet: string, top: number, left: number, bottom: number, right: number): RangeRef => ({ sheet, top, left, bottom, right });
 
 function scatter(series: ChartSeriesSource[], bounds = { left: 234, top: 18, width: 360, height: 216 }): NewChart {
-  return { type: 'XYScatter', title: null, series, axisTitles: { category: '', value: '' }, bounds };
+  const automatic = { minimum: null, maximum: null };
+  return { type: 'XYScatter', title: null, series, axisTitles: { category: '', value: '' }, axisScales: { category: automatic, value: automatic }, bounds };
 }
 
 function setup() {
@@ -22,7 +23,7 @@ function setup() {
     [18, 19.1],
     [24, 21.4],
   ]);
-  const series: ChartSeriesSource = { name: ref('Data', 0, 1, 0, 1), x: ref('Data', 1, 0, 3, 0), y: ref('Data', 1, 1, 3, 1) };
+  const series: ChartSeriesSource = { name: ref('Data', 0, 1, 0, 1), x: ref('Data', 1, 0, 3, 0), y: ref('Data', 1, 1, 3, 1), chartType: 'XYScatter' };
   return { wb, series };
 }
 
@@ -111,6 +112,8 @@ describe('plotChart', () => {
     expect(before.title).toBe('Yield');
     expect(before.series[0]).toEqual({
       name: 'Yield',
+      drawn: 'markers',
+      runs: [],
       points: [
         { x: 12, y: 17.5 },
         { x: 18, y: 19.1 },
@@ -137,6 +140,26 @@ describe('plotChart', () => {
     ]);
     wb.setInputs('Data', 2, 1, [['=PLUMB.MISSING()']]);
     expect(plotChart(wb, wb.charts('Data')[0]).series[0].points).toEqual([{ x: 24, y: 21.4 }]);
+  });
+
+  it('draws a line series as runs of its points, broken at a blank cell, and keeps a renamed sheet in them', () => {
+    const { wb, series } = setup();
+    wb.setInputs('Data', 2, 1, [[null]]);
+    wb.addChart('Data', scatter([series, { ...series, name: 'Guide', chartType: 'XYScatterLinesNoMarkers' }]));
+    wb.renameSheet('Data', 'Batches');
+    const [points, line] = plotChart(wb, wb.charts('Batches')[0]).series;
+    expect(points.drawn).toBe('markers');
+    expect(line.drawn).toBe('lines');
+    expect(line.runs).toEqual([[{ x: 12, y: 17.5 }], [{ x: 24, y: 21.4 }]]);
+  });
+
+  it('passes fixed axis bounds through, null where automatic', () => {
+    const { wb, series } = setup();
+    const { id } = wb.addChart('Data', scatter([series]));
+    wb.updateChart('Data', id, { axisScales: { category: { minimum: 10, maximum: null }, value: { minimum: null, maximum: null } } });
+    const plotted = plotChart(wb, wb.charts('Data')[0]);
+    expect(plotted.xScale).toEqual({ minimum: 10, maximum: null });
+    expect(plotted.yScale).toEqual({ minimum: null, maximum: null });
   });
 
   it('numbers the points 1, 2, 3… when an X value is text or there are no X values', () => {

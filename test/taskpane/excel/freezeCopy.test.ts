@@ -6,10 +6,12 @@
  */
 import { describe, expect, it } from 'vitest';
 import { PAYLOAD_LIMIT_BYTES } from '../../../src/preview/shim/hostSettings';
-import { freezeActiveReport } from '../../../src/taskpane/excel/freezeCopy';
+import { freezeActiveReport, frozenText } from '../../../src/taskpane/excel/freezeCopy';
+import { REFRESH_NOTE, VALUES_SETTINGS_HEADING } from '../../../src/taskpane/model/reportSections';
+import { valuesNote } from '../../../src/taskpane/model/valuesReportPlan';
 import type { PreviewWorkbook } from '../../../src/preview/workbook/workbook';
 import { writeReport } from '../../../src/taskpane/excel/writeReport';
-import { analyze } from '../../../src/taskpane/model/analysis';
+import { analyzeCells } from '../../../src/taskpane/model/analysis';
 import { EMPTY_CHOICES, type PaneChoices, resolveRanges } from '../../../src/taskpane/model/choices';
 import { LIVE_NOTE, LIVE_QQ_LABEL, LIVE_SETTINGS_HEADING, planReport, REPORT_TITLE_PREFIX, type ReportPlan } from '../../../src/taskpane/model/reportPlan';
 import { readData } from '../../../src/taskpane/readData';
@@ -120,7 +122,7 @@ describe('freezeActiveReport of a live report', () => {
     if (ranges === undefined) throw new Error('bad test ranges');
     const read = await readData(ranges, () => undefined, new AbortController().signal, false);
     if (read.kind !== 'cells') throw new Error('expected the in-memory read');
-    const analysis = analyze(read.data, choices);
+    const analysis = analyzeCells(read.data, choices);
     let plan: ReportPlan | undefined;
     const report = await writeReport((sheetName) => {
       plan = planReport({ sheetName, ranges, choices, analysis, writtenAt: NOW });
@@ -145,14 +147,33 @@ describe('freezeActiveReport of a live report', () => {
     }
     expect(model.valueAt({ sheet: name, row: 1, column: 0 })).toContain('Every number below is a value as of 2026-01-02 03:04 UTC, not a formula');
 
+    // Every bold heading, down column A and beside the charts (freezeCopy copies bold from every text cell).
     const bold = plan?.cells.filter((c) => c.kind === 'label' && c.bold === true) ?? [];
     expect(bold.length).toBeGreaterThan(5);
-    for (const c of bold) expect({ row: c.row, bold: model.styleAt({ sheet: name, row: c.row, column: c.column }).bold }).toEqual({ row: c.row, bold: true });
-    expect(model.styleAt({ sheet: name, row: 12, column: 0 }).bold).toBe(false);
+    expect(bold.some((c) => c.column > 0)).toBe(true);
+    for (const c of bold) {
+      expect({ row: c.row, column: c.column, bold: model.styleAt({ sheet: name, row: c.row, column: c.column }).bold }).toEqual({
+        row: c.row,
+        column: c.column,
+        bold: true,
+      });
+    }
+    const plainLabel = plan?.cells.find((c) => c.kind === 'label' && c.column === 0 && c.bold === false && c.row > 2);
+    expect(model.styleAt({ sheet: name, row: plainLabel?.row ?? -1, column: 0 }).bold).toBe(false);
     for (const f of plan?.formats ?? []) {
       const at = { row: f.range.top, column: f.range.left };
       if (typeof model.valueAt({ sheet: report, ...at }) !== 'number') continue;
       expect(model.numberFormatAt({ sheet: name, ...at })).toBe(f.numberFormat);
     }
   }, 60_000);
+});
+
+describe('frozenText of a values report', () => {
+  // A frozen copy is never refreshed: its text must not promise Refresh, and must say it holds values as of its time.
+  it('rewrites the values report’s Refresh wording to say what the copy is', () => {
+    const note = frozenText(valuesNote(300_000), '2026-01-02 03:04');
+    expect(note).not.toContain(REFRESH_NOTE);
+    expect(note).toContain('values as of 2026-01-02 03:04 UTC');
+    expect(frozenText(VALUES_SETTINGS_HEADING, '2026-01-02 03:04')).toBe('Settings used (as of 2026-01-02 03:04 UTC; editing them here changes nothing)');
+  });
 });

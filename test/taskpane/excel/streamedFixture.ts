@@ -3,7 +3,8 @@
  * it after "Read data and fit" on large data, for the tests of what is written afterwards.
  */
 import { resolveRanges, EMPTY_CHOICES, type PaneChoices, type ResolvedRanges } from '../../../src/taskpane/model/choices';
-import { analyzeStreamed, type StreamedAnalysis } from '../../../src/taskpane/model/streamedAnalysis';
+import type { StreamedAnalysis } from '../../../src/taskpane/model/paneAnalysis';
+import { analyzeStreamed } from '../../../src/taskpane/model/streamedAnalysis';
 import type { PreviewWorkbook } from '../../../src/preview/workbook/workbook';
 import { readData } from '../../../src/taskpane/readData';
 import { columnLetters } from '../../../src/addressing/a1';
@@ -19,7 +20,6 @@ export interface StreamedFixture {
   ranges: ResolvedRanges;
   choices: PaneChoices;
   analysis: StreamedAnalysis;
-  dataRows: number;
 }
 
 export interface FixtureShape {
@@ -49,5 +49,5 @@ export async function streamedFixture(
   if (ranges === undefined) throw new Error('fixture ranges do not resolve');
   const read = await readData(ranges, () => undefined, new AbortController().signal, true);
   if (read.kind !== 'streamed') throw new Error('fixture read was not streamed');
-  return { ranges, choices, analysis: analyzeStreamed(read.data, choices), dataRows: read.dataRows };
+  return { ranges, choices, analysis: analyzeStreamed(read.data, choices) };
 }

@@ -7,7 +7,8 @@
  */
 import { describe, expect, it } from 'vitest';
 import { writeReport } from '../../../src/taskpane/excel/writeReport';
-import type { ReportChart, ReportPlan } from '../../../src/taskpane/model/reportPlan';
+import type { ReportChartPlan } from '../../../src/taskpane/model/reportCharts';
+import type { ReportPlan } from '../../../src/taskpane/model/reportPlan';
 import { afterPendingWork, freshHost, freshWorkbook } from '../../preview/shim/harness';
 
 const plan = (labels: string[]): ReportPlan => ({
@@ -34,14 +35,13 @@ describe('writeReport', () => {
   it('gives each chart exactly the series its plan names, bound to the planned cells', async () => {
     // Syncs that take time, as a real host's do, so every step must await the one before.
     const { model } = freshHost({ syncDelayMs: 1 });
-    const column = (sheet: string, left: number): ReportChart['x'] => ({ sheet, top: 3, bottom: 6, left, right: left });
-    const chart = (name: string, x: number, y: number, sheet: string): ReportChart => ({
+    const column = (sheet: string, left: number) => ({ sheet, top: 3, bottom: 6, left, right: left });
+    const chart = (name: string, x: number, y: number, sheet: string): ReportChartPlan => ({
       name,
       title: `${name} title`,
-      x: column(sheet, x),
-      y: column(sheet, y),
-      xTitle: 'Fitted',
-      yTitle: `${name} values`,
+      series: [{ name: `${name} values`, x: column(sheet, x), y: column(sheet, y), drawn: 'points' }],
+      xAxis: { title: 'Fitted', bounds: 'auto' },
+      yAxis: { title: `${name} values`, bounds: 'auto' },
       topLeft: 'K4',
       bottomRight: 'R21',
     });
@@ -53,8 +53,10 @@ describe('writeReport', () => {
     }));
     const charts = model.charts(name);
     expect(charts.map((c) => c.name)).toEqual(['ObservedVsFitted', 'CooksDistance']);
-    expect(charts[0].series).toEqual([{ name: 'ObservedVsFitted values', x: column(name, 2), y: column(name, 1) }]);
-    expect(charts[1].series).toEqual([{ name: 'CooksDistance values', x: column(name, 0), y: column(name, 7) }]);
+    expect(charts[0].series).toHaveLength(1);
+    expect(charts[0].series[0]).toMatchObject({ name: 'ObservedVsFitted values', x: column(name, 2), y: column(name, 1) });
+    expect(charts[1].series).toHaveLength(1);
+    expect(charts[1].series[0]).toMatchObject({ name: 'CooksDistance values', x: column(name, 0), y: column(name, 7) });
     expect(charts[0].title).toBe('ObservedVsFitted title');
     expect(charts[0].axisTitles).toEqual({ category: 'Fitted', value: 'ObservedVsFitted values' });
   });

@@ -65,11 +65,11 @@ describe('writeResidualTable against a host whose syncs take time', () => {
 
   it('leaves no report sheet when a table write fails inside Write report, and nothing lands on it afterwards', async () => {
     const { model } = freshHost({ syncDelayMs: 1 });
-    const { ranges, choices, analysis, dataRows } = await streamedFixture(model, { rows: 50_000, predictors: 5 });
+    const { ranges, choices, analysis } = await streamedFixture(model, { rows: 50_000, predictors: 5 });
     const before = model.sheetNames();
     const counts = injectTableWriteFailure(1);
     restore = counts.restore;
-    await expect(writeValuesReport(ranges, choices, analysis, dataRows)).rejects.toThrow('injected failure of a table write');
+    await expect(writeValuesReport(ranges, choices, analysis)).rejects.toThrow('injected failure of a table write');
     expect(model.sheetNames()).toEqual(before);
     expect(counts.writesAfterFailure).toBe(0);
   });

@@ -6,7 +6,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import type { RangeRef } from '../../../src/addressing/a1';
-import { analyze, type ReadData } from '../../../src/taskpane/model/analysis';
+import { analyzeCells, type ReadData } from '../../../src/taskpane/model/analysis';
 import { EMPTY_CHOICES } from '../../../src/taskpane/model/choices';
 import { randomProblem } from '../../support/random';
 
@@ -31,24 +31,24 @@ describe('analyze', () => {
     // Data rows 0..11 sit on sheet rows 11..22: a blank y on row 13, #N/A in Temp on row 17.
     const yCells = y.map((v, i) => (i === 2 ? '' : v));
     const aCells = x.map((r, i) => (i === 6 ? '#N/A' : r[0]));
-    const analysis = analyze(cells(yCells, aCells), EMPTY_CHOICES);
+    const analysis = analyzeCells(cells(yCells, aCells), EMPTY_CHOICES);
     expect(analysis.frame.skipped).toEqual([
       { row: 13, reason: 'blank in Yield' },
       { row: 17, reason: '#N/A in Temp' },
     ]);
     expect(analysis.frame.usedRows).toEqual([11, 12, 14, 15, 16, 18, 19, 20, 21, 22]);
     expect(analysis.fit?.n).toBe(10);
-    expect(analysis.warnings).toContain('2 rows left out: row 13 (blank in Yield), row 17 (#N/A in Temp).');
+    expect(analysis.warnings.map((w) => w.text)).toContain('2 rows left out: row 13 (blank in Yield), row 17 (#N/A in Temp).');
   });
 
   it('names a bad cell by its worksheet address', () => {
     const aCells = x.map((r, i) => (i === 3 ? 'n/a' : r[0]));
-    expect(() => analyze(cells(y, aCells), EMPTY_CHOICES)).toThrow(/'Batch log'!C14 \("Temp"\)/);
+    expect(() => analyzeCells(cells(y, aCells), EMPTY_CHOICES)).toThrow(/'Batch log'!C14 \("Temp"\)/);
   });
 
   it('keeps the worksheet rows when the added set changes the column order', () => {
     const aCells = x.map((r, i) => (i === 6 ? '#N/A' : r[0]));
-    const analysis = analyze(cells(y, aCells), { ...EMPTY_CHOICES, added: [0] });
+    const analysis = analyzeCells(cells(y, aCells), { ...EMPTY_CHOICES, added: [0] });
     expect(analysis.frame.skipped).toEqual([{ row: 17, reason: '#N/A in Temp' }]);
     expect(analysis.fit?.terms.map((t) => t.name)).toEqual(['Intercept', 'Time', 'Temp']);
     expect(analysis.addedNames).toEqual(['Temp']);

@@ -5,8 +5,8 @@
  * common practice (no source): a user finds a row by the number at the sheet's left edge).
  */
 import { describe, expect, it } from 'vitest';
-import { buildModelFrame, type CellValue } from '../../../src/engine';
-import { type BlockSources, type BlockValues, categoricalInFirstBlock, convertBlock, detectHeader } from '../../../src/taskpane/model/blockRows';
+import { buildModelFrame, type CellGrid, type CellValue } from '../../../src/engine';
+import { type BlockSources, type BlockValues, categoricalInFirstBlock, convertBlock, detectHeader, originOf } from '../../../src/taskpane/model/blockRows';
 
 const sources: BlockSources = {
   response: { sheet: 'Data', top: 0, bottom: 99, left: 0, right: 0 },
@@ -41,7 +41,7 @@ describe('detectHeader', () => {
   });
 
   it('rejects a numeric predictor header under a text response header, naming the cell', () => {
-    expect(() => detectHeader(values(['y', 1], ['a', 2], [7, 3]), sources, 100)).toThrow(/Data!D1\) holds 7/);
+    expect(() => detectHeader(values(['y', 1], ['a', 2], [7, 3]), sources, 100)).toThrow(/Data!D1 holds 7/);
   });
 });
 
@@ -84,7 +84,7 @@ describe('convertBlock', () => {
     // Block offset 20,000 within a range whose first row is sheet row 10.
     expect(usedRows).toEqual([20010, 20012]);
     expect(skippedExamples).toEqual([{ row: 20011, reason: 'blank in y' }]);
-    expect(() => convertBlock(values([1, 2], [3, 'abc'], [5, 6]), lower, header, 0)).toThrow(`Row 11, cell 'Batch log'!B11 ("a"), holds the text "abc".`);
+    expect(() => convertBlock(values([1, 2], [3, 'abc'], [5, 6]), lower, header, 0)).toThrow(`predictors cell 'Batch log'!B11 ("a") holds the text "abc".`);
   });
 
   it('treats a later block as data from its first row and numbers rows from the block offset', () => {
@@ -95,13 +95,41 @@ describe('convertBlock', () => {
 
   it('names the sheet cell of text in a numeric column', () => {
     expect(() => convertBlock(values([1, 2], [3, 'abc'], [5, 6]), sources, header, 40000)).toThrow(
-      'Row 40002, cell Data!B40002 ("a"), holds the text "abc". Use a number, or leave the cell blank to skip the row.',
+      'predictors cell Data!B40002 ("a") holds the text "abc". Use a number, or leave the cell blank to skip the row.',
     );
   });
 
+  it('words a bad cell exactly as the model frame of the cell functions does', () => {
+    const engineMessage = (cells: CellGrid[]) => {
+      try {
+        buildModelFrame({
+          y: cells[0],
+          x: [cells[1], cells[2]],
+          intercept: true,
+          origins: { y: originOf(sources.response), x: [originOf(sources.predictors[0]), originOf(sources.predictors[1])] },
+        });
+      } catch (error) {
+        return (error as Error).message;
+      }
+      return 'no error';
+    };
+    const streamedMessage = () => {
+      try {
+        convertBlock(values(['y', 1, 2, 3], ['a', 3, '1,5', 4], ['b', 5, 6, 7]), sources, header, 0);
+      } catch (error) {
+        return (error as Error).message;
+      }
+      return 'no error';
+    };
+    const grid = (name: string, cells: (number | string)[]): CellGrid => [[name], ...cells.map((c) => [c])];
+    const expected = engineMessage([grid('y', [1, 2, 3]), grid('a', [3, '1,5', 4]), grid('b', [5, 6, 7])]);
+    expect(expected).toContain('looks like a number stored as text');
+    expect(streamedMessage()).toBe(expected);
+  });
+
   it('names booleans and error values too', () => {
-    expect(() => convertBlock(values([1, true], [3, 4], [5, 6]), sources, header, 0)).toThrow(/Data!A2 \("y"\), holds TRUE/);
-    expect(() => convertBlock(values([1, 2], [3, 4], [5, '#DIV/0!']), sources, header, 0)).toThrow(/Data!D2 \("b"\), holds the error #DIV\/0!/);
+    expect(() => convertBlock(values([1, true], [3, 4], [5, 6]), sources, header, 0)).toThrow(/Data!A2 \("y"\) holds TRUE/);
+    expect(() => convertBlock(values([1, 2], [3, 4], [5, '#DIV/0!']), sources, header, 0)).toThrow(/Data!D2 \("b"\) holds the error #DIV\/0!/);
   });
 
   it('keeps weights and rejects one that is not positive', () => {

@@ -1,6 +1,6 @@
 /** The pane's address checks, each message worked out by hand (common practice (no source)). */
 import { describe, expect, it } from 'vitest';
-import { EMPTY_CHOICES, resolveRanges, singleAreaProblem } from '../../../src/taskpane/model/choices';
+import { EMPTY_CHOICES, noSuchSheetProblem, resolveRanges, sheetsNamed, singleAreaProblem } from '../../../src/taskpane/model/choices';
 
 const base = { ...EMPTY_CHOICES, response: 'Batches!$B$1:$B$61', predictors: 'Batches!$C$1:$E$61,Batches!$G$1:$G$61' };
 
@@ -52,5 +52,23 @@ describe('singleAreaProblem', () => {
     expect(singleAreaProblem('predictors', two)).toBeUndefined();
     expect(singleAreaProblem('newRows', two)).toBeUndefined();
     expect(singleAreaProblem('response', two.slice(0, 1))).toBeUndefined();
+  });
+});
+
+describe('sheetsNamed', () => {
+  it('lists each sheet once per address field, unquoted, and skips text that names none', () => {
+    const choices = { ...base, weights: 'B2:B61', newRows: "'Planned batches'!B2:C6,'Planned batches'!E2:E6" };
+    expect(sheetsNamed(choices)).toEqual([
+      { field: 'response', sheet: 'Batches' },
+      { field: 'predictors', sheet: 'Batches' },
+      { field: 'newRows', sheet: 'Planned batches' },
+    ]);
+  });
+
+  it('words the missing sheet on its field', () => {
+    expect(noSuchSheetProblem('response', 'Dta')).toEqual({
+      field: 'response',
+      message: 'There is no sheet named Dta. Check the spelling, or select the range in the sheet and press "Use selection".',
+    });
   });
 });

@@ -7,11 +7,11 @@
  * common practice (no source). The statistics themselves are checked in test/engine.
  */
 import { beforeAll, describe, expect, it } from 'vitest';
-import { decimalsFor } from '../../../src/cellGrids/decimals';
+import { decimalsFor } from '../../../src/presentation';
 import { fittedEquation } from '../../../src/cellGrids/equationGrid';
 import type { PreviewWorkbook } from '../../../src/preview/workbook/workbook';
 import { writeReport } from '../../../src/taskpane/excel/writeReport';
-import { analyze, type ReadData } from '../../../src/taskpane/model/analysis';
+import { analyzeCells, type ReadData } from '../../../src/taskpane/model/analysis';
 import { EMPTY_CHOICES, type PaneChoices, resolveRanges } from '../../../src/taskpane/model/choices';
 import { planReport, type ReportPlan } from '../../../src/taskpane/model/reportPlan';
 import { readData } from '../../../src/taskpane/readData';
@@ -22,7 +22,6 @@ const noise = gaussian(mulberry32(17));
 const dose = Array.from({ length: 20 }, (_, i) => 1000 + 5 * i);
 const yields = dose.map((v) => 100 + 0.5 * v + noise());
 const choices: PaneChoices = { ...EMPTY_CHOICES, response: 'Data!A1:A21', predictors: 'Data!B1:B21' };
-const INTERCEPT_CELL = { row: 5, column: 1 };
 
 describe('the live report follows its settings cells', () => {
   let model: PreviewWorkbook;
@@ -38,7 +37,7 @@ describe('the live report follows its settings cells', () => {
     const read = await readData(ranges, () => undefined, new AbortController().signal, false);
     if (read.kind !== 'cells') throw new Error('expected the in-memory read');
     cells = read.data;
-    const analysis = analyze(read.data, choices);
+    const analysis = analyzeCells(read.data, choices);
     sheet = await writeReport((sheetName) => {
       plan = planReport({ sheetName, ranges, choices, analysis, writtenAt: new Date('2026-12-03T10:00:00Z') });
       return plan;
@@ -54,8 +53,19 @@ describe('the live report follows its settings cells', () => {
     }
     return rows;
   };
-  const equationText = () => model.valueAt({ sheet, row: 11, column: 0 });
-  const expected = (intercept: boolean) => fittedEquation('Yield', { terms: (cells && analyze(cells, { ...choices, intercept }).fit?.terms) ?? [] });
+  /** A formula's cell, found by what it computes, and the settings cell beside its label. */
+  const formulaCell = (start: string) => {
+    const cell = plan?.cells.find((c) => c.kind === 'formula' && c.formula.startsWith(start));
+    if (cell === undefined) throw new Error(`no ${start} formula`);
+    return cell;
+  };
+  const interceptCell = () => {
+    const label = plan?.cells.find((c) => c.kind === 'label' && c.column === 0 && c.text === 'Intercept');
+    if (label === undefined) throw new Error('no intercept setting');
+    return { row: label.row, column: 1 };
+  };
+  const equationText = () => model.valueAt({ sheet, row: formulaCell('=PLUMB.EQUATION(').row, column: 0 });
+  const expected = (intercept: boolean) => fittedEquation('Yield', { terms: (cells && analyzeCells(cells, { ...choices, intercept }).fit?.terms) ?? [] });
 
   it('shows each term with at least three significant digits of its standard error, before and after the intercept is turned off', () => {
     const check = () => {
@@ -67,20 +77,20 @@ describe('the live report follows its settings cells', () => {
       }
     };
     check();
-    model.setInputs(sheet, INTERCEPT_CELL.row, INTERCEPT_CELL.column, [[false]]);
+    model.setInputs(sheet, interceptCell().row, interceptCell().column, [[false]]);
     expect(terms().map((t) => t.name)).toEqual(['Dose']);
     check();
-    model.setInputs(sheet, INTERCEPT_CELL.row, INTERCEPT_CELL.column, [[true]]);
+    model.setInputs(sheet, interceptCell().row, interceptCell().column, [[true]]);
     expect(terms().map((t) => t.name)).toEqual(['Intercept', 'Dose']);
   });
 
   it('rewrites the equation line when the intercept cell changes', () => {
     expect(equationText()).toBe(expected(true));
     expect(String(equationText())).toMatch(/^Fitted \[Yield\] = \d+\.\d+ \+ 0\.\d+·\[Dose\]$/);
-    model.setInputs(sheet, INTERCEPT_CELL.row, INTERCEPT_CELL.column, [[false]]);
+    model.setInputs(sheet, interceptCell().row, interceptCell().column, [[false]]);
     expect(equationText()).toBe(expected(false));
     expect(String(equationText())).toMatch(/^Fitted \[Yield\] = 0\.\d+·\[Dose\]$/);
-    model.setInputs(sheet, INTERCEPT_CELL.row, INTERCEPT_CELL.column, [[true]]);
+    model.setInputs(sheet, interceptCell().row, interceptCell().column, [[true]]);
     expect(equationText()).toBe(expected(true));
   });
 });

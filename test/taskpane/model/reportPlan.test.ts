@@ -9,12 +9,12 @@
  * functions.
  */
 import { describe, expect, it } from 'vitest';
-import { analyze } from '../../../src/taskpane/model/analysis';
+import { analyzeCells } from '../../../src/taskpane/model/analysis';
 import { EMPTY_CHOICES, type PaneChoices, resolveRanges } from '../../../src/taskpane/model/choices';
 import { QQ_HEADER } from '../../../src/cellGrids/qqGrid';
 import { RESIDUALS_HEADER } from '../../../src/cellGrids/residualsGrid';
-import { decimalsFor } from '../../../src/cellGrids/decimals';
-import { planReport, type ReportCell, SETTINGS_CELLS } from '../../../src/taskpane/model/reportPlan';
+import { decimalsFor } from '../../../src/presentation';
+import { planReport, type ReportCell, type ReportPlan } from '../../../src/taskpane/model/reportPlan';
 import { gaussian, mulberry32, randomProblem } from '../../support/random';
 
 const { y, x } = randomProblem(91, 20, 3);
@@ -29,16 +29,32 @@ const data = {
 function plan(choices: PaneChoices) {
   const { ranges } = resolveRanges(choices);
   if (!ranges) throw new Error('bad test ranges');
-  return planReport({ sheetName: 'Plumbline report', ranges, choices, analysis: analyze(data, choices), writtenAt: new Date('2026-12-02T10:00:00Z') });
+  return planReport({ sheetName: 'Plumbline report', ranges, choices, analysis: analyzeCells(data, choices), writtenAt: new Date('2026-12-02T10:00:00Z') });
 }
 
 const choices: PaneChoices = { ...EMPTY_CHOICES, response: 'Data!A1:A21', predictors: 'Data!B1:D21', added: [2] };
+
+/** The settings cells found by their labels (in A, the value beside them in B), as a user finds them. */
+function settingsCells(p: ReportPlan) {
+  const beside = (label: string) => {
+    const cell = p.cells.find((c) => c.kind === 'label' && c.column === 0 && c.text.startsWith(label));
+    if (cell === undefined) throw new Error(`no settings row ${label}`);
+    return { row: cell.row, column: 1, address: `$B$${cell.row + 1}` };
+  };
+  return { level: beside('Confidence level'), intercept: beside('Intercept'), knownSigma: beside('Known sigma'), robust: beside('Standard errors (') };
+}
+
+function settingsArguments(p: ReportPlan, weights = ''): string {
+  const s = settingsCells(p);
+  return `${s.level.address}, ${s.intercept.address}, ${s.knownSigma.address}, ${weights}, ${s.robust.address}`;
+}
 const formulaCells = (cells: ReportCell[]) => cells.flatMap((c) => (c.kind === 'formula' ? [c] : []));
 
 describe('planReport', () => {
   it('writes every PLUMB formula over absolute data ranges and the settings cells', () => {
-    const formulas = plan(choices).cells.flatMap((c) => (c.kind === 'formula' ? [c.formula] : []));
-    const settings = `${SETTINGS_CELLS.level}, ${SETTINGS_CELLS.intercept}, ${SETTINGS_CELLS.knownSigma}, , ${SETTINGS_CELLS.robust}`;
+    const p = plan(choices);
+    const formulas = p.cells.flatMap((c) => (c.kind === 'formula' ? [c.formula] : []));
+    const settings = settingsArguments(p);
     expect(formulas).toContain(`=PLUMB.TERMS(Data!$A$1:$A$21, Data!$B$1:$D$21, ${settings})`);
     expect(formulas).toContain(`=PLUMB.FITSTATS(Data!$A$1:$A$21, Data!$B$1:$D$21, ${settings})`);
     expect(formulas).toContain(`=PLUMB.NESTEDF(Data!$A$1:$A$21, Data!$B$1:$C$21, Data!$D$1:$D$21, ${settings})`);
@@ -52,7 +68,9 @@ describe('planReport', () => {
     const labels = p.cells.flatMap((c) => (c.kind === 'label' ? [c.text] : []));
     expect(labels.some((t) => t.includes('=danger'))).toBe(true);
     const formulas = p.cells.flatMap((c) => (c.kind === 'formula' ? [c.formula] : []));
-    expect(formulas.every((f) => /^=PLUMB\./.test(f))).toBe(true);
+    // Only PLUMB functions read the data; the charts' guide lines read PLUMB results on the report sheet.
+    expect(formulas.filter((f) => !/^=PLUMB\./.test(f) && f.includes('Data!'))).toEqual([]);
+    expect(formulas.filter((f) => !/^=PLUMB\./.test(f) && f.replace(/'Plumbline report'!/g, '').includes('!'))).toEqual([]);
     expect(labels.some((t) => t.startsWith('Does +Gamma add anything?'))).toBe(true);
   });
 
@@ -65,21 +83,27 @@ describe('planReport', () => {
       if (head === undefined) throw new Error(`no section ${heading}`);
       return p.cells.flatMap((c) => (c.kind === 'label' && c.row === head.row && c.column === 1 ? [c.text] : [])).join(' ');
     };
-    expect(beside('Which terms matter?')).toContain('Standard errors: those set in B8 (classical or robust).');
+    const robust = settingsCells(p).robust.address.replace(/\$/g, '');
+    expect(beside('Which terms matter?')).toContain(`Standard errors: those set in ${robust} (classical or robust).`);
     for (const heading of ['How well does it fit?', 'Does +Gamma add anything?', 'What to expect for new cases']) {
-      expect(beside(heading)).toContain("Classical standard errors, whatever B8 sets: robust ones change only the terms' table.");
+      expect(beside(heading)).toContain(`Classical standard errors, whatever ${robust} sets: robust ones change only the terms' table.`);
     }
     expect(beside('Can these numbers be trusted?')).toContain('The checks use the residuals, not the standard errors.');
   });
 
   it('puts the settings block where the formulas look for it', () => {
     const p = plan({ ...choices, robust: 'HC3' });
+    const s = settingsCells(p);
     expect(p.cells.filter((c) => c.kind === 'value')).toEqual([
-      { row: 4, column: 1, kind: 'value', value: 0.95 },
-      { row: 5, column: 1, kind: 'value', value: true },
-      { row: 6, column: 1, kind: 'value', value: '' },
+      { row: s.level.row, column: 1, kind: 'value', value: 0.95 },
+      { row: s.intercept.row, column: 1, kind: 'value', value: true },
+      { row: s.knownSigma.row, column: 1, kind: 'value', value: '' },
     ]);
-    expect(p.cells).toContainEqual({ row: 7, column: 1, kind: 'label', text: 'HC3', bold: false });
+    expect(p.cells).toContainEqual({ row: s.robust.row, column: 1, kind: 'label', text: 'HC3', bold: false });
+    // Every formula reads them there.
+    for (const c of formulaCells(p.cells).filter((f) => !f.formula.startsWith('=PLUMB.GATHER') && f.formula.startsWith('=PLUMB.'))) {
+      expect(c.formula).toContain(settingsArguments(p));
+    }
   });
 
   // A weights range is written into every formula, so no cell can switch it: it is named with the
@@ -88,7 +112,7 @@ describe('planReport', () => {
     const { ranges } = resolveRanges({ ...choices, weights: 'Data!E1:E21' });
     if (!ranges) throw new Error('bad test ranges');
     const weighted = { ...data, weights: [['w'], ...y.map(() => [1])], sources: { ...data.sources, weights: column(4) } };
-    const p = planReport({ sheetName: 'R', ranges, choices, analysis: analyze(weighted, choices), writtenAt: new Date() });
+    const p = planReport({ sheetName: 'R', ranges, choices, analysis: analyzeCells(weighted, choices), writtenAt: new Date() });
     const labels = p.cells.flatMap((c) => (c.kind === 'label' ? [c] : []));
     expect(labels.filter((c) => c.text === 'Weights')).toEqual([]);
     const heading = labels.find((c) => c.text.startsWith('Settings'));
@@ -100,9 +124,14 @@ describe('planReport', () => {
   });
 
   it('writes the equation as a live PLUMB.EQUATION formula over the same data and settings cells', () => {
-    const formulas = formulaCells(plan(choices).cells);
-    const settings = `${SETTINGS_CELLS.level}, ${SETTINGS_CELLS.intercept}, ${SETTINGS_CELLS.knownSigma}, , ${SETTINGS_CELLS.robust}`;
-    expect(formulas).toContainEqual({ row: 11, column: 0, kind: 'formula', formula: `=PLUMB.EQUATION(Data!$A$1:$A$21, Data!$B$1:$D$21, ${settings})` });
+    const p = plan(choices);
+    const model = p.cells.find((c) => c.kind === 'label' && c.text === 'The model');
+    expect(formulaCells(p.cells)).toContainEqual({
+      row: (model?.row ?? -9) + 1,
+      column: 0,
+      kind: 'formula',
+      formula: `=PLUMB.EQUATION(Data!$A$1:$A$21, Data!$B$1:$D$21, ${settingsArguments(p)})`,
+    });
     expect(plan(choices).cells.some((c) => c.kind === 'label' && c.text.includes('b0'))).toBe(false);
   });
 
@@ -122,12 +151,12 @@ describe('planReport', () => {
     const farChoices: PaneChoices = { ...EMPTY_CHOICES, response: 'Data!A1:A21', predictors: 'Data!B1:B21' };
     const { ranges } = resolveRanges(farChoices);
     if (!ranges) throw new Error('bad test ranges');
-    const p = planReport({ sheetName: 'R', ranges, choices: farChoices, analysis: analyze(far, farChoices), writtenAt: new Date() });
+    const p = planReport({ sheetName: 'R', ranges, choices: farChoices, analysis: analyzeCells(far, farChoices), writtenAt: new Date() });
     const top = (formulaCells(p.cells).find((c) => c.formula.startsWith('=PLUMB.TERMS'))?.row ?? -99) + 1;
     const formatAt = (row: number, column: number) =>
       p.formats.filter((f) => f.range.top <= row && row <= f.range.bottom && f.range.left <= column && column <= f.range.right).map((f) => f.numberFormat);
     const decimalsOf = (format: string) => (format.split('.')[1] ?? '').length;
-    const fits = [true, false].map((intercept) => analyze(far, { ...farChoices, intercept }).fit?.terms ?? []);
+    const fits = [true, false].map((intercept) => analyzeCells(far, { ...farChoices, intercept }).fit?.terms ?? []);
     expect(decimalsFor(fits[0][0].standardError)).toBeLessThan(decimalsFor(fits[1][0].standardError));
     for (const terms of fits) {
       terms.forEach((t, i) => {
@@ -147,11 +176,11 @@ describe('planReport', () => {
       sheetName: 'R',
       ranges,
       choices,
-      analysis: analyze({ ...data, weights: [['w'], ...y.map(() => [1])], sources: { ...data.sources, weights: column(4) } }, choices),
+      analysis: analyzeCells({ ...data, weights: [['w'], ...y.map(() => [1])], sources: { ...data.sources, weights: column(4) } }, choices),
       writtenAt: new Date(),
     });
     const terms = withWeights.cells.find((c) => c.kind === 'formula' && c.formula.startsWith('=PLUMB.TERMS'));
-    expect(terms).toMatchObject({ formula: '=PLUMB.TERMS(Data!$A$1:$A$21, Data!$B$1:$D$21, $B$5, $B$6, $B$7, Data!$E$1:$E$21, $B$8)' });
+    expect(terms).toMatchObject({ formula: `=PLUMB.TERMS(Data!$A$1:$A$21, Data!$B$1:$D$21, ${settingsArguments(withWeights, 'Data!$E$1:$E$21')})` });
   });
 
   it('gathers the columns, base then added, with PLUMB.GATHER when the added set is not at the right end', () => {
@@ -193,7 +222,7 @@ describe('planReport', () => {
 
   it('binds every chart to PLUMB results: observed and fitted from the residual table, never to the data', () => {
     const p = plan(choices);
-    const [observed, residuals, qq, cooks] = p.charts;
+    const [observed, residuals, qq, cooks] = p.charts.map((chart) => chart.series[0]);
     const table = formulaCells(p.cells).find((c) => c.formula.startsWith('=PLUMB.RESIDUALS'));
     const points = formulaCells(p.cells).find((c) => c.formula.startsWith('=PLUMB.QQPOINTS'));
     if (table === undefined || points === undefined) throw new Error('the report has no residual table or Q–Q points');

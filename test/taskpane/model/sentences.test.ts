@@ -1,7 +1,8 @@
 /** The plain-language readings, on a small fit whose numbers the test computes itself. */
 import { describe, expect, it } from 'vitest';
 import { buildModelFrame, compareNested, fitModel } from '../../../src/engine';
-import { fitSentence, nestedSentence, readable, splitUnit, termSentence } from '../../../src/taskpane/model/sentences';
+import { formatNumber as readable, formatP } from '../../../src/presentation';
+import { fitSentence, nestedSentence, splitUnit, termSentence } from '../../../src/taskpane/model/sentences';
 
 const frame = buildModelFrame({
   y: [['Yield (%)'], [10], [12.1], [13.9], [16.2], [18], [19.8], [22.1], [24]],
@@ -39,6 +40,16 @@ describe('sentences', () => {
     expect(sentence).not.toMatch(/changes/);
   });
 
+  // Significant trailing zeros are shown: 1.50, not 1.5 (common practice, no source).
+  it('keeps the trailing zeros of the size and its interval, both signed alike', () => {
+    const t = { ...fit.terms[1], estimate: 1.5, ciLow: 1.2, ciHigh: 1.8 };
+    expect(termSentence(t, frame, 0.95)).toBe(
+      'Steep: each extra hour is associated with +1.50 points of yield, other predictors held fixed (95% CI 1.20 to 1.80). Clear of zero.',
+    );
+    const negative = { ...fit.terms[1], estimate: -0.25, ciLow: -0.4, ciHigh: -0.1 };
+    expect(termSentence(negative, frame, 0.95)).toContain('is associated with -0.250 points of yield, other predictors held fixed (95% CI -0.400 to -0.100)');
+  });
+
   it('reads a categorical term against its reference level, its size signed like its interval', () => {
     const t = fit.terms[2];
     const sign = t.estimate > 0 ? '+' : '';
@@ -49,6 +60,9 @@ describe('sentences', () => {
 
   it('summarises the fit with rows, R² and the overall F test', () => {
     expect(fitSentence(fit, frame)).toContain(`Fitted on 8 rows: R² = ${readable(fit.rSquared)}`);
+    // The one p-value rule of the pane, the reports and the cells (presentation/pValues.ts).
+    expect(fitSentence(fit, frame)).toContain(`All slopes zero? F = ${readable(fit.fStatistic)}, ${formatP(fit.fPValue)}.`);
+    expect(formatP(fit.fPValue)).toBe('p < 0.0001');
   });
 
   // Without an intercept R² is 1 − RSS/Σy² (NIST StRD, NoInt1 certified values are of this kind),
@@ -79,7 +93,9 @@ describe('sentences', () => {
     const result = compareNested({ y, base, added });
     expect(result.addedHelp).toBe(false);
     const sentence = nestedSentence(result, ['Noise'], 0.95, fitModel({ y, x: base.map((r, i) => [...r, ...added[i]]) }, { covariance: 'HC3' }));
-    expect(sentence).toMatch(/^No evidence that Noise adds anything: F = .*\(classical standard errors, not HC3\)\. The smaller model is enough\.$/);
+    expect(sentence).toMatch(
+      /^No evidence that Noise adds anything: F = .*, p = 0\.\d{4}; critical F at 95% is .*\(classical standard errors, not HC3\)\. The smaller model is enough\.$/,
+    );
     expect(sentence).not.toMatch(/does not earn|no effect/);
   });
 });

@@ -5,31 +5,33 @@
  * numbers are checked against outside sources in test/engine.
  */
 import { describe, expect, it } from 'vitest';
-import { compareNested, predict, RegressionAccumulator } from '../../../src/engine';
-import { analyze } from '../../../src/taskpane/model/analysis';
+import { compareNested, predict } from '../../../src/engine';
+import { analyzeCells } from '../../../src/taskpane/model/analysis';
+import type { BlockSources } from '../../../src/taskpane/model/blockRows';
 import { EMPTY_CHOICES, type PaneChoices } from '../../../src/taskpane/model/choices';
 import { analyzeStreamed, type StreamedData } from '../../../src/taskpane/model/streamedAnalysis';
-import { predictStreamed } from '../../../src/taskpane/model/streamedPredict';
+import { StreamFold } from '../../../src/taskpane/model/streamFold';
 import { randomProblem } from '../../support/random';
 
 const n = 500;
 const p = 3;
 const { y, x } = randomProblem(7, n, p);
 
-function streamed(blockRows: number): StreamedData {
-  const accumulator = new RegressionAccumulator(p, true);
-  for (let start = 0; start < n; start += blockRows) {
-    const rows = Math.min(blockRows, n - start);
-    const xs = new Float64Array(rows * p);
-    for (let j = 0; j < p; j++) for (let i = 0; i < rows; i++) xs[j * rows + i] = x[start + i][j];
-    accumulator.addBlock({ rows, x: xs, y: Float64Array.from(y.slice(start, start + rows)) });
+const sheetColumn = (left: number) => ({ sheet: 'Data', top: 0, bottom: n, left, right: left });
+const sources: BlockSources = { response: sheetColumn(0), predictors: [1, 2, 3].map(sheetColumn), weights: undefined };
+
+/** Columns of sheet values (header first), folded in blocks of `blockRows` as a streamed read folds them. */
+function folded(columns: unknown[][], blockSources: BlockSources, blockRows: number): StreamedData {
+  const fold = new StreamFold(blockSources, columns[0].length);
+  for (let offset = 0; offset < columns[0].length; offset += blockRows) {
+    const block = columns.map((c) => c.slice(offset, offset + blockRows).map((v) => [v]));
+    fold.add({ response: block[0], predictors: block.slice(1), weights: undefined }, offset);
   }
-  return {
-    header: { hasHeader: true, responseName: 'y', predictorNames: ['a', 'b', 'c'] },
-    accumulated: accumulator.result(),
-    skipped: 0,
-    skippedExamples: [],
-  };
+  return fold.result();
+}
+
+function streamed(blockRows: number): StreamedData {
+  return folded([['y', ...y], ...[0, 1, 2].map((j) => [['a', 'b', 'c'][j], ...x.map((r) => r[j])])], sources, blockRows);
 }
 
 const cells = {
@@ -54,7 +56,7 @@ describe('analyzeStreamed', () => {
   ];
 
   it.each(cases)('matches the in-memory analysis: %s', (_name, choices) => {
-    const memory = analyze(cells, choices);
+    const memory = analyzeCells(cells, choices);
     const stream = analyzeStreamed(streamed(128), choices);
     expect(stream.fit?.terms.map((t) => t.name)).toEqual(memory.fit?.terms.map((t) => t.name));
     stream.fit?.terms.forEach((t, i) => {
@@ -86,15 +88,8 @@ describe('analyzeStreamed', () => {
   });
 
   it('says when the added column is a copy of a base column, as compareNested does', () => {
-    const accumulator = new RegressionAccumulator(2, true);
-    const a = Float64Array.from(x, (r) => r[0]);
-    accumulator.addBlock({ rows: n, x: Float64Array.from([...a, ...a]), y: Float64Array.from(y) });
-    const data: StreamedData = {
-      header: { hasHeader: false, responseName: 'y', predictorNames: ['x1', 'x2'] },
-      accumulated: accumulator.result(),
-      skipped: 0,
-      skippedExamples: [],
-    };
+    const a = x.map((r) => r[0]);
+    const data = folded([y, a, a], { ...sources, predictors: sources.predictors.slice(0, 2) }, n);
     const stream = analyzeStreamed(data, { ...EMPTY_CHOICES, added: [1] });
     expect(stream.nested).toBeUndefined();
     expect(stream.nestedError).toBe(
@@ -110,32 +105,34 @@ describe('analyzeStreamed', () => {
   });
 });
 
-describe('predictStreamed', () => {
+describe('streamed predictions', () => {
+  const newRows = (cells: (number | string)[][]) => ({ cells, labelCells: undefined, sheetRows: cells.map((_, i) => 31 + i) });
+
   it('gives predict()’s estimates and intervals from the covariance, in fit order', () => {
     const choices = { ...EMPTY_CHOICES, added: [0] };
-    const stream = analyzeStreamed(streamed(64), choices);
     const grid = [
       ['a', 'b', 'c'],
       [0.5, -1, 2],
       [1, '', 3],
       [-2, 0.25, 0],
     ];
-    const { predictions, headerRow } = predictStreamed(grid, stream);
-    expect(headerRow).toBe(true);
-    expect(predictions[1]).toBeUndefined();
+    const { predictions } = analyzeStreamed({ ...streamed(64), newRows: newRows(grid) }, choices);
+    // The repeated header row is not a new row; the blank one is kept, unpredicted.
+    expect(predictions.map((p) => p.label)).toEqual(['Row 32', 'Row 33', 'Row 34']);
+    expect(predictions[1].notPredicted).toBe('Not predicted: a blank in b.');
     // The fit puts the added column last, so predict() is given the columns in that order.
     const reorder = (r: number[]) => [r[1], r[2], r[0]];
     const expected = predict({ y, x: x.map(reorder) }, [reorder([0.5, -1, 2]), reorder([-2, 0.25, 0])]);
     [predictions[0], predictions[2]].forEach((got, i) => {
-      if (got === undefined) throw new Error('missing prediction');
       close(got.estimate, expected[i].estimate);
       close(got.meanLow, expected[i].meanLow);
       close(got.newHigh, expected[i].newHigh);
     });
   });
 
-  it('names a new cell that is not a number', () => {
-    const stream = analyzeStreamed(streamed(64), EMPTY_CHOICES);
-    expect(() => predictStreamed([[1, 'x', 2]], stream)).toThrow('New row 1, column 2 ("b") holds the text "x"; it needs a number.');
+  it('names a new cell that is not a number by its worksheet row', () => {
+    const analysis = analyzeStreamed({ ...streamed(64), newRows: newRows([[1, 'x', 2]]) }, EMPTY_CHOICES);
+    expect(analysis.predictions).toEqual([]);
+    expect(analysis.predictionError).toBe('New row 31 ("b") holds the text "x"; it needs a number.');
   });
 });

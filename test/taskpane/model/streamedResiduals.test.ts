@@ -5,11 +5,12 @@
  * intercept, and a skipped row that must keep its place in the Row numbers.
  */
 import { describe, expect, it } from 'vitest';
-import { fitModel, RegressionAccumulator } from '../../../src/engine';
-import { convertBlock, detectHeader } from '../../../src/taskpane/model/blockRows';
+import { fitModel } from '../../../src/engine';
+import { type BlockSources, convertBlock } from '../../../src/taskpane/model/blockRows';
 import { EMPTY_CHOICES, type PaneChoices } from '../../../src/taskpane/model/choices';
 import { analyzeStreamed } from '../../../src/taskpane/model/streamedAnalysis';
 import { residualRows } from '../../../src/taskpane/model/streamedResiduals';
+import { StreamFold } from '../../../src/taskpane/model/streamFold';
 import { randomProblem } from '../../support/random';
 
 const n = 300;
@@ -30,6 +31,13 @@ const values = {
   weights: undefined,
 };
 
+/** The blocks folded as a streamed read folds them. */
+function folded(blockSources: BlockSources) {
+  const fold = new StreamFold(blockSources, n + 1);
+  for (const b of blocks(64)) fold.add(b.values, b.offset);
+  return fold.result();
+}
+
 function blocks(size: number) {
   const out = [];
   for (let offset = 0; offset < n + 1; offset += size) {
@@ -45,11 +53,8 @@ describe('residualRows', () => {
     ['added set first in the sheet', { ...EMPTY_CHOICES, added: [0] }],
     ['no intercept', { ...EMPTY_CHOICES, intercept: false }],
   ])('matches the in-memory residuals row by row: %s', (_name, choices) => {
-    const header = detectHeader(values, sources, n + 1);
-    const accumulator = new RegressionAccumulator(3, true);
-    for (const b of blocks(64)) accumulator.addBlock(convertBlock(b.values, sources, header, b.offset).block);
-    const analysis = analyzeStreamed({ header, accumulated: accumulator.result(), skipped: 1, skippedExamples: [] }, choices);
-    const table = blocks(64).flatMap((b) => residualRows(convertBlock(b.values, sources, header, b.offset), analysis));
+    const analysis = analyzeStreamed(folded(sources), choices);
+    const table = blocks(64).flatMap((b) => residualRows(convertBlock(b.values, sources, analysis.header, b.offset), analysis));
     const keep = y.map((_, i) => i !== 5);
     const memory = fitModel({ y: y.filter((_, i) => keep[i]), x: x.filter((_, i) => keep[i]) }, { intercept: choices.intercept });
     expect(table).toHaveLength(n - 1);
@@ -64,11 +69,8 @@ describe('residualRows', () => {
     // The same cells with their header on sheet row 10: the blank y is on sheet row 16.
     const lowerRef = (left: number) => ({ sheet: 'Data', top: 9, left, bottom: n + 9, right: left });
     const lower = { response: lowerRef(0), predictors: [lowerRef(1), lowerRef(2), lowerRef(3)], weights: undefined };
-    const header = detectHeader(values, lower, n + 1);
-    const accumulator = new RegressionAccumulator(3, true);
-    for (const b of blocks(64)) accumulator.addBlock(convertBlock(b.values, lower, header, b.offset).block);
-    const analysis = analyzeStreamed({ header, accumulated: accumulator.result(), skipped: 1, skippedExamples: [] }, EMPTY_CHOICES);
-    const table = blocks(64).flatMap((b) => residualRows(convertBlock(b.values, lower, header, b.offset), analysis));
+    const analysis = analyzeStreamed(folded(lower), EMPTY_CHOICES);
+    const table = blocks(64).flatMap((b) => residualRows(convertBlock(b.values, lower, analysis.header, b.offset), analysis));
     expect(table.slice(0, 6).map((r) => r[0])).toEqual([11, 12, 13, 14, 15, 17]);
     expect(table[table.length - 1][0]).toBe(n + 10);
   });

@@ -4,48 +4,44 @@
  * nested test and predictions when chosen, and what was left out said in words.
  */
 import { describe, expect, it } from 'vitest';
-import { RegressionAccumulator } from '../../../src/engine';
 import { EMPTY_CHOICES, type PaneChoices, resolveRanges } from '../../../src/taskpane/model/choices';
-import { analyzeStreamed, type StreamedData } from '../../../src/taskpane/model/streamedAnalysis';
-import { predictStreamed } from '../../../src/taskpane/model/streamedPredict';
+import { analyzeStreamed } from '../../../src/taskpane/model/streamedAnalysis';
+import { StreamFold } from '../../../src/taskpane/model/streamFold';
 import { LEFT_OUT_NOTE, planValuesReport, valuesNote } from '../../../src/taskpane/model/valuesReportPlan';
 import { randomProblem } from '../../support/random';
 
 const { y, x } = randomProblem(12, 300, 2);
-const accumulator = new RegressionAccumulator(2, true);
-accumulator.addBlock({ rows: 300, x: Float64Array.from([...x.map((r) => r[0]), ...x.map((r) => r[1])]), y: Float64Array.from(y) });
-const data: StreamedData = {
-  header: { hasHeader: true, responseName: '=Yield', predictorNames: ['Temp', 'Time'] },
-  accumulated: accumulator.result(),
-  skipped: 4,
-  skippedExamples: [],
-};
+const sheetColumn = (left: number) => ({ sheet: 'Data', top: 0, bottom: 304, left, right: left });
+// 300 complete rows and 4 with a blank response, under a header that looks like a formula.
+const fold = new StreamFold({ response: sheetColumn(0), predictors: [sheetColumn(1), sheetColumn(2)], weights: undefined }, 305);
+fold.add(
+  {
+    response: [['=Yield'], ...y.map((v) => [v]), [''], [''], [''], ['']],
+    predictors: [0, 1].map((j) => [[['Temp', 'Time'][j]], ...x.map((r) => [r[j]]), [1], [2], [3], [4]]),
+    weights: undefined,
+  },
+  0,
+);
+const data = fold.result();
 
 function plan(choices: PaneChoices) {
   const { ranges } = resolveRanges(choices);
   if (ranges === undefined) throw new Error('bad test ranges');
-  const analysis = analyzeStreamed(data, choices);
-  const predictions =
+  const newRows =
     ranges.newRows === undefined
       ? undefined
-      : predictStreamed(
-          [
+      : {
+          cells: [
             [20, 3],
             [25, ''],
           ],
-          analysis,
-        );
+          labelCells: ['P-01', 'P-02'],
+          sheetRows: [1, 2],
+        };
+  const analysis = analyzeStreamed({ ...data, newRows }, choices);
   return {
     analysis,
-    plan: planValuesReport({
-      sheetName: 'Plumbline report',
-      ranges,
-      choices,
-      analysis,
-      predictions,
-      dataRows: 304,
-      writtenAt: new Date('2026-12-02T10:00:00Z'),
-    }),
+    plan: planValuesReport({ sheetName: 'Plumbline report', ranges, choices, analysis, writtenAt: new Date('2026-12-02T10:00:00Z') }),
   };
 }
 
@@ -88,8 +84,12 @@ describe('planValuesReport', () => {
     const fRow = p.cells.find((c) => c.kind === 'label' && c.text === 'F')?.row;
     expect(p.cells.find((c) => c.row === fRow && c.column === 1)).toMatchObject({ kind: 'value', value: analysis.nested?.f });
     expect(p.cells.some((c) => c.kind === 'label' && c.text === 'Does Time add anything?')).toBe(true);
-    const predictionRow = p.cells.find((c) => c.kind === 'label' && c.text === 'Prediction')?.row ?? -1;
-    expect(p.cells.find((c) => c.row === predictionRow + 1 && c.column === 0)?.kind).toBe('value');
-    expect(textAt(p.cells, predictionRow + 2, 0)).toBe('');
+    const header = p.cells.find((c) => c.kind === 'label' && c.text === 'Prediction');
+    if (header === undefined) throw new Error('no predictions table');
+    // Each new row's label in column A, beside its prediction; the row with a blank keeps its label, its numbers blank.
+    expect(textAt(p.cells, header.row + 1, header.column - 1)).toBe('P-01');
+    expect(p.cells.find((c) => c.row === header.row + 1 && c.column === header.column)?.kind).toBe('value');
+    expect(textAt(p.cells, header.row + 2, header.column - 1)).toBe('P-02');
+    expect(textAt(p.cells, header.row + 2, header.column)).toBe('');
   });
 });

@@ -1,0 +1,24 @@
+/**
+ * Plumbline's presentation: every reading text, rule-of-thumb threshold and number format, shared
+ * by the pane, the reports and the cell functions. The engine returns numbers and verdict codes;
+ * this module words them. It imports only the engine.
+ */
+export { formatCount, formatFixed, formatLevel, formatNumber, formatShare, formatSigned, SIGNIFICANT_DIGITS } from './numbers';
+export { formatP, formatPValue, P_VALUE_DECIMALS, P_VALUE_FORMAT } from './pValues';
+export { decimalsFor, fixedFormat } from './decimals';
+export { CONDITION_BANDS, LARGE_VIF, NORMAL_KURTOSIS, NOTABLE_SKEWNESS } from './thresholds';
+export {
+  breuschPaganReading,
+  durbinWatsonMethodText,
+  durbinWatsonPText,
+  durbinWatsonReading,
+  largestVifTermReading,
+  overallReading,
+  unusualRowsReading,
+} from './checkReadings';
+export { jarqueBeraReading, shapiroWilkReading } from './normalityReadings';
+export { outlierReading } from './outlierReadings';
+export { lackOfFitReading } from './lackOfFitReadings';
+export { COLLINEARITY_REASON_TEXT, conditionReading } from './collinearityReadings';
+export { intervalVerdict, nestedReading, termReading } from './termReadings';
+export { type NoiseSdEntry, noiseSdMessage } from './noiseSd';
