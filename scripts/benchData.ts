@@ -34,3 +34,28 @@ export function polynomialRows(n: number, degree: number): { x: number[][]; y: n
     y: t.map((v) => Math.sin(3 * v) + 0.01 * uniform()),
   };
 }
+
+/**
+ * generateColumns' design with y's noise sized for a chosen R²: y = 1 + Σ xⱼ·(j+1)/p + noise, the
+ * noise uniform with variance (1 − R²)/R² times the signal's. The same shape at R² = 0.5 and
+ * 0.9999 costs double precision alike; only the precision checks can tell them apart.
+ */
+export function generateWithRSquared(n: number, p: number, rSquared: number): { x: Float64Array; y: Float64Array } {
+  const uniform = lcg(24680);
+  const x = new Float64Array(n * p);
+  const y = new Float64Array(n);
+  // Each xⱼ is uniform on (−½, ½), variance 1/12, so the signal's variance is Σ((j+1)/p)²/12.
+  let signalVariance = 0;
+  for (let j = 0; j < p; j++) signalVariance += ((j + 1) / p) ** 2 / 12;
+  const noiseWidth = Math.sqrt((12 * signalVariance * (1 - rSquared)) / rSquared);
+  for (let i = 0; i < n; i++) {
+    let value = 1;
+    for (let j = 0; j < p; j++) {
+      const v = uniform();
+      x[j * n + i] = v;
+      value += (v * (j + 1)) / p;
+    }
+    y[i] = value + noiseWidth * uniform();
+  }
+  return { x, y };
+}

@@ -1,14 +1,10 @@
 import { INTERCEPT_NAME, type ModelFit } from '../engine';
-import { decimalsFor } from '../presentation';
+import { decimalsFor, MINUS, roundedParts } from '../presentation';
 import type { Grid } from './gridCell';
-
-const MINUS = '−';
 
 /** One coefficient to the decimals its standard error warrants; the sign apart, for " + " or " − ". */
 function rounded(estimate: number, standardError: number): { negative: boolean; digits: string } {
-  const digits = Math.abs(estimate).toFixed(decimalsFor(standardError));
-  // A coefficient that rounds to zero is written without a sign of its own.
-  return { negative: estimate < 0 && Number(digits) !== 0, digits };
+  return roundedParts(estimate, decimalsFor(standardError));
 }
 
 /**

@@ -50,10 +50,32 @@ export function errorCodeOf(value: unknown): string | undefined {
 
 export function toCellGrid(range: RangeArgument | null | undefined, argument: string): CellGrid {
   if (range === null || range === undefined) return [];
-  if (!Array.isArray(range) || !range.every(Array.isArray)) {
-    throw new EngineError('shape', `${argument} must be a range of cells.`);
+  if (!Array.isArray(range)) throw notRange(argument);
+  // Most ranges hold only numbers, text, booleans and blanks, which are cell values already: those
+  // are used as they are, and only a range with an error, another object or undefined is copied.
+  return isPlainGrid(range, argument) ? range : range.map((row) => row.map(toCellValue));
+}
+
+function notRange(argument: string): EngineError {
+  return new EngineError('shape', `${argument} must be a range of cells.`);
+}
+
+/**
+ * Whether every cell is a cell value as it is; throws when a row is no array. One indexed pass
+ * with the checks inline, since it runs over every cell of every formula's ranges.
+ */
+function isPlainGrid(range: unknown[], argument: string): range is CellValue[][] {
+  let plain = true;
+  for (let i = 0; i < range.length; i++) {
+    const row: unknown = range[i];
+    if (!Array.isArray(row)) throw notRange(argument);
+    for (let j = 0; plain && j < row.length; j++) {
+      const value: unknown = row[j];
+      const type = typeof value;
+      plain = type === 'number' || type === 'string' || type === 'boolean' || value === null;
+    }
   }
-  return range.map((row) => row.map(toCellValue));
+  return plain;
 }
 
 function toCellValue(value: unknown): CellValue {

@@ -5,7 +5,7 @@
  */
 export { formatCount, formatFixed, formatLevel, formatNumber, formatShare, formatSigned, SIGNIFICANT_DIGITS } from './numbers';
 export { formatP, formatPValue, P_VALUE_DECIMALS, P_VALUE_FORMAT } from './pValues';
-export { decimalsFor, fixedFormat } from './decimals';
+export { decimalsFor, fixedFormat, formatDecimals, MINUS, roundedParts } from './decimals';
 export { CONDITION_BANDS, LARGE_VIF, NORMAL_KURTOSIS, NOTABLE_SKEWNESS } from './thresholds';
 export {
   breuschPaganReading,
@@ -19,6 +19,7 @@ export {
 export { jarqueBeraReading, shapiroWilkReading } from './normalityReadings';
 export { outlierReading } from './outlierReadings';
 export { lackOfFitReading } from './lackOfFitReadings';
+export { type CheckLine, checkList } from './checkList';
 export { COLLINEARITY_REASON_TEXT, conditionReading } from './collinearityReadings';
 export { intervalVerdict, nestedReading, termReading } from './termReadings';
 export { type NoiseSdEntry, noiseSdMessage } from './noiseSd';

@@ -1,6 +1,6 @@
 import type { FitSettings, ModelData } from '../types';
 import { LruCache } from './lruCache';
-import { type ModelKey, modelKey, sameKey } from './modelKey';
+import { modelKey, sameKey, type StoredKey, storedKey } from './modelKey';
 
 export interface CacheStats {
   /** Fits computed (cache misses) since the last reset. */
@@ -15,7 +15,7 @@ export interface CacheStats {
  * so many formulas over the same ranges cost one fit, and the pane and the cells cannot disagree.
  */
 export class ModelCache<T> {
-  private readonly store: LruCache<number, { key: ModelKey; value: T }>;
+  private readonly store: LruCache<number, { key: StoredKey; value: T }>;
   private fits = 0;
   private hits = 0;
 
@@ -32,7 +32,7 @@ export class ModelCache<T> {
     }
     const value = compute();
     this.fits++;
-    this.store.set(key.hash, { key, value }, key.numbers.byteLength + sizeOf(value));
+    this.store.set(key.hash, { key: storedKey(key), value }, 8 * key.length + sizeOf(value));
     return value;
   }
 

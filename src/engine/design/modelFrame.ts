@@ -4,6 +4,8 @@ import type { ModelData } from '../types';
 import { type Cell, type CellGrid, classifyCell, describeCell, shortName } from './cells';
 import { codeCategorical, type SourceColumn } from './categorical';
 import { badCellMessage, isCategoricalColumn } from './cellRules';
+import { numericFrame } from './numericFrame';
+import { readNumericCells } from './numericCells';
 import { cellPlace, columnLetters, type RangeOrigin, rowNumber } from './origin';
 
 export interface FrameInput {
@@ -97,6 +99,10 @@ export function buildModelFrame(input: FrameInput): ModelFrame {
     categorical,
   });
   const names = xColumns.map((cellAt, j) => headerName(hasHeader ? classifyCell(cellAt(0)) : undefined, j, located(j, '', false)));
+
+  // The common case, every cell a number, a blank or #N/A, in one pass; otherwise the general path.
+  const numeric = readNumericCells(input.y, input.x, input.weights, firstData, [responseName, ...names, 'weight'], rowNumber(origins.y, 0));
+  if (numeric !== undefined) return numericFrame(numeric, { hasHeader, responseName, names, columnBlocks, intercept: input.intercept });
 
   const classified = xColumns.map((cellAt) => Array.from({ length: rowCount - firstData }, (_, k) => classifyCell(cellAt(k + firstData))));
   const categorical = classified.map(isCategoricalColumn);

@@ -19,6 +19,9 @@ export interface WeightedDesign {
   rootWeights: Float64Array | undefined;
 }
 
+/** Rows copied into the columns per block (see buildDesign). */
+const ROW_BLOCK = 256;
+
 export function buildDesign(
   y: readonly number[],
   x: readonly (readonly number[])[],
@@ -37,34 +40,44 @@ export function buildDesign(
   if (names !== undefined && names.length !== p) {
     throw new EngineError('shape', `${names.length} names were given for ${p} predictor columns.`);
   }
-  y.forEach((v, i) => {
-    if (!Number.isFinite(v)) throw new EngineError('non-finite', `y in row ${i + 1} is ${v}; every value must be a finite number.`);
-  });
-  x.forEach((row, i) =>
-    row.forEach((v, j) => {
-      if (!Number.isFinite(v)) {
-        throw new EngineError('non-finite', `x column ${j + 1} in row ${i + 1} is ${v}; every value must be a finite number.`);
-      }
-    }),
-  );
-  const rootWeights = weights === undefined ? undefined : rootsOfWeights(weights, n);
-
+  for (let i = 0; i < n; i++) {
+    if (!Number.isFinite(y[i])) throw new EngineError('non-finite', `y in row ${i + 1} is ${y[i]}; every value must be a finite number.`);
+  }
+  // Filled straight into the columns, a block of rows at a time: the block's row arrays stay in
+  // cache while each column's stretch is written in order.
   const q = p + (intercept ? 1 : 0);
   const data = new Float64Array(n * q);
-  const offset = intercept ? 1 : 0;
-  for (let i = 0; i < n; i++) {
-    const w = rootWeights === undefined ? 1 : rootWeights[i];
-    if (intercept) data[i] = w;
-    for (let j = 0; j < p; j++) data[(j + offset) * n + i] = x[i][j] * w;
+  const offset = intercept ? n : 0;
+  for (let from = 0; from < n; from += ROW_BLOCK) {
+    const to = Math.min(n, from + ROW_BLOCK);
+    for (let i = from; i < to; i++) {
+      const row = x[i];
+      for (let j = 0; j < p; j++) {
+        if (!Number.isFinite(row[j])) {
+          throw new EngineError('non-finite', `x column ${j + 1} in row ${i + 1} is ${row[j]}; every value must be a finite number.`);
+        }
+      }
+    }
+    for (let j = 0; j < p; j++) {
+      const base = offset + j * n;
+      for (let i = from; i < to; i++) data[base + i] = x[i][j];
+    }
   }
-  const yw = Float64Array.from(y, (v, i) => (rootWeights === undefined ? v : v * rootWeights[i]));
+  if (intercept) data.fill(1, 0, n);
+  const rootWeights = weights === undefined ? undefined : rootsOfWeights(weights, n);
+  const response = Float64Array.from(y);
+  let yw = response;
+  if (rootWeights !== undefined) {
+    for (let j = 0; j < q; j++) for (let i = 0; i < n; i++) data[j * n + i] *= rootWeights[i];
+    yw = Float64Array.from(response, (v, i) => v * rootWeights[i]);
+  }
   const predictorNames = names ?? Array.from({ length: p }, (_, j) => `x${j + 1}`);
   return {
     names: intercept ? [INTERCEPT_NAME, ...predictorNames] : [...predictorNames],
     hasIntercept: intercept,
     matrix: { rows: n, cols: q, data },
     y: yw,
-    response: Float64Array.from(y),
+    response,
     rootWeights,
   };
 }

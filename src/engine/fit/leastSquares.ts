@@ -1,9 +1,12 @@
 import { type ColumnMajorMatrix, columnView, stableNorm } from '../linalg/columnMajor';
-import { applyQ, applyQTranspose, householderQr, type QrFactorization } from '../linalg/householderQr';
+import { factorInPlace, type QrFactorization } from '../linalg/householderQr';
+import { subtractProduct } from '../linalg/rowTiles';
 import { invertUpper, solveUpper } from '../linalg/triangular';
 import { type ExtendedColumn, recognisePowers } from '../precise/exactPowers';
+import { extendedResidual } from '../precise/extendedResidual';
 import { preciseLeastSquares } from '../precise/preciseQr';
 import type { WeightedDesign } from './design';
+import { refineSolution } from './refinement';
 
 /**
  * A column whose part orthogonal to the earlier columns is below this fraction of its own norm
@@ -46,12 +49,13 @@ export interface LeastSquaresSolution {
 /**
  * Above this estimate of κ(R) double precision may lose more than three of its 16 digits in the
  * coefficients (forward error ≈ κ·u, Björck 1996 §2.4), and the estimates are recomputed in
- * double-double (see precise/preciseQr.ts).
+ * double-double (see precise/preciseQr.ts). Below it, iterative refinement (fit/refinement.ts)
+ * is tried first where the check fires; it hands over to double-double when it cannot converge.
  */
 export const PRECISE_CONDITION_THRESHOLD = 1e3;
 
 /**
- * The relative error allowed in σ̂ before the double-double path takes over: RSS comes from
+ * The relative error allowed in σ̂ before refinement (or, failing it, double-double) takes over: RSS comes from
  * Qᵀy, whose entries carry absolute errors near κ·u·‖y‖, so ‖r‖ is good to about κ·u·‖y‖/‖r‖.
  * That is large when the residuals are tiny beside y (a large level with little noise, NIST's
  * Norris and Pontius), and the coefficients that carry such a level lose as many digits.
@@ -63,12 +67,13 @@ const UNIT_ROUNDOFF = 2 ** -53;
 /** Whether double precision may fall short of 13 digits in the coefficients or σ̂. */
 export function needsExtendedPrecision(condition: number, scaledResidualNorm: number): boolean {
   if (condition > PRECISE_CONDITION_THRESHOLD) return true;
-  // An exact fit reports σ̂ = 0: there is no relative accuracy of σ̂ to protect.
-  if (scaledResidualNorm <= PERFECT_FIT_TOLERANCE) return false;
+  // An exact fit has σ̂ = 0 and standard errors of 0, so its coefficients are read as exact: they
+  // are refined to the last digit (a constant y must give its level exactly and a slope of 0).
+  if (scaledResidualNorm <= PERFECT_FIT_TOLERANCE) return true;
   return UNIT_ROUNDOFF * condition > RESIDUAL_ACCURACY_TARGET * scaledResidualNorm;
 }
 
-/** 'double' skips the check and the extended-precision path, for measuring what they cost. */
+/** 'double' skips the check, refinement and the double-double path, for measuring what they cost. */
 export type Precision = 'auto' | 'double';
 
 /**
@@ -90,63 +95,80 @@ export function solveLeastSquares(design: WeightedDesign, precision: Precision =
   const { matrix, y } = design;
   const n = matrix.rows;
   const columnScales = new Float64Array(matrix.cols);
-  const scaled: ColumnMajorMatrix = { rows: n, cols: matrix.cols, data: new Float64Array(matrix.data.length) };
-  for (let j = 0; j < matrix.cols; j++) {
+  // The scaled copy, with y/yScale carried as a last column, is the factorization's working
+  // storage and then holds its reflectors; the carried column comes out as Qᵀy/yScale.
+  const q = matrix.cols;
+  const scaled: ColumnMajorMatrix = { rows: n, cols: q + 1, data: new Float64Array(n * (q + 1)) };
+  for (let j = 0; j < q; j++) {
     const col = columnView(matrix, j);
-    const s = stableNorm(col);
+    const s = columnNorm(col);
     columnScales[j] = s > 0 ? s : 1;
     const target = columnView(scaled, j);
-    for (let i = 0; i < n; i++) target[i] = col[i] / columnScales[j];
+    const scale = columnScales[j];
+    for (let i = 0; i < n; i++) target[i] = col[i] / scale;
   }
-  const yNorm = stableNorm(y);
+  const yNorm = columnNorm(y);
   const yScale = yNorm > 0 ? yNorm : 1;
+  const qty = columnView(scaled, q);
+  for (let i = 0; i < n; i++) qty[i] = y[i] / yScale;
 
-  const qr = householderQr(scaled, aliasTolerance(n));
+  const qr = factorInPlace(scaled, aliasTolerance(n), 1);
   const rank = qr.accepted.length;
-  const qty = Float64Array.from(y, (v) => v / yScale);
-  applyQTranspose(qr, qty);
 
   const solution = qty.slice(0, rank);
   solveUpper(qr.r, rank, solution);
-  const coefficients = new Float64Array(matrix.cols).fill(Number.NaN);
-  qr.accepted.forEach((col, a) => {
-    coefficients[col] = (solution[a] * yScale) / columnScales[col];
-  });
+  let accepted: Float64Array = Float64Array.from(qr.accepted, (col, a) => (solution[a] * yScale) / columnScales[col]);
 
   let scaledRss = 0;
   for (let i = rank; i < n; i++) scaledRss += qty[i] * qty[i];
   let r = qr.r;
   let rInverse = invertUpper(qr.r, rank);
-  if (precision === 'auto' && needsExtendedPrecision(frobeniusCondition(qr.r, rInverse, rank), Math.sqrt(scaledRss))) {
-    // The double QR's reflectors stay in use for residuals and diagnostics: they are accurate
-    // to double precision in what they produce (Qᵀ applied to vectors), unlike the solve.
-    const precise = preciseLeastSquares(
-      extendedColumns(design, qr.accepted),
-      qr.accepted.map((col) => columnScales[col]),
-      y,
-      yScale,
-    );
-    qr.accepted.forEach((col, a) => {
-      coefficients[col] = precise.coefficients[a];
-    });
-    r = precise.r;
-    rInverse = precise.rInverse;
-    scaledRss = precise.scaledRss;
+  // √w(y − Xb)/residualUnit, when the refinement has formed it already (in yScale units).
+  let weightedResidual: Float64Array | undefined;
+  let residualUnit = 1;
+  let extended = false;
+  const condition = frobeniusCondition(qr.r, rInverse, rank);
+  if (precision === 'auto' && needsExtendedPrecision(condition, Math.sqrt(scaledRss))) {
+    const refined = condition <= PRECISE_CONDITION_THRESHOLD ? refineSolution(design, qr.accepted, qr.r, columnScales, yScale, accepted) : undefined;
+    if (refined !== undefined) {
+      accepted = refined.coefficients;
+      scaledRss = refined.scaledRss;
+      weightedResidual = refined.scaledResidual;
+      residualUnit = yScale;
+    } else {
+      // The double QR's reflectors stay in use for diagnostics: they are accurate to double
+      // precision in what they produce (Qᵀ applied to vectors), unlike the solve.
+      const precise = preciseLeastSquares(
+        extendedColumns(design, qr.accepted),
+        qr.accepted.map((col) => columnScales[col]),
+        y,
+        yScale,
+      );
+      accepted = precise.coefficients;
+      r = precise.r;
+      rInverse = precise.rInverse;
+      scaledRss = precise.scaledRss;
+      extended = true;
+    }
   }
   const perfectFit = Math.sqrt(scaledRss) <= PERFECT_FIT_TOLERANCE;
+  const coefficients = new Float64Array(matrix.cols).fill(Number.NaN);
+  qr.accepted.forEach((col, a) => {
+    // In an exact fit every standard error is 0, so a coefficient that moves the fit by less than
+    // the rounding the fit is judged exact by is 0, not a tiny number read as "clear of zero".
+    const negligible = perfectFit && Math.abs(accepted[a]) * columnScales[col] <= PERFECT_FIT_TOLERANCE * yScale;
+    coefficients[col] = negligible ? 0 : accepted[a];
+  });
   if (perfectFit) scaledRss = 0;
 
-  const residualPart = new Float64Array(n);
-  if (!perfectFit) for (let i = rank; i < n; i++) residualPart[i] = qty[i];
-  applyQ(qr, residualPart);
   const residuals = new Float64Array(n);
   const fitted = new Float64Array(n);
-  for (let i = 0; i < n; i++) {
-    const w = design.rootWeights === undefined ? 1 : design.rootWeights[i];
-    residuals[i] = (residualPart[i] * yScale) / w;
-    fitted[i] = design.response[i] - residuals[i];
+  if (!perfectFit) {
+    weightedResidual ??= directResidual(design, qr.accepted, accepted, extended);
+    const roots = design.rootWeights;
+    for (let i = 0; i < n; i++) residuals[i] = roots === undefined ? weightedResidual[i] * residualUnit : (weightedResidual[i] * residualUnit) / roots[i];
   }
-  if (!perfectFit) recomputeLeadingResiduals(design, qr.accepted, coefficients, residuals, fitted);
+  for (let i = 0; i < n; i++) fitted[i] = design.response[i] - residuals[i];
 
   return {
     design,
@@ -163,6 +185,16 @@ export function solveLeastSquares(design: WeightedDesign, precision: Precision =
 }
 
 /**
+ * ‖x‖ by the plain sum of squares where that is safe (one pass), by stableNorm where squares
+ * could overflow or underflow (data beyond about 1e±140).
+ */
+function columnNorm(x: Float64Array): number {
+  let sum = 0;
+  for (let i = 0; i < x.length; i++) sum += x[i] * x[i];
+  return sum > 1e-280 && sum < 1e280 ? Math.sqrt(sum) : stableNorm(x);
+}
+
+/**
  * The accepted columns for the double-double solve: those of an unweighted design that are
  * powers of another column are taken as the exact powers (see exactPowers.ts). A weighted
  * design's columns already carry the rounding of √w, so they are used as they stand.
@@ -175,25 +207,19 @@ function extendedColumns(design: WeightedDesign, accepted: readonly number[]): (
 }
 
 /**
- * Q·(0, Qᵀy tail) gives residuals accurate to about u·‖y‖ absolute in every row but the first
- * `rank`, where each reflector's leading entry meets the column's whole norm: on a million rows
- * those residuals were off by 5e-10 against 6e-13 elsewhere. They are formed directly instead,
- * y − x·b, whose error does not grow with the number of rows.
+ * √w(y − X·b) formed row by row, in double-double after a double-double solve (so the
+ * residuals keep the solve's accuracy) and in double otherwise. Forming it directly keeps every
+ * row as accurate as the others: Q·(0, Qᵀy tail) left the first `rank` rows, where each
+ * reflector's leading entry meets the column's whole norm, off by 5e-10 against 6e-13 elsewhere
+ * on a million rows.
  */
-function recomputeLeadingResiduals(
-  design: WeightedDesign,
-  accepted: readonly number[],
-  coefficients: Float64Array,
-  residuals: Float64Array,
-  fitted: Float64Array,
-): void {
-  const { matrix, y } = design;
-  const n = matrix.rows;
-  for (let i = 0; i < Math.min(accepted.length, n); i++) {
-    let prediction = 0;
-    for (const col of accepted) prediction += matrix.data[col * n + i] * coefficients[col];
-    const w = design.rootWeights === undefined ? 1 : design.rootWeights[i];
-    residuals[i] = (y[i] - prediction) / w;
-    fitted[i] = design.response[i] - residuals[i];
+function directResidual(design: WeightedDesign, accepted: readonly number[], coefficients: Float64Array, extended: boolean): Float64Array {
+  if (extended) {
+    const residual = new Float64Array(design.matrix.rows);
+    extendedResidual(design.matrix, accepted, coefficients, design.y, 1, residual);
+    return residual;
   }
+  const residual = Float64Array.from(design.y);
+  subtractProduct(design.matrix, accepted, coefficients, residual);
+  return residual;
 }

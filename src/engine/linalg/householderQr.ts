@@ -1,5 +1,5 @@
 import { type ColumnMajorMatrix, columnView, stableNorm } from './columnMajor';
-import { reflectFourColumns } from './reflectFourColumns';
+import { BLOCK_SIZE, ReflectorBlock } from './reflectorBlock';
 
 /**
  * Householder QR of a matrix whose columns have unit norm, taken column by column in input
@@ -21,51 +21,89 @@ export interface QrFactorization {
 }
 
 export function householderQr(scaled: ColumnMajorMatrix, aliasTolerance: number): QrFactorization {
-  const n = scaled.rows;
-  const work = new Float64Array(scaled.data);
-  const m: ColumnMajorMatrix = { rows: n, cols: scaled.cols, data: work };
+  return factorInPlace({ rows: scaled.rows, cols: scaled.cols, data: new Float64Array(scaled.data) }, aliasTolerance);
+}
+
+/**
+ * householderQr on `m` itself, whose storage becomes the reflectors': column j of an accepted
+ * column holds its reflector (zeros above row k, 1 at row k), and the QR keeps views of those
+ * columns rather than copies. R's entries are taken out as each column is finished. Aliased
+ * columns are left holding partial work and are not part of the result.
+ *
+ * The last `carried` columns are not factored but have every reflector applied as it is made:
+ * a response carried along this way comes out as Qᵀy at no extra pass over the reflectors.
+ */
+export function factorInPlace(m: ColumnMajorMatrix, aliasTolerance: number, carried = 0): QrFactorization {
+  const n = m.rows;
+  const factored = m.cols - carried;
+  const work = m.data;
   const accepted: number[] = [];
-  const aliased: boolean[] = new Array<boolean>(scaled.cols).fill(false);
+  const aliased: boolean[] = new Array<boolean>(factored).fill(false);
   const reflectors: Float64Array[] = [];
   const tauList: number[] = [];
+  const rColumns: Float64Array[] = [];
 
-  for (let j = 0; j < scaled.cols; j++) {
+  // Left-looking within a block, right-looking across blocks: each column first receives the
+  // reflectors still pending, and a full block is then applied to every later column at once.
+  const block = new ReflectorBlock(work, n);
+  for (let j = 0; j < factored; j++) {
     const k = accepted.length;
     const col = columnView(m, j);
-    const remaining = k < n ? stableNorm(col, k) : 0;
+    const remaining = k < n ? normOf(block.prepareColumn(j, k), col, k) : 0;
     if (!(remaining > aliasTolerance)) {
       aliased[j] = true;
       continue;
     }
-    const { v, tau, beta } = makeReflector(col, k, remaining);
-    col[k] = beta;
-    for (let i = k + 1; i < n; i++) col[i] = 0;
-    let c = j + 1;
-    for (; c + 3 < scaled.cols; c += 4) reflectFourColumns(v, k, work, c * n + k, n, n - k, tau);
-    for (; c < scaled.cols; c++) applyReflector(v, tau, k, columnView(m, c));
+    const rColumn = col.slice(0, k + 1);
+    const alpha = col[k];
+    const tau = reflectInPlace(col, k, remaining);
+    rColumn[k] = col[k];
+    // The same 1/(α − β) that reflectInPlace scaled by.
+    const inverse = 1 / (alpha - col[k]);
+    col[k] = 1;
+    block.add(j * n, k, tau, inverse);
+    if (block.size === BLOCK_SIZE) {
+      block.applyTo(j + 1, m.cols - j - 1);
+      block.clear();
+    }
     accepted.push(j);
-    reflectors.push(v);
+    reflectors.push(col);
     tauList.push(tau);
+    rColumns.push(rColumn);
   }
+  // What is still pending reaches the carried columns; the factored ones have had it already.
+  block.applyTo(factored, carried);
 
   const rank = accepted.length;
   const r = new Float64Array(rank * rank);
   for (let a = 0; a < rank; a++) {
-    const col = columnView(m, accepted[a]);
-    for (let i = 0; i <= a; i++) r[i * rank + a] = col[i];
+    for (let i = 0; i <= a; i++) r[i * rank + a] = rColumns[a][i];
   }
   return { rows: n, accepted, aliased, r, reflectors, taus: Float64Array.from(tauList) };
 }
 
-/** LAPACK-style reflector H = I − τ v vᵀ with v_k = 1, mapping x[k..] to (β, 0, …, 0). */
-function makeReflector(x: Float64Array, k: number, norm: number): { v: Float64Array; tau: number; beta: number } {
+/**
+ * ‖x[k..]‖ from its sum of squares, for a column of the unit-norm-scaled working matrix: its
+ * entries are at most 1, so the sum cannot overflow, and it can only underflow for a remainder far
+ * below any alias tolerance; stableNorm takes over in that case.
+ */
+function normOf(squares: number, x: Float64Array, k: number): number {
+  const norm = Math.sqrt(squares);
+  return norm > 1e-140 && norm < 1e140 ? norm : stableNorm(x, k);
+}
+
+/**
+ * Overwrites x with the LAPACK-style reflector H = I − τ v vᵀ (v_k = 1, zeros above k) that maps
+ * x[k..] to (β, 0, …, 0); β is left in x[k] and τ returned.
+ */
+function reflectInPlace(x: Float64Array, k: number, norm: number): number {
   const alpha = x[k];
   const beta = alpha >= 0 ? -norm : norm;
-  const v = new Float64Array(x.length);
   const inv = 1 / (alpha - beta);
-  v[k] = 1;
-  for (let i = k + 1; i < x.length; i++) v[i] = x[i] * inv;
-  return { v, tau: (beta - alpha) / beta, beta };
+  for (let i = 0; i < k; i++) x[i] = 0;
+  for (let i = k + 1; i < x.length; i++) x[i] *= inv;
+  x[k] = beta;
+  return (beta - alpha) / beta;
 }
 
 function applyReflector(v: Float64Array, tau: number, k: number, target: Float64Array): void {

@@ -1,5 +1,5 @@
 /**
- * How cell contents cross the API boundary: what `values`, `formulas` and `valueTypes` read,
+ * How cell contents cross the API boundary: what `values` and `formulas` read,
  * and how a written value becomes a model input, following Excel's treatment of written strings.
  */
 import type { CellInput, CellValue } from '../workbook/types';
@@ -20,14 +20,6 @@ export function apiValue(value: CellValue): ApiCellValue {
 /** Formula text for formula cells, the constant otherwise, "" for a blank. */
 export function apiFormula(input: CellInput): ApiCellValue {
   return input === null ? '' : input;
-}
-
-export function valueType(value: CellValue): string {
-  if (value === null || value === '') return 'Empty';
-  if (isCellError(value)) return 'Error';
-  if (typeof value === 'number') return 'Double';
-  if (typeof value === 'boolean') return 'Boolean';
-  return 'String';
 }
 
 /** A written null leaves the cell as it is, as in Office.js. */

@@ -1,4 +1,4 @@
-/** Excel.Chart: a chart on a worksheet, its name, position in points, texts and series. */
+/** Excel.Chart: a chart on a worksheet, its name, its place over the cells, texts and series. */
 import { parseRange } from '../../addressing/a1';
 import { columnLeft, ROW_HEIGHT } from '../workbook/layout';
 import type { ChartBounds, RangeRef } from '../workbook/types';
@@ -11,18 +11,13 @@ import { ShimRange } from './range';
 import { rangeRefOf } from './rangeRef';
 import type { ShimRequestContext } from './requestContext';
 import { refuseMembers } from './unsupported';
-import { ShimWorksheet } from './worksheet';
-
-const CHART_SCALARS = ['chartType', 'height', 'id', 'left', 'name', 'top', 'width'] as const;
-type Side = 'left' | 'top' | 'width' | 'height';
 
 export class ShimChart extends ShimClientObject<ChartTarget> {
   protected readonly typeName = 'Chart';
-  protected readonly scalarNames: readonly string[] = CHART_SCALARS;
+  protected readonly scalarNames: readonly string[] = ['name'];
   readonly title: ShimChartTitle;
   readonly axes: ShimChartAxes;
   readonly series: ShimChartSeriesCollection;
-  private worksheetProxy: ShimWorksheet | undefined;
 
   /** `location` undefined: the chart is already known (collection items), nothing to queue. */
   constructor(
@@ -51,8 +46,6 @@ export class ShimChart extends ShimClientObject<ChartTarget> {
         return this.axes;
       case 'series':
         return this.series;
-      case 'worksheet':
-        return this.worksheet;
       default:
         return undefined;
     }
@@ -60,34 +53,8 @@ export class ShimChart extends ShimClientObject<ChartTarget> {
 
   protected readScalar(name: string, target: ChartTarget): unknown {
     const location = `Chart.${name}`;
-    const { chart } = liveChart(this.context, target, location);
-    switch (name) {
-      case 'chartType':
-        return chart.type;
-      case 'id':
-        return chart.id;
-      case 'name':
-        return chart.name;
-      case 'left':
-      case 'top':
-      case 'width':
-      case 'height':
-        return chart.bounds[name];
-      default:
-        throw invalidArgument(location);
-    }
-  }
-
-  get worksheet(): ShimWorksheet {
-    this.worksheetProxy ??= new ShimWorksheet(this.context, () => this.target('Chart.worksheet').sheet, 'Chart.worksheet');
-    return this.worksheetProxy;
-  }
-
-  get chartType(): string {
-    return this.loadedValue('chartType');
-  }
-  get id(): string {
-    return this.loadedValue('id');
+    if (name !== 'name') throw invalidArgument(location);
+    return liveChart(this.context, target, location).chart.name;
   }
 
   get name(): string {
@@ -97,38 +64,6 @@ export class ShimChart extends ShimClientObject<ChartTarget> {
     this.queueWrite('name', name, (target, location) => {
       if (typeof name !== 'string' || name.trim() === '') throw invalidArgument(location);
       changeChart(this.context, target, location, () => ({ name }));
-    });
-  }
-
-  get left(): number {
-    return this.loadedValue('left');
-  }
-  set left(points: number) {
-    this.writeSide('left', points);
-  }
-  get top(): number {
-    return this.loadedValue('top');
-  }
-  set top(points: number) {
-    this.writeSide('top', points);
-  }
-  get width(): number {
-    return this.loadedValue('width');
-  }
-  set width(points: number) {
-    this.writeSide('width', points);
-  }
-  get height(): number {
-    return this.loadedValue('height');
-  }
-  set height(points: number) {
-    this.writeSide('height', points);
-  }
-
-  private writeSide(side: Side, points: number): void {
-    this.queueWrite(side, points, (target, location) => {
-      if (typeof points !== 'number' || !Number.isFinite(points) || points < 0) throw invalidArgument(location);
-      changeChart(this.context, target, location, (chart) => ({ bounds: { ...chart.bounds, [side]: points } }));
     });
   }
 
@@ -161,13 +96,22 @@ export class ShimChart extends ShimClientObject<ChartTarget> {
     if (ref === undefined || ref.sheet.toLowerCase() !== sheet.toLowerCase()) throw invalidArgument(location);
     return ref;
   }
-
-  delete(): void {
-    const location = 'Chart.delete';
-    this.context.enqueue(location, () => {
-      const { sheet, chart } = liveChart(this.context, this.target(location), location);
-      this.context.model.removeChart(sheet, chart.id);
-    });
-  }
 }
-refuseMembers(ShimChart.prototype, 'Chart', ['legend', 'dataLabels', 'format', 'plotArea', 'style', 'setData', 'getImage', 'activate']);
+refuseMembers(ShimChart.prototype, 'Chart', [
+  'legend',
+  'dataLabels',
+  'format',
+  'plotArea',
+  'style',
+  'setData',
+  'getImage',
+  'activate',
+  'delete',
+  'chartType',
+  'id',
+  'left',
+  'top',
+  'width',
+  'height',
+  'worksheet',
+]);

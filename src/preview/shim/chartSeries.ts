@@ -2,11 +2,11 @@
 import { seriesName } from '../workbook/chartData';
 import type { ChartSeriesSource, RangeRef, SeriesChartType } from '../workbook/types';
 import { ChartType } from './chartEnums';
-import { ShimClientObject, ShimClientResult } from './clientObject';
+import { ShimClientObject } from './clientObject';
 import { changeChart, liveChart, type ChartTarget } from './chartTarget';
 import { splitCollectionLoad } from './collectionLoad';
 import type { LoadSpec } from './loadOptions';
-import { invalidArgument, itemNotFound } from './officeErrors';
+import { invalidArgument, itemNotFound, notInPreview } from './officeErrors';
 import { ShimRange } from './range';
 import { rangeRefOf } from './rangeRef';
 import type { ShimRequestContext } from './requestContext';
@@ -60,15 +60,13 @@ export class ShimChartSeries extends ShimClientObject<SeriesTarget> {
   /**
    * "Excel.ChartSeries" chartType (ExcelApi 1.7): one series of a chart drawn as another type.
    * The preview draws only scatter points and straight lines without markers; any other type
-   * Excel knows is refused with InvalidArgument and a note, one it does not know plainly so.
+   * is refused with InvalidArgument and a note saying so.
    */
   set chartType(type: string) {
     this.queueWrite('chartType', type, (_target, location) => {
       if (!isSeriesChartType(type)) {
         const error = invalidArgument(location);
-        if ((Object.values(ChartType) as string[]).includes(type)) {
-          error.debugInfo.message = `${error.message} (preview: a series can be XYScatter or XYScatterLinesNoMarkers only)`;
-        }
+        error.debugInfo.message = `${error.message} (preview: a series can be XYScatter or XYScatterLinesNoMarkers only)`;
         throw error;
       }
       this.change(location, (s) => ({ ...s, chartType: type }));
@@ -78,11 +76,9 @@ export class ShimChartSeries extends ShimClientObject<SeriesTarget> {
   get name(): string {
     return this.loadedValue('name');
   }
-  set name(name: string) {
-    this.queueWrite('name', name, (_target, location) => {
-      if (typeof name !== 'string') throw invalidArgument(location);
-      this.change(location, (s) => ({ ...s, name }));
-    });
+  /** The add-in names series as it adds them, so renaming one is refused rather than modelled. */
+  set name(_name: string) {
+    throw notInPreview('ChartSeries.name (setting it)');
   }
 
   /** A one-row or one-column range; the chart keeps reading it, so later edits show. */
@@ -174,30 +170,6 @@ export class ShimChartSeriesCollection extends ShimClientObject<ChartTarget> {
 
   get count(): number {
     return this.loadedValue('count');
-  }
-
-  getCount(): ShimClientResult<number> {
-    const result = new ShimClientResult<number>();
-    const location = 'ChartSeriesCollection.getCount';
-    this.context.enqueue(location, () => result.settle(liveChart(this.context, this.target(location), location).chart.series.length));
-    return result;
-  }
-
-  // Whether Excel reports an index past the end as ItemNotFound or InvalidArgument is not
-  // checked against a live host; ItemNotFound says what happened.
-  getItemAt(index: number): ShimChartSeries {
-    const location = 'ChartSeriesCollection.getItemAt';
-    return new ShimChartSeries(
-      this.context,
-      () => {
-        const chart = this.target(location);
-        const count = liveChart(this.context, chart, location).chart.series.length;
-        if (!Number.isInteger(index) || index < 0) throw invalidArgument(location);
-        if (index >= count) throw itemNotFound(location);
-        return { chart, index };
-      },
-      location,
-    );
   }
 
   /**

@@ -6,8 +6,8 @@ import { columnLeft, ROW_HEIGHT } from '../workbook/layout';
 import type { ChartBounds, RangeRef } from '../workbook/types';
 import { ShimChart } from './chart';
 import type { ChartTarget } from './chartTarget';
-import { SERIES_BY, seriesFromSource, type SeriesBy } from './chartSource';
-import { ShimClientObject, ShimClientResult } from './clientObject';
+import { seriesFromColumns } from './chartSource';
+import { ShimClientObject } from './clientObject';
 import { splitCollectionLoad } from './collectionLoad';
 import type { LoadSpec } from './loadOptions';
 import { invalidArgument, itemNotFound, type OfficeExtensionError } from './officeErrors';
@@ -23,7 +23,7 @@ const NEW_CHART_HEIGHT = 216;
 
 export class ShimChartCollection extends ShimClientObject<SheetHandle> {
   protected readonly typeName = 'ChartCollection';
-  protected readonly scalarNames: readonly string[] = ['count'];
+  protected readonly scalarNames: readonly string[] = [];
   private loadedItems: ShimChart[] | undefined;
 
   constructor(
@@ -42,14 +42,11 @@ export class ShimChartCollection extends ShimClientObject<SheetHandle> {
   }
 
   protected readScalar(name: string): unknown {
-    const location = `ChartCollection.${name}`;
-    if (name !== 'count') throw invalidArgument(location);
-    return this.context.model.charts(this.sheetName(location)).length;
+    throw invalidArgument(`ChartCollection.${name}`);
   }
 
   override applyLoad(spec: LoadSpec): void {
-    const { scalars, items } = splitCollectionLoad(spec, this.scalarNames);
-    if (scalars.length > 0) super.applyLoad({ all: false, members: new Map(scalars.map((s) => [s, { all: true }])) });
+    const { items } = splitCollectionLoad(spec, this.scalarNames);
     if (items === undefined) return;
     const sheet = this.target('ChartCollection.items');
     const charts = this.context.model.charts(this.sheetName('ChartCollection.items'));
@@ -59,17 +56,6 @@ export class ShimChartCollection extends ShimClientObject<SheetHandle> {
 
   get items(): ShimChart[] {
     return this.loadedItems ?? this.loadedValue('items');
-  }
-
-  get count(): number {
-    return this.loadedValue('count');
-  }
-
-  getCount(): ShimClientResult<number> {
-    const result = new ShimClientResult<number>();
-    const location = 'ChartCollection.getCount';
-    this.context.enqueue(location, () => result.settle(this.context.model.charts(this.sheetName(location)).length));
-    return result;
   }
 
   /** The first chart of that name, matched without regard to case as Excel matches names. */
@@ -90,21 +76,6 @@ export class ShimChartCollection extends ShimClientObject<SheetHandle> {
     return new ShimChart(this.context, () => this.find(name, location), location);
   }
 
-  getItemAt(index: number): ShimChart {
-    const location = 'ChartCollection.getItemAt';
-    return new ShimChart(
-      this.context,
-      () => {
-        const sheet = this.target(location);
-        const charts = this.context.model.charts(this.sheetName(location));
-        if (!Number.isInteger(index) || index < 0) throw invalidArgument(location);
-        if (index >= charts.length) throw itemNotFound(location);
-        return { sheet, id: charts[index].id };
-      },
-      location,
-    );
-  }
-
   /**
    * Made when the batch reaches it, reading its series from the source as Excel lays them out.
    * Excel places a new chart in the middle of the window; the preview has no window to centre
@@ -118,13 +89,12 @@ export class ShimChartCollection extends ShimClientObject<SheetHandle> {
         const sheet = this.target(location);
         const sheetName = this.sheetName(location);
         if (type !== 'XYScatter' || !(sourceData instanceof ShimRange)) throw invalidArgument(location);
-        if (seriesBy === undefined || seriesBy === 'Auto') throw autoLayoutRefused(location);
-        if (!isSeriesBy(seriesBy)) throw invalidArgument(location);
+        if (seriesBy !== 'Columns') throw onlyColumns(location, seriesBy);
         const source = rangeRefOf(this.context, sourceData.target(location), location);
         const chart = this.context.model.addChart(sheetName, {
           type: 'XYScatter',
           title: null,
-          series: seriesFromSource(source, seriesBy),
+          series: seriesFromColumns(source),
           axisTitles: { category: '', value: '' },
           axisScales: { category: AUTOMATIC_SCALE, value: AUTOMATIC_SCALE },
           bounds: this.besideData(sheetName, source),
@@ -141,15 +111,15 @@ export class ShimChartCollection extends ShimClientObject<SheetHandle> {
   }
 }
 
-/** Auto lays series out differently on desktop and on the web (Excel.ChartSeriesBy), so the preview asks for Columns or Rows. */
-function autoLayoutRefused(location: string): OfficeExtensionError {
+/**
+ * Auto lays series out differently on desktop and on the web (Excel.ChartSeriesBy), and the
+ * add-in only ever asks for columns, so the preview models that alone.
+ */
+function onlyColumns(location: string, seriesBy: string | undefined): OfficeExtensionError {
   const error = invalidArgument(location);
-  error.debugInfo.message = `${error.message} (preview: pass Excel.ChartSeriesBy.columns or rows; "auto" differs between Excel on the web and on desktop)`;
+  const why = seriesBy === undefined || seriesBy === 'Auto' ? '; "auto" differs between Excel on the web and on desktop' : '';
+  error.debugInfo.message = `${error.message} (preview: pass Excel.ChartSeriesBy.columns${why})`;
   return error;
-}
-
-function isSeriesBy(value: string): value is SeriesBy {
-  return (SERIES_BY as readonly string[]).includes(value);
 }
 
 function throwError(error: Error): never {

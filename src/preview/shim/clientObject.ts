@@ -3,7 +3,7 @@
  * loaded and synced, and writes that are remembered locally at once and applied at sync.
  */
 import { parseLoadOption, type LoadSpec } from './loadOptions';
-import { itemNotFound, notInPreview, propertyNotLoaded, valueNotLoaded } from './officeErrors';
+import { itemNotFound, notInPreview, propertyNotLoaded } from './officeErrors';
 import type { ShimRequestContext } from './requestContext';
 
 /** Anything `load()` can reach through a navigation property such as 'worksheet/name'. */
@@ -87,32 +87,5 @@ export abstract class ShimClientObject<Target> implements Loadable {
     this.loadedValues.set(name, value);
     const location = `${this.typeName}.${name}`;
     this.context.enqueue(location, () => apply(this.target(location), location), value);
-  }
-
-  /** Proxies here never go stale, so tracking has nothing to do; kept for code that calls it. */
-  track(): this {
-    return this;
-  }
-
-  untrack(): this {
-    return this;
-  }
-
-  toJSON(): Record<string, unknown> {
-    return Object.fromEntries(this.loadedValues);
-  }
-}
-
-/** OfficeExtension.ClientResult: a method's primitive result, readable after the sync. */
-export class ShimClientResult<T> {
-  private state: { value: T } | undefined;
-
-  get value(): T {
-    if (!this.state) throw valueNotLoaded();
-    return this.state.value;
-  }
-
-  settle(value: T): void {
-    this.state = { value };
   }
 }

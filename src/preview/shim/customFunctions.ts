@@ -13,19 +13,13 @@ function isCustomFunction(value: unknown): value is CustomFunction {
 
 /** Ids are matched without regard to case, as Excel does; the model keys them in upper case. */
 export function createAssociate(model: WorkbookModel, host: FunctionRegistrationHost | undefined) {
-  const register = (id: string, fn: unknown): void => {
+  // The build's generated code calls associate(id, fn) once per function; the mappings form is unused.
+  return function associate(id: string, fn: unknown): void {
     if (typeof id !== 'string' || id === '' || !isCustomFunction(fn)) {
       throw new TypeError(`CustomFunctions.associate needs an id and a function; got ${typeof id} and ${typeof fn}.`);
     }
     const upper = id.toUpperCase();
     model.registerFunction(upper, fn);
     host?.onFunctionRegistered?.(upper);
-  };
-  return function associate(idOrMappings: string | Record<string, unknown>, fn?: unknown): void {
-    if (typeof idOrMappings === 'string') {
-      register(idOrMappings, fn);
-      return;
-    }
-    for (const [id, mapped] of Object.entries(idOrMappings)) register(id, mapped);
   };
 }

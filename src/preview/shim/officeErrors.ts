@@ -27,43 +27,6 @@ export class OfficeExtensionError extends Error {
   }
 }
 
-/** The string values of Excel.ErrorCodes that the shim can raise, plus the rest for lookups. */
-export const ExcelErrorCodes = {
-  accessDenied: 'AccessDenied',
-  apiNotFound: 'ApiNotFound',
-  conflict: 'Conflict',
-  generalException: 'GeneralException',
-  insertDeleteConflict: 'InsertDeleteConflict',
-  invalidArgument: 'InvalidArgument',
-  invalidBinding: 'InvalidBinding',
-  invalidOperation: 'InvalidOperation',
-  invalidReference: 'InvalidReference',
-  invalidOperationInCellEditMode: 'InvalidOperationInCellEditMode',
-  invalidSelection: 'InvalidSelection',
-  itemAlreadyExists: 'ItemAlreadyExists',
-  itemNotFound: 'ItemNotFound',
-  notImplemented: 'NotImplemented',
-  requestPayloadSizeLimitExceeded: 'RequestPayloadSizeLimitExceeded',
-  responsePayloadSizeLimitExceeded: 'ResponsePayloadSizeLimitExceeded',
-  unsupportedOperation: 'UnsupportedOperation',
-} as const;
-
-/** OfficeExtension.ErrorCodes: the client-side codes. */
-export const OfficeExtensionErrorCodes = {
-  accessDenied: 'AccessDenied',
-  generalException: 'GeneralException',
-  activityLimitReached: 'ActivityLimitReached',
-  invalidObjectPath: 'InvalidObjectPath',
-  propertyNotLoaded: 'PropertyNotLoaded',
-  valueNotLoaded: 'ValueNotLoaded',
-  invalidRequestContext: 'InvalidRequestContext',
-  invalidArgument: 'InvalidArgument',
-  runMustReturnPromise: 'RunMustReturnPromise',
-  cannotRegisterEvent: 'CannotRegisterEvent',
-  apiNotFound: 'ApiNotFound',
-  connectionFailure: 'ConnectionFailure',
-} as const;
-
 export function itemNotFound(location: string): OfficeExtensionError {
   return new OfficeExtensionError('ItemNotFound', "The requested resource doesn't exist.", location, 404);
 }
@@ -127,14 +90,5 @@ export function propertyNotLoaded(property: string, typeName: string): OfficeExt
     'PropertyNotLoaded',
     `The property '${property}' is not available. Before reading the property's value, call the load method on the containing object and call "context.sync()" on the associated request context.`,
     `${typeName}.${property}`,
-  );
-}
-
-// Message from memory, not checked against a live host.
-export function valueNotLoaded(): OfficeExtensionError {
-  return new OfficeExtensionError(
-    'ValueNotLoaded',
-    'The value of the result object has not been loaded yet. Before reading the value property, call "context.sync()" on the associated request context.',
-    'ClientResult.value',
   );
 }

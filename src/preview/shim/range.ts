@@ -4,13 +4,12 @@
  */
 import type { CellInput, RangeRef } from '../workbook/types';
 import { formatRange, MAX_COLUMNS, MAX_ROWS } from '../../addressing/a1';
-import { cellText } from './cellText';
-import { apiFormula, apiValue, inputFromWrite, KEEP, valueType } from './cellValues';
+import { apiFormula, apiValue, inputFromWrite, KEEP } from './cellValues';
 import { ShimClientObject, type Loadable } from './clientObject';
 import { invalidArgument } from './officeErrors';
 import { ShimRangeFormat } from './rangeFormat';
 import type { SheetHandle, ShimRequestContext } from './requestContext';
-import { ShimWorksheet } from './worksheet';
+import { refuseMembers } from './unsupported';
 
 export interface RangeTarget {
   sheet: SheetHandle;
@@ -20,20 +19,7 @@ export interface RangeTarget {
   right: number;
 }
 
-const RANGE_SCALARS = [
-  'address',
-  'addressLocal',
-  'cellCount',
-  'columnCount',
-  'columnIndex',
-  'formulas',
-  'numberFormat',
-  'rowCount',
-  'rowIndex',
-  'text',
-  'values',
-  'valueTypes',
-] as const;
+const RANGE_SCALARS = ['address', 'columnCount', 'columnIndex', 'formulas', 'numberFormat', 'rowCount', 'rowIndex', 'values'] as const;
 
 /** True when the rectangle lies inside Excel's grid and is not inverted. */
 export function insideGrid(top: number, left: number, bottom: number, right: number): boolean {
@@ -74,7 +60,6 @@ function checkShape(value: unknown, target: RangeTarget, location: string): unkn
 export class ShimRange extends ShimClientObject<RangeTarget> {
   protected readonly typeName = 'Range';
   protected readonly scalarNames: readonly string[] = RANGE_SCALARS;
-  private worksheetProxy: ShimWorksheet | undefined;
   private formatProxy: ShimRangeFormat | undefined;
 
   /** `location` undefined: the target is already known (collection items), nothing to queue. */
@@ -93,9 +78,7 @@ export class ShimRange extends ShimClientObject<RangeTarget> {
   }
 
   protected override navigation(name: string): Loadable | undefined {
-    if (name === 'worksheet') return this.worksheet;
-    if (name === 'format') return this.format;
-    return undefined;
+    return name === 'format' ? this.format : undefined;
   }
 
   private ref(target: RangeTarget, location: string): RangeRef {
@@ -109,10 +92,7 @@ export class ShimRange extends ShimClientObject<RangeTarget> {
     const at = (row: number, column: number) => ({ sheet: ref.sheet, row, column });
     switch (name) {
       case 'address':
-      case 'addressLocal':
         return formatRange(ref);
-      case 'cellCount':
-        return (ref.bottom - ref.top + 1) * (ref.right - ref.left + 1);
       case 'columnCount':
         return ref.right - ref.left + 1;
       case 'columnIndex':
@@ -127,10 +107,6 @@ export class ShimRange extends ShimClientObject<RangeTarget> {
         return grid(target, (row, column) => apiFormula(model.inputAt(at(row, column))));
       case 'numberFormat':
         return grid(target, (row, column) => model.numberFormatAt(at(row, column)));
-      case 'text':
-        return grid(target, (row, column) => cellText(model.valueAt(at(row, column)), model.numberFormatAt(at(row, column))));
-      case 'valueTypes':
-        return grid(target, (row, column) => valueType(model.valueAt(at(row, column))));
       default:
         throw invalidArgument(location);
     }
@@ -138,12 +114,6 @@ export class ShimRange extends ShimClientObject<RangeTarget> {
 
   get address(): string {
     return this.loadedValue('address');
-  }
-  get addressLocal(): string {
-    return this.loadedValue('addressLocal');
-  }
-  get cellCount(): number {
-    return this.loadedValue('cellCount');
   }
   get columnCount(): number {
     return this.loadedValue('columnCount');
@@ -156,12 +126,6 @@ export class ShimRange extends ShimClientObject<RangeTarget> {
   }
   get rowIndex(): number {
     return this.loadedValue('rowIndex');
-  }
-  get text(): string[][] {
-    return this.loadedValue('text');
-  }
-  get valueTypes(): string[][] {
-    return this.loadedValue('valueTypes');
   }
 
   get values(): unknown[][] {
@@ -213,16 +177,10 @@ export class ShimRange extends ShimClientObject<RangeTarget> {
     model.setInputs(ref.sheet, ref.top, ref.left, inputs);
   }
 
-  /** Bold, fill, wrapping and column widths; like the real navigation property it needs no load itself. */
+  /** Bold, fill colour and column widths; like the real navigation property it needs no load itself. */
   get format(): ShimRangeFormat {
     this.formatProxy ??= new ShimRangeFormat(this.context, () => this.target('Range.format'));
     return this.formatProxy;
-  }
-
-  /** The sheet the range is on; like the real navigation property it needs no load itself. */
-  get worksheet(): ShimWorksheet {
-    this.worksheetProxy ??= new ShimWorksheet(this.context, () => this.target('Range.worksheet').sheet, 'Range.worksheet');
-    return this.worksheetProxy;
   }
 
   private derived(location: string, shape: (target: RangeTarget) => [number, number, number, number]): ShimRange {
@@ -252,22 +210,6 @@ export class ShimRange extends ShimClientObject<RangeTarget> {
 
   getRow(row: number): ShimRange {
     return this.derived('Range.getRow', (t) => [t.top + row, t.left, t.top + row, t.right]);
-  }
-
-  getColumn(column: number): ShimRange {
-    return this.derived('Range.getColumn', (t) => [t.top, t.left + column, t.bottom, t.left + column]);
-  }
-
-  getLastRow(): ShimRange {
-    return this.derived('Range.getLastRow', (t) => [t.bottom, t.left, t.bottom, t.right]);
-  }
-
-  getLastColumn(): ShimRange {
-    return this.derived('Range.getLastColumn', (t) => [t.top, t.right, t.bottom, t.right]);
-  }
-
-  getLastCell(): ShimRange {
-    return this.derived('Range.getLastCell', (t) => [t.bottom, t.right, t.bottom, t.right]);
   }
 
   /** Selecting a range on another sheet brings that sheet to the front, as clicking would. */
@@ -307,3 +249,5 @@ export class ShimRange extends ShimClientObject<RangeTarget> {
     });
   }
 }
+// Read-only members the add-in does not use: reading one fails rather than giving undefined.
+refuseMembers(ShimRange.prototype, 'Range', ['addressLocal', 'cellCount', 'text', 'valueTypes', 'worksheet']);

@@ -1,13 +1,12 @@
 /**
- * Excel.RangeFormat, RangeFont and RangeFill over the model's cell styles and column widths.
- * Reading a property over cells that differ gives null, as the API documents.
+ * Excel.RangeFormat (column widths), RangeFont (bold) and RangeFill (colour) over the model's
+ * cell styles and column widths. Reading a property over cells that differ gives null, as the
+ * API documents.
  */
 import type { CellStyle, RangeRef } from '../workbook/types';
-import { autofitWidth } from './autofit';
-import { cellText } from './cellText';
 import { ShimClientObject, type Loadable } from './clientObject';
 import { normalizeColor } from './colors';
-import { invalidArgument, notInPreview } from './officeErrors';
+import { invalidArgument } from './officeErrors';
 import type { RangeTarget } from './range';
 import { rangeRefOf } from './rangeRef';
 import type { ShimRequestContext } from './requestContext';
@@ -94,17 +93,12 @@ export class ShimRangeFill extends RangePart {
       return { fill };
     });
   }
-
-  clear(): void {
-    const location = 'RangeFill.clear';
-    this.context.enqueue(location, () => this.context.model.setStyle(rangeRefOf(this.context, this.target(location), location), { fill: null }));
-  }
 }
-refuseMembers(ShimRangeFill.prototype, 'RangeFill', ['pattern', 'patternColor', 'patternTintAndShade', 'tintAndShade']);
+refuseMembers(ShimRangeFill.prototype, 'RangeFill', ['pattern', 'patternColor', 'patternTintAndShade', 'tintAndShade', 'clear']);
 
 export class ShimRangeFormat extends RangePart {
   protected readonly typeName = 'RangeFormat';
-  protected readonly scalarNames: readonly string[] = ['columnWidth', 'rowHeight', 'wrapText'];
+  protected readonly scalarNames: readonly string[] = ['columnWidth'];
   readonly font: ShimRangeFont;
   readonly fill: ShimRangeFill;
 
@@ -122,20 +116,11 @@ export class ShimRangeFormat extends RangePart {
 
   protected readScalar(name: string, target: RangeTarget): unknown {
     const location = `RangeFormat.${name}`;
+    if (name !== 'columnWidth') throw invalidArgument(location);
     const ref = rangeRefOf(this.context, target, location);
-    switch (name) {
-      case 'columnWidth': {
-        const widths: number[] = [];
-        for (let c = ref.left; c <= ref.right; c++) widths.push(this.context.model.columnWidth(ref.sheet, c));
-        return uniform(widths);
-      }
-      case 'rowHeight':
-        return this.context.model.rowHeight(ref.sheet);
-      case 'wrapText':
-        return uniform(this.styleValues(target, location).map((s) => s.wrap));
-      default:
-        throw invalidArgument(location);
-    }
+    const widths: number[] = [];
+    for (let c = ref.left; c <= ref.right; c++) widths.push(this.context.model.columnWidth(ref.sheet, c));
+    return uniform(widths);
   }
 
   get columnWidth(): number {
@@ -148,47 +133,6 @@ export class ShimRangeFormat extends RangePart {
       this.context.model.setColumnWidth(ref.sheet, ref.left, ref.right, points);
     });
   }
-
-  /** Rows keep one height in the preview, so the height can be read but not changed. */
-  get rowHeight(): number {
-    return this.loadedValue('rowHeight');
-  }
-  set rowHeight(_points: number) {
-    throw notInPreview('RangeFormat.rowHeight (setting it)');
-  }
-
-  get wrapText(): boolean {
-    return this.loadedValue('wrapText');
-  }
-  set wrapText(wrap: boolean) {
-    this.writeStyle('wrapText', wrap, (location) => {
-      if (typeof wrap !== 'boolean') throw invalidArgument(location);
-      return { wrap };
-    });
-  }
-
-  /** Fits each column to the widest text the range shows in it; columns showing nothing keep their width. */
-  autofitColumns(): void {
-    const location = 'RangeFormat.autofitColumns';
-    this.context.enqueue(location, () => {
-      const ref = rangeRefOf(this.context, this.target(location), location);
-      const model = this.context.model;
-      for (let column = ref.left; column <= ref.right; column++) {
-        const shown = [];
-        for (let row = ref.top; row <= ref.bottom; row++) {
-          const at = { sheet: ref.sheet, row, column };
-          shown.push({ text: cellText(model.valueAt(at), model.numberFormatAt(at)), bold: model.styleAt(at).bold });
-        }
-        const width = autofitWidth(shown);
-        if (width !== undefined) model.setColumnWidth(ref.sheet, column, column, width);
-      }
-    });
-  }
-
-  /** Every row already fits one line of text, and the preview keeps rows at one height. */
-  autofitRows(): void {
-    this.context.enqueue('RangeFormat.autofitRows', () => this.target('RangeFormat.autofitRows'));
-  }
 }
 refuseMembers(ShimRangeFormat.prototype, 'RangeFormat', [
   'borders',
@@ -197,4 +141,8 @@ refuseMembers(ShimRangeFormat.prototype, 'RangeFormat', [
   'indentLevel',
   'protection',
   'textOrientation',
+  'wrapText',
+  'rowHeight',
+  'autofitColumns',
+  'autofitRows',
 ]);

@@ -13,10 +13,11 @@ import { ShimWorkbook } from './workbook';
 
 /**
  * A sheet as the proxies of one context know it. Proxies share the handle rather than a name so
- * that a rename made through the shim moves every proxy with it, as object identity does in Excel.
+ * that a sheet deleted through the shim is gone for every proxy of it, as object identity has it
+ * in Excel, even when a new sheet of the same name is added later.
  */
 export interface SheetHandle {
-  name: string;
+  readonly name: string;
   deleted: boolean;
 }
 
@@ -56,19 +57,15 @@ export class ShimRequestContext {
     if (this.responseBytes > payloadLimit(this.settings)) throw responsePayloadTooLarge(location);
   }
 
-  get hasPendingOperations(): boolean {
-    return this.queue.length > 0;
-  }
-
   /**
    * Takes the queue at once, so later calls queue for the next sync exactly as they would while
    * a real request is in flight, and settles after the request has been processed.
    */
-  sync<T>(passThroughValue?: T): Promise<T> {
+  sync(): Promise<void> {
     const operations = this.queue;
     this.queue = [];
     const requestBytes = operations.reduce((sum, operation) => sum + operation.requestBytes, 0);
-    return this.send(operations, requestBytes).then(() => passThroughValue as T);
+    return this.send(operations, requestBytes);
   }
 
   private async send(operations: readonly QueuedOperation[], requestBytes: number): Promise<void> {

@@ -1,5 +1,5 @@
 /** Excel.Workbook: the sheets and the selection. */
-import { ShimClientObject, type Loadable } from './clientObject';
+import { ShimClientObject } from './clientObject';
 import { invalidArgument, invalidSelection, itemNotFound } from './officeErrors';
 import { rangeTarget, ShimRange, type RangeTarget } from './range';
 import { ShimRangeAreas } from './rangeAreas';
@@ -25,20 +25,12 @@ export class ShimWorkbook extends ShimClientObject<true> {
     throw invalidArgument(`Workbook.${name}`);
   }
 
-  protected override navigation(name: string): Loadable | undefined {
-    return name === 'worksheets' ? this.worksheets : undefined;
-  }
-
   private areaTargets(location: string): RangeTarget[] {
     return this.context.model.selectedAreas().map((area) => {
       const sheet = this.context.findSheet(area.sheet);
       if (!sheet) throw itemNotFound(location);
       return rangeTarget(sheet, area.top, area.left, area.bottom, area.right, location);
     });
-  }
-
-  private selectionTarget(location: string): RangeTarget {
-    return this.areaTargets(location)[0];
   }
 
   /**
@@ -62,18 +54,5 @@ export class ShimWorkbook extends ShimClientObject<true> {
   getSelectedRanges(): ShimRangeAreas {
     const location = 'Workbook.getSelectedRanges';
     return new ShimRangeAreas(this.context, () => this.areaTargets(location), location);
-  }
-
-  /** The model keeps no separate active cell: it is the selection's top-left cell. */
-  getActiveCell(): ShimRange {
-    const location = 'Workbook.getActiveCell';
-    return new ShimRange(
-      this.context,
-      () => {
-        const selection = this.selectionTarget(location);
-        return rangeTarget(selection.sheet, selection.top, selection.left, selection.top, selection.left, location);
-      },
-      location,
-    );
   }
 }

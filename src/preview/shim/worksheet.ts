@@ -1,14 +1,14 @@
-/** Excel.Worksheet over the model: its name and position, ranges and charts on it, activation, deletion. */
+/** Excel.Worksheet over the model: its name, ranges and charts on it, its changed event, activation, deletion. */
 import { parseRange, splitSheet } from '../../addressing/a1';
 import { ShimChartCollection } from './charts';
-import { ShimClientObject, type Loadable } from './clientObject';
-import { invalidArgument, invalidOperation, itemAlreadyExists } from './officeErrors';
+import { ShimClientObject } from './clientObject';
+import { invalidArgument, invalidOperation, notInPreview } from './officeErrors';
 import { rangeTarget, ShimRange, type RangeTarget } from './range';
 import type { SheetHandle, ShimRequestContext } from './requestContext';
-import { isValidSheetName } from './sheetNames';
+import { refuseMembers } from './unsupported';
 import { ShimWorksheetChangedEvent } from './worksheetChangedEvent';
 
-const WORKSHEET_SCALARS = ['name', 'position', 'visibility'] as const;
+const WORKSHEET_SCALARS = ['name'] as const;
 
 export class ShimWorksheet extends ShimClientObject<SheetHandle> {
   protected readonly typeName = 'Worksheet';
@@ -31,10 +31,6 @@ export class ShimWorksheet extends ShimClientObject<SheetHandle> {
     return this.locator();
   }
 
-  protected override navigation(name: string): Loadable | undefined {
-    return name === 'charts' ? this.charts : undefined;
-  }
-
   /** Like the real navigation property it needs no load itself. */
   get charts(): ShimChartCollection {
     this.chartsProxy ??= new ShimChartCollection(this.context, () => this.target('Worksheet.charts'));
@@ -54,40 +50,16 @@ export class ShimWorksheet extends ShimClientObject<SheetHandle> {
   protected readScalar(name: string, handle: SheetHandle): unknown {
     const location = `Worksheet.${name}`;
     const sheet = this.context.liveSheet(handle, location);
-    switch (name) {
-      case 'name':
-        return sheet;
-      case 'position':
-        return this.context.model.sheetNames().indexOf(sheet);
-      case 'visibility':
-        return 'Visible';
-      default:
-        throw invalidArgument(location);
-    }
+    if (name !== 'name') throw invalidArgument(location);
+    return sheet;
   }
 
   get name(): string {
     return this.loadedValue('name');
   }
-  set name(newName: string) {
-    this.queueWrite('name', newName, (handle, location) => {
-      const current = this.context.liveSheet(handle, location);
-      if (typeof newName !== 'string' || !isValidSheetName(newName)) throw invalidArgument(location);
-      const holder = this.context.findSheet(newName);
-      // By analogy with worksheets.add; a rename that only changes case is allowed.
-      if (holder && holder !== handle) throw itemAlreadyExists(location);
-      const model = this.context.model;
-      model.renameSheet(current, newName);
-      handle.name = newName;
-    });
-  }
-
-  get position(): number {
-    return this.loadedValue('position');
-  }
-
-  get visibility(): string {
-    return this.loadedValue('visibility');
+  /** The add-in never renames a sheet, so the preview refuses to rather than model it. */
+  set name(_name: string) {
+    throw notInPreview('Worksheet.name (setting it)');
   }
 
   private rangeOn(location: string, shape: (sheet: SheetHandle) => RangeTarget | null): ShimRange {
@@ -106,11 +78,6 @@ export class ShimWorksheet extends ShimClientObject<SheetHandle> {
       if (!onSheet) throw invalidArgument(location);
       return rangeTarget(onSheet, parsed.top, parsed.left, parsed.bottom, parsed.right, location);
     });
-  }
-
-  getCell(row: number, column: number): ShimRange {
-    const location = 'Worksheet.getCell';
-    return this.rangeOn(location, (sheet) => rangeTarget(sheet, row, column, row, column, location));
   }
 
   /**
@@ -149,3 +116,5 @@ export class ShimWorksheet extends ShimClientObject<SheetHandle> {
     });
   }
 }
+// Moving and hiding sheets are left out: touching either fails rather than being ignored.
+refuseMembers(ShimWorksheet.prototype, 'Worksheet', ['position', 'visibility']);

@@ -4,17 +4,15 @@
  * next sync and returns an EventHandlerResult whose remove() also takes effect at a sync; the
  * handler runs after cells of that sheet are entered or cleared, by the user or through the API
  * (recalculation raises no changed event), with the changed area's address without the sheet.
- * Only changeType "RangeEdited" and source "Local" are raised; worksheetId, details and
- * getRange() are absent rather than imitated (the shim has no worksheet ids).
+ * The arguments carry only changeType ("RangeEdited") and address, what the add-in and its tests
+ * read; type, source, worksheetId, details and getRange() are absent rather than imitated.
  */
 import { formatRange } from '../../addressing/a1';
 import { invalidArgument } from './officeErrors';
 import type { SheetHandle, ShimRequestContext } from './requestContext';
 
 export interface ShimWorksheetChangedArgs {
-  type: 'WorksheetChanged';
   changeType: 'RangeEdited';
-  source: 'Local';
   address: string;
 }
 
@@ -54,7 +52,7 @@ export class ShimWorksheetChangedEvent {
         model.onCellsEdited((edited) => {
           if (handle.deleted || edited.sheet !== handle.name) return;
           // Events reach the add-in after the change, never inside the edit that caused it.
-          setTimeout(() => void handler({ type: 'WorksheetChanged', changeType: 'RangeEdited', source: 'Local', address: formatRange(edited, false) }), 0);
+          setTimeout(() => void handler({ changeType: 'RangeEdited', address: formatRange(edited, false) }), 0);
         }),
       );
     });

@@ -1,5 +1,5 @@
 /** Excel.WorksheetCollection over the model's sheet list. */
-import { ShimClientObject, ShimClientResult } from './clientObject';
+import { ShimClientObject } from './clientObject';
 import type { LoadSpec } from './loadOptions';
 import { invalidArgument, itemAlreadyExists, itemNotFound } from './officeErrors';
 import type { SheetHandle, ShimRequestContext } from './requestContext';
@@ -86,12 +86,6 @@ export class ShimWorksheetCollection extends ShimClientObject<true> {
     }
     model.addSheet(sheetName);
     return this.context.handleFor(sheetName);
-  }
-
-  getCount(): ShimClientResult<number> {
-    const result = new ShimClientResult<number>();
-    this.context.enqueue('WorksheetCollection.getCount', () => result.settle(this.context.model.sheetNames().length));
-    return result;
   }
 }
 

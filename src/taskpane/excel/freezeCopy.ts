@@ -1,5 +1,6 @@
 import { formatRange, type RangeRef } from '../../addressing/a1';
 import { LIVE_NOTE, LIVE_QQ_LABEL, LIVE_SETTINGS_HEADING, REFRESH_NOTE, REPORT_TITLE_PREFIX, VALUES_SETTINGS_HEADING } from '../model/reportSections';
+import { AXES_FIXED_NOTE } from '../model/reportCharts';
 import { inPieces } from './inPieces';
 import { longRun } from './longRun';
 import { jsonBytes } from './payload';
@@ -19,6 +20,7 @@ export function frozenText(text: string, asOf: string): string {
   if (text === LIVE_SETTINGS_HEADING || text === VALUES_SETTINGS_HEADING) return `Settings used (as of ${asOf} UTC; editing them here changes nothing)`;
   if (text.endsWith(REFRESH_NOTE)) return `${text.slice(0, -REFRESH_NOTE.length)}This copy keeps the values as of ${asOf} UTC: Refresh does not reach it.`;
   if (text === LIVE_QQ_LABEL) return 'Normal Q–Q points';
+  if (text.startsWith(AXES_FIXED_NOTE)) return 'The charts stay on the live report; this copy holds the values they were drawn from.';
   if (text.endsWith(LIVE_NOTE))
     return `${text.slice(0, -LIVE_NOTE.length)}Every number below is a value as of ${asOf} UTC, not a formula: nothing here recalculates.`;
   return text;

@@ -1,20 +1,12 @@
 import type { ModelFit } from '../../engine';
 import { fittedEquation } from '../../cellGrids/equationGrid';
-import { decimalsFor, formatCount, formatNumber, formatShare } from '../../presentation';
-
-const MINUS = '−';
-
-/** A value to the decimals of its standard error (the reports' rounding rule), minus sign as in the equation. */
-function toDecimals(value: number, decimals: number): string {
-  const digits = Math.abs(value).toFixed(decimals);
-  return value < 0 && Number(digits) !== 0 ? `${MINUS}${digits}` : digits;
-}
+import { decimalsFor, formatCount, formatDecimals, formatNumber, formatShare } from '../../presentation';
 
 function estimateText(term: ModelFit['terms'][number]): string {
   if (term.aliased || !Number.isFinite(term.estimate)) return 'aliased, not estimated';
   if (!Number.isFinite(term.standardError)) return `${formatNumber(term.estimate)} ± (no standard error)`;
   const decimals = decimalsFor(term.standardError);
-  return `${toDecimals(term.estimate, decimals)} ± ${toDecimals(term.standardError, decimals)}`;
+  return `${formatDecimals(term.estimate, decimals)} ± ${formatDecimals(term.standardError, decimals)}`;
 }
 
 function standardErrorsText(fit: ModelFit): string {

@@ -56,7 +56,9 @@ export function paneWarnings({ fit, columns, spanning, rowsSkipped, skippedExamp
       );
     }
     if (fit.residualDf < FEW_RESIDUAL_DF) {
-      warnings.push(data(`Only ${fit.n} rows for ${fit.rank} parameters: with ${fit.residualDf} residual degrees of freedom every interval is very wide.`));
+      warnings.push(
+        data(`Only ${fit.n} rows for ${fit.parameters} parameters: with ${fit.residualDf} residual degrees of freedom every interval is very wide.`),
+      );
     }
     const aliased = fit.terms.filter((t) => t.aliased).map((t) => t.name);
     if (aliased.length > 0) warnings.push(data(`Cannot be estimated (a combination of other columns): ${aliased.join(', ')}.`));

@@ -125,6 +125,9 @@ function fixedAxes(chart: ReportChartPlan): string[] {
   );
 }
 
+/** How the note on fixed axes begins, so a frozen copy (which has no charts) can replace it. */
+export const AXES_FIXED_NOTE = "Axes fixed when the report was written (Excel's automatic axes would start at 0):";
+
 /**
  * The four charts and their guide cells. Every chart reads PLUMB results only: they skip blank and
  * #N/A rows as the fit does, where a plain reference to the data would chart each blank as 0.
@@ -163,7 +166,7 @@ export function planReportCharts(sources: ReportChartSources, placement: ReportC
 
   const cooksRow = top + 6;
   const cutoff = `=${COOKS_CUTOFF_NUMERATOR}/COUNT(${refs(residuals.row)})`;
-  label(cooksRow, left, `${COOKS_CUTOFF_NUMERATOR}/n on Cook's distance (n = rows used; the "influential" flag's cut-off)`);
+  label(cooksRow, left, `${COOKS_CUTOFF_NUMERATOR}/n on Cook's distance (n = rows used; the cut-off of the residual table's "Cook's over 4/n" flag)`);
   formula(cooksRow, xColumn, `=MIN(${refs(residuals.row)})`);
   formula(cooksRow + 1, xColumn, `=MAX(${refs(residuals.row)})`);
   formula(cooksRow, yColumn, cutoff);
@@ -212,11 +215,7 @@ export function planReportCharts(sources: ReportChartSources, placement: ReportC
 
   const fixed = charts.flatMap(fixedAxes);
   if (fixed.length > 0) {
-    label(
-      top + 9,
-      left,
-      `Axes fixed when the report was written (Excel's automatic axes would start at 0): ${fixed.join('; ')}. Points that move outside them later are not shown; write the report again.`,
-    );
+    label(top + 9, left, `${AXES_FIXED_NOTE} ${fixed.join('; ')}. Points that move outside them later are not shown; write the report again.`);
   }
   return { charts, cells };
 }

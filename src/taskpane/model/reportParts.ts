@@ -24,13 +24,6 @@ export function settingsRows(
   ];
 }
 
-/** "[y] = b0 + b1·[x1] + … + error", the b's numbered in the order of the term table. */
-export function modelEquation(responseName: string, termNames: readonly string[], intercept: boolean): string {
-  const predictors = termNames.filter((t) => t !== 'Intercept');
-  const parts = [...(intercept ? ['b0'] : []), ...predictors.map((t, j) => `b${j + 1}·[${t}]`)];
-  return `[${responseName}] = ${parts.join(' + ')} + error`;
-}
-
 /**
  * The cautions every report ends with: association is not causation, extrapolation is risky, and
  * the inference rests on assumptions, worded for what the report can show of them.

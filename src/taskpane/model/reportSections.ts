@@ -77,6 +77,14 @@ export function standardErrorsNote(robustCell: string | undefined) {
   };
 }
 
+/** The same notes for a values report, whose standard errors were fixed when it was written. */
+export function valuesStandardErrorsNote(kind: ModelFit['covarianceKind']) {
+  return {
+    terms: kind === 'classical' ? 'Standard errors: classical.' : `Standard errors: robust (${kind}).`,
+    classical: kind === 'classical' ? 'Classical standard errors.' : `Classical standard errors: robust (${kind}) ones change only the terms' table.`,
+  };
+}
+
 export function titleSection(sheet: string, lines: { text: string; bold: boolean }[]): ReportSection {
   return {
     rows: lines.length,

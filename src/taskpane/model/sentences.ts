@@ -55,7 +55,7 @@ export function fitSentence(fit: ModelFit, frame: SentenceFrame): string {
   const rSquared = fit.settings.intercept
     ? `R² = ${formatNumber(fit.rSquared)}, adjusted ${formatNumber(fit.adjustedRSquared)}`
     : `uncentered R² (no intercept, measured from 0) = ${formatShare(fit.rSquared)}, adjusted ${formatShare(fit.adjustedRSquared)}`;
-  return `Fitted on ${formatCount(fit.n)} rows${skipped}: ${rSquared}; ${sigma}. All slopes zero? F = ${formatNumber(fit.fStatistic)}, ${formatP(fit.fPValue)}${classicalNote(fit)}.`;
+  return `Fitted on ${formatCount(fit.n)} rows${skipped}: ${rSquared}; ${sigma}. ${fit.settings.intercept ? 'All slopes zero?' : 'All coefficients zero?'} F = ${formatNumber(fit.fStatistic)}, ${formatP(fit.fPValue)}${classicalNote(fit)}.`;
 }
 
 /** Under robust standard errors the F tests stay classical; say so beside them. */

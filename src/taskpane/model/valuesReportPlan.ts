@@ -1,10 +1,10 @@
 import { formatAbsolute } from '../../addressing/a1';
+import { fittedEquation } from '../../cellGrids/equationGrid';
 import { nestedGrid } from '../../cellGrids/nestedGrid';
-import { decimalsFor } from '../../presentation';
+import { decimalsFor, formatCount } from '../../presentation';
 import type { PaneChoices, ResolvedRanges } from './choices';
 import type { PaneAnalysis } from './paneAnalysis';
 import { stackSections, type ReportSection } from './reportLayout';
-import { modelEquation } from './reportParts';
 import type { ReportPlan } from './reportPlan';
 import {
   cautionsSection,
@@ -18,6 +18,7 @@ import {
   settingsSection,
   termsSection,
   titleSection,
+  valuesStandardErrorsNote,
 } from './reportSections';
 
 export interface ValuesPlanInput {
@@ -30,7 +31,7 @@ export interface ValuesPlanInput {
 
 export function valuesNote(dataRows: number): string {
   return (
-    `These results are values, not live formulas: the data (${dataRows.toLocaleString('en-US')} rows) exceed what a cell function can receive in one call (about 5 MB). ` +
+    `These results are values, not live formulas: the data (${formatCount(dataRows)} rows) exceed what a cell function can receive in one call (about 5 MB). ` +
     REFRESH_NOTE
   );
 }
@@ -53,6 +54,7 @@ export function planValuesReport({ sheetName, ranges, choices, analysis, written
   const dataRows = analysis.source === 'streamed' ? analysis.dataRows : analysis.rowsUsed + analysis.rowsSkipped;
   const predictorText = ranges.predictorColumns.map(formatAbsolute).join(', ');
   const specification = `${analysis.responseName} from ${formatAbsolute(ranges.response)}; predictors ${predictorText}`;
+  const notes = valuesStandardErrorsNote(fit.covarianceKind);
   const sections: ReportSection[] = [
     titleSection(sheetName, [
       { text: `${REPORT_TITLE_PREFIX}: ${analysis.responseName}`, bold: true },
@@ -69,19 +71,15 @@ export function planValuesReport({ sheetName, ranges, choices, analysis, written
     modelSection(sheetName, {
       kind: 'values',
       values: {
-        equation: modelEquation(
-          analysis.responseName,
-          fit.terms.map((t) => t.name),
-          choices.intercept,
-        ),
+        equation: fittedEquation(analysis.responseName, fit),
       },
     }),
-    termsSection(sheetName, '', { kind: 'values', values: { fit } }),
-    fitSection(sheetName, '', { kind: 'values', values: { fit, skipped: analysis.rowsSkipped } }),
+    termsSection(sheetName, notes.terms, { kind: 'values', values: { fit } }),
+    fitSection(sheetName, notes.classical, { kind: 'values', values: { fit, skipped: analysis.rowsSkipped } }),
   ];
   if (analysis.nested !== undefined || analysis.nestedError !== undefined) {
     sections.push(
-      nestedSection(sheetName, analysis.addedNames, '', {
+      nestedSection(sheetName, analysis.addedNames, notes.classical, {
         kind: 'values',
         values: analysis.nested !== undefined ? { grid: nestedGrid(analysis.nested) } : { problem: analysis.nestedError ?? '' },
       }),
@@ -91,7 +89,7 @@ export function planValuesReport({ sheetName, ranges, choices, analysis, written
   if (ranges.newRows !== undefined) {
     const hidden = analysis.source === 'streamed' ? ` ${HIDDEN_NOT_CHECKED}` : '';
     sections.push(
-      predictionsSection(sheetName, `Rows with a blank are left blank.${hidden}`, decimalsFor(fit.sigma), {
+      predictionsSection(sheetName, `${notes.classical} Rows with a blank are left blank.${hidden}`, decimalsFor(fit.sigma), {
         kind: 'values',
         values: { predictions: analysis.predictions },
       }),

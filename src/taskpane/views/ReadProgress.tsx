@@ -1,6 +1,7 @@
+import { formatCount } from '../../presentation';
 /** The progress of a block read, with the way out. */
 export function ReadProgress({ read, total, onCancel }: { read: number; total: number; onCancel(): void }) {
-  const text = `Read ${read.toLocaleString('en-US')} of ${total.toLocaleString('en-US')} rows`;
+  const text = `Read ${formatCount(read)} of ${formatCount(total)} rows`;
   return (
     <div class="progress" role="status">
       <progress value={read} max={total} aria-label="Rows read" />

@@ -1,3 +1,4 @@
+import { checkList } from '../../presentation';
 import type { PaneAnalysis } from '../model/paneAnalysis';
 import { fitSentence, nestedSentence, type SentenceFrame, termSentence } from '../model/sentences';
 
@@ -57,6 +58,19 @@ export function ResultCards({ analysis, level, onUseRobust }: ResultCardsProps) 
           </li>
         ))}
       </ul>
+      {analysis.source === 'cells' && analysis.checks !== undefined && (
+        <details class="card checks">
+          <summary>Every check, in words</summary>
+          <dl>
+            {checkList(analysis.checks).map((line) => (
+              <div key={line.question}>
+                <dt>{line.question}</dt>
+                <dd>{line.reading}</dd>
+              </div>
+            ))}
+          </dl>
+        </details>
+      )}
       <p class="caution">Associations, not causes. Predictions beyond the data are extrapolations. Check the residuals before trusting the intervals.</p>
     </div>
   );

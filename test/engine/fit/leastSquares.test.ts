@@ -19,8 +19,8 @@ describe('needsExtendedPrecision', () => {
     // Norris measures κ ≈ 3.2 and ‖r‖/‖y‖ ≈ 1.6e-3; the benchmark's random designs κ ≤ 51 and ‖r‖/‖y‖ ≥ 0.18.
     expect(needsExtendedPrecision(3.2, 1.6e-3)).toBe(true);
     expect(needsExtendedPrecision(51, 0.18)).toBe(false);
-    // An exact fit has no σ̂ to protect; only its condition number counts.
-    expect(needsExtendedPrecision(1, 0)).toBe(false);
+    // An exact fit reports standard errors of 0, so its coefficients are read as exact: always refined.
+    expect(needsExtendedPrecision(1, 0)).toBe(true);
     expect(needsExtendedPrecision(2e3, 0)).toBe(true);
   });
 });
@@ -61,5 +61,28 @@ describe('residuals on many rows', () => {
       const direct = y[i] - (b[0] + b[1] * x[i][0] + b[2] * x[i][1] + b[3] * x[i][2]);
       expect(Math.abs(solution.residuals[i] - direct), `row ${i}`).toBeLessThanOrEqual(1e-12 * sigma);
     }
+  });
+});
+
+// Common practice (no source): data that a line fits exactly have standard errors of 0, so the
+// coefficients are read as exact; a constant response has its level as intercept and slope 0.
+describe('solveLeastSquares on exact fits', () => {
+  const x = [[1], [2], [3], [4], [5], [6]];
+  it('gives a constant response its level and a slope of exactly 0', () => {
+    const solution = solveLeastSquares(buildDesign([5, 5, 5, 5, 5, 5], x, true, undefined, undefined));
+    expect(Array.from(solution.coefficients)).toEqual([5, 0]);
+    expect(solution.perfectFit).toBe(true);
+  });
+  it('gives an exact line its coefficients exactly', () => {
+    const solution = solveLeastSquares(
+      buildDesign(
+        x.map(([v]) => 2 + 3 * v),
+        x,
+        true,
+        undefined,
+        undefined,
+      ),
+    );
+    expect(Array.from(solution.coefficients)).toEqual([2, 3]);
   });
 });

@@ -71,6 +71,14 @@ describe.skipIf(!available)('guided pane in the preview workbook', () => {
       /^Steep time: each extra hour is associated with \+0\.\d+ points of extraction yield, other predictors held fixed \(95% CI /,
     );
     expect(await page().locator('.verdict').innerText()).toContain('No evidence that Bean age (days) adds anything');
+    // Every check in words, as PLUMB.CHECKS reads it (test/presentation/checkList.test.ts checks the wording).
+    expect(await page().locator('details.checks dt').allTextContents()).toEqual([
+      'A row far off the others?',
+      'Neighbouring rows related?',
+      'Spread changing?',
+      'Roughly normal?',
+      'Straight enough where settings repeat?',
+    ]);
     await screenshot(page(), 'pane-results');
   });
 

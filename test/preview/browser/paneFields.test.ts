@@ -54,6 +54,8 @@ describe.skipIf(!available)('field problems in the pane', () => {
     expect(await page().locator('#response-problem').count()).toBe(0);
     await enter('#predictors', 'Batches!C1:G61');
     await expect.poll(() => page().locator('#predictors-problem').count()).toBe(0);
+    await page().getByRole('button', { name: 'Read data and fit' }).click();
+    await expect.poll(() => page().locator('.data-summary').innerText()).toContain('Rows used: 60');
   });
 
   it('checks the confidence level when it is entered, beside the field', async () => {

@@ -97,7 +97,7 @@ describe('response payload', () => {
       Excel.run(async (context) => {
         const sheet = context.workbook.worksheets.getItem('Sheet1');
         sheet.getRange('A1:A30').load('values');
-        sheet.getRange('A31:A60').load('values, text');
+        sheet.getRange('A31:A60').load('values, formulas');
         await context.sync();
       }),
     );

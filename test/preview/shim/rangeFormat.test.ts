@@ -1,10 +1,9 @@
 /**
  * Excel.RangeFormat, RangeFont and RangeFill as the Excel JavaScript API reference describes them
- * (Microsoft Learn): columnWidth in points and null when the columns differ, wrapText and
- * font.bold null when mixed, fill.color as an HTML colour code, autofitColumns.
+ * (Microsoft Learn): columnWidth in points and null when the columns differ, font.bold null when
+ * mixed, fill.color as an HTML colour code.
  */
 import { beforeEach, describe, expect, it } from 'vitest';
-import { autofitWidth } from '../../../src/preview/shim/autofit';
 import { normalizeColor } from '../../../src/preview/shim/colors';
 import type { PreviewWorkbook } from '../../../src/preview/workbook/workbook';
 import { freshWorkbook, NOT_LOADED, officeError, thrownOfficeError } from './harness';
@@ -88,7 +87,7 @@ describe('fill', () => {
     expect(colours).toEqual(['#0F766E', '#FFFFFF']);
   });
 
-  it('reads null over cells with different fills, and clear() removes the fill', async () => {
+  it('reads null over cells with different fills', async () => {
     model.setStyle({ sheet: 'Report', top: 0, left: 0, bottom: 0, right: 0 }, { fill: '#FFA500' });
     const mixed = await onRange('A1:A2', async (range, context) => {
       const fill = range.format.fill.load('color');
@@ -96,11 +95,6 @@ describe('fill', () => {
       return fill.color;
     });
     expect(mixed).toBeNull();
-    await onRange('A1', async (range, context) => {
-      range.format.fill.clear();
-      await context.sync();
-    });
-    expect(model.styleAt(at(0, 0)).fill).toBeNull();
   });
 
   it('rejects a colour it cannot read', async () => {
@@ -160,80 +154,13 @@ describe('column widths', () => {
   });
 });
 
-describe('autofitColumns', () => {
-  it('widens each column to its longest shown text and leaves columns showing nothing alone', async () => {
-    model.setInputs('Report', 0, 0, [
-      ['Term', null, 'x'],
-      ['Bean age (days) and more', null, 'y'],
-    ]);
-    model.setColumnWidth('Report', 1, 1, 50);
-    await onRange('A1:C2', async (range, context) => {
-      range.format.autofitColumns();
-      await context.sync();
-    });
-    expect(model.columnWidth('Report', 0)).toBe(autofitWidth([{ text: 'Bean age (days) and more', bold: false }]));
-    expect(model.columnWidth('Report', 1)).toBe(50);
-    expect(model.columnWidth('Report', 2)).toBeLessThan(model.columnWidth('Report', 0));
-  });
-
-  it('fits the text as shown under its number format', async () => {
-    model.setInputs('Report', 0, 0, [[0.123456789]]);
-    model.setNumberFormats('Report', 0, 0, [['0.0']]);
-    await onRange('A1', async (range, context) => {
-      range.format.autofitColumns();
-      await context.sync();
-    });
-    expect(model.columnWidth('Report', 0)).toBe(autofitWidth([{ text: '0.1', bold: false }]));
-  });
-
-  it('estimates whole pixels, more for longer and for bold text, none for nothing shown', () => {
-    const plain = autofitWidth([{ text: 'Estimate', bold: false }]) ?? 0;
-    expect((plain / 0.75) % 1).toBe(0);
-    expect(autofitWidth([{ text: 'Estimate', bold: true }])).toBeGreaterThan(plain);
-    expect(autofitWidth([{ text: 'Estimates', bold: false }])).toBeGreaterThan(plain);
-    expect(autofitWidth([{ text: '', bold: true }])).toBeUndefined();
-  });
-});
-
-describe('wrapText and rowHeight', () => {
-  it('sets wrapping and reads null over cells that differ', async () => {
-    await onRange('A1', async (range, context) => {
-      range.format.wrapText = true;
-      await context.sync();
-    });
-    expect(model.styleAt(at(0, 0)).wrap).toBe(true);
-    const read = await onRange('A1:A2', async (range, context) => {
-      const one = range.getCell(0, 0).format.load('wrapText');
-      range.format.load('wrapText');
-      await context.sync();
-      return [one.wrapText, range.format.wrapText];
-    });
-    expect(read).toEqual([true, null]);
-  });
-
-  it('reads the one row height the preview has, and refuses to change it', async () => {
-    const height = await onRange('A1:A3', async (range, context) => {
-      range.format.load('rowHeight');
-      await context.sync();
-      return range.format.rowHeight;
-    });
-    expect(height).toBe(18);
-    await onRange('A1', async (range) => {
-      const error = thrownOfficeError(() => {
-        range.format.rowHeight = 30;
-      });
-      expect(error.code).toBe('ApiNotFound');
-    });
-  });
-});
-
 describe('clear', () => {
   it("'Formats' resets bold, fill and wrapping but keeps values and column widths", async () => {
     model.setInputs('Report', 0, 0, [['Term']]);
     model.setStyle({ sheet: 'Report', top: 0, left: 0, bottom: 0, right: 0 }, { bold: true, fill: '#FFA500', wrap: true });
     model.setColumnWidth('Report', 0, 0, 150);
     await onRange('A1', async (range, context) => {
-      range.clear(Excel.ClearApplyTo.formats);
+      range.clear('Formats');
       await context.sync();
     });
     expect(model.styleAt(at(0, 0))).toEqual({ bold: false, fill: null, wrap: false });
@@ -260,6 +187,7 @@ describe('formatting the preview lacks', () => {
       expect(error.code).toBe('ApiNotFound');
       expect(error.message).toBe('RangeFormat.horizontalAlignment is not available in the preview workbook.');
       expect(thrownOfficeError(() => range.format.font.italic).code).toBe('ApiNotFound');
+      expect(thrownOfficeError(() => range.format.wrapText).code).toBe('ApiNotFound');
     });
   });
 });

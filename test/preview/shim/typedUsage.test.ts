@@ -40,7 +40,6 @@ beforeEach(() => {
 
 it('runs typed task-pane code end to end', async () => {
   await Office.onReady();
-  expect(Office.context.requirements.isSetSupported('ExcelApi', '1.12')).toBe(true);
   expect(
     await writeTable(
       'Terms table',

@@ -7,6 +7,7 @@
 import { describe, expect, it } from 'vitest';
 import { PAYLOAD_LIMIT_BYTES } from '../../../src/preview/shim/hostSettings';
 import { freezeActiveReport, frozenText } from '../../../src/taskpane/excel/freezeCopy';
+import { AXES_FIXED_NOTE } from '../../../src/taskpane/model/reportCharts';
 import { REFRESH_NOTE, VALUES_SETTINGS_HEADING } from '../../../src/taskpane/model/reportSections';
 import { valuesNote } from '../../../src/taskpane/model/valuesReportPlan';
 import type { PreviewWorkbook } from '../../../src/preview/workbook/workbook';
@@ -175,5 +176,15 @@ describe('frozenText of a values report', () => {
     expect(note).not.toContain(REFRESH_NOTE);
     expect(note).toContain('values as of 2026-01-02 03:04 UTC');
     expect(frozenText(VALUES_SETTINGS_HEADING, '2026-01-02 03:04')).toBe('Settings used (as of 2026-01-02 03:04 UTC; editing them here changes nothing)');
+  });
+
+  // The copy has no charts, so the note on the charts' fixed axes (and writing the report again) has no place in it.
+  it('replaces the note on the charts’ fixed axes, since the copy has no charts', () => {
+    const note = frozenText(
+      `${AXES_FIXED_NOTE} X of ObservedVsFitted 14 to 24. Points that move outside them later are not shown; write the report again.`,
+      'x',
+    );
+    expect(note).not.toContain('write the report again');
+    expect(note).toContain('The charts stay on the live report');
   });
 });

@@ -75,6 +75,9 @@ describe('sentences', () => {
     const sentence = fitSentence(noIntercept, { responseName: 'Yield', columns: [], skipped: { length: 0 } });
     expect(sentence).toContain('uncentered R² (no intercept, measured from 0) = 0.9999');
     expect(sentence).not.toMatch(/R² = 1,/);
+    // Without an intercept the overall F tests every coefficient, as FITSTATS labels it.
+    expect(sentence).toContain('All coefficients zero? F = ');
+    expect(sentence).not.toContain('All slopes zero?');
   });
 
   // Under HC3 only the terms' standard errors change; the overall and nested F tests are the

@@ -4,6 +4,7 @@
  * nested test and predictions when chosen, and what was left out said in words.
  */
 import { describe, expect, it } from 'vitest';
+import { fittedEquation } from '../../../src/cellGrids/equationGrid';
 import { EMPTY_CHOICES, type PaneChoices, resolveRanges } from '../../../src/taskpane/model/choices';
 import { analyzeStreamed } from '../../../src/taskpane/model/streamedAnalysis';
 import { StreamFold } from '../../../src/taskpane/model/streamFold';
@@ -72,6 +73,18 @@ describe('planValuesReport', () => {
     });
     const skipped = p.cells.find((c) => c.kind === 'label' && c.text === 'Rows skipped');
     expect(p.cells.find((c) => c.row === skipped?.row && c.column === 1)).toMatchObject({ kind: 'value', value: 4 });
+  });
+
+  // One story: the values report shows the fitted equation PLUMB.EQUATION gives the live report,
+  // and says which standard errors each section uses, as the live report does.
+  it('writes the fitted equation with its numbers and labels each section with its standard errors', () => {
+    const { analysis, plan: p } = plan(choices);
+    if (analysis.fit === undefined) throw new Error('no fit');
+    const labels = p.cells.flatMap((c) => (c.kind === 'label' ? [c.text] : []));
+    expect(labels).toContain(fittedEquation('=Yield', analysis.fit));
+    expect(labels.some((t) => t.includes('b0'))).toBe(false);
+    expect(labels.some((t) => t.endsWith('Standard errors: classical.'))).toBe(true);
+    expect(labels.filter((t) => t.startsWith('Classical standard errors')).length).toBeGreaterThanOrEqual(1);
   });
 
   it('keeps a response name that looks like a formula as a text label', () => {
