@@ -1,18 +1,8 @@
-import type { DiagnosticFlag, ModelFrame, ResidualDiagnostics, RowDiagnostics, UndefinedReason } from '../engine';
+import type { ModelFrame, ResidualDiagnostics, RowDiagnostics, UndefinedReason } from '../engine';
+import { FLAG_TEXT, residualFlags } from '../presentation';
 import { finiteOrBlank, type Grid } from './gridCell';
 
 export const RESIDUALS_HEADER = ['Row', 'Observed', 'Fitted', 'Residual', 'Standardized', 'Studentized', 'Leverage', "Cook's distance", 'DFFITS', 'Flag'];
-
-/**
- * Each row's flags are screens, worded by the rule that raised them: PLUMB.CHECKS names outliers by
- * the Bonferroni test and influential rows at Cook's distance above 1, so these words must not
- * claim more than the screen found.
- */
-const FLAG_TEXT: Record<DiagnosticFlag, string> = {
-  'high-leverage': 'high leverage (over 2p/n)',
-  outlier: 'large residual (|t| over 3)',
-  influential: "Cook's over 4/n",
-};
 
 /** Each text names what a blank above it means, so no blank is left unexplained. */
 const REASON_TEXT: Record<UndefinedReason, string> = {
@@ -30,10 +20,10 @@ const REASON_TEXT: Record<UndefinedReason, string> = {
  * the data (which would turn a blank into 0).
  */
 export function residualsGrid(diagnostics: ResidualDiagnostics, frame: ModelFrame): Grid {
-  return [[...RESIDUALS_HEADER], ...diagnostics.rows.map((row, i) => residualRow(row, frame.usedRows[i], frame.data.y[i]))];
+  return [[...RESIDUALS_HEADER], ...diagnostics.rows.map((row, i) => residualRow(row, diagnostics, frame.usedRows[i], frame.data.y[i]))];
 }
 
-function residualRow(row: RowDiagnostics, rowNumber: number, observed: number): Grid[number] {
+function residualRow(row: RowDiagnostics, diagnostics: ResidualDiagnostics, rowNumber: number, observed: number): Grid[number] {
   return [
     rowNumber,
     observed,
@@ -44,12 +34,13 @@ function residualRow(row: RowDiagnostics, rowNumber: number, observed: number): 
     finiteOrBlank(row.leverage),
     finiteOrBlank(row.cooksDistance),
     finiteOrBlank(row.dffits),
-    flagText(row),
+    flagText(row, diagnostics),
   ];
 }
 
-export function flagText(row: RowDiagnostics): string {
-  const parts = row.flags.map((f) => FLAG_TEXT[f]);
+/** The screens' flags (src/presentation/thresholds.ts) and why a value is blank. */
+function flagText(row: RowDiagnostics, diagnostics: ResidualDiagnostics): string {
+  const parts = residualFlags(row, diagnostics).map((f) => FLAG_TEXT[f]);
   if (row.undefinedBecause !== undefined) parts.push(REASON_TEXT[row.undefinedBecause]);
   return parts.join(', ');
 }

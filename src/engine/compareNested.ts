@@ -4,6 +4,9 @@ import { fCriticalValue, fUpperTail } from './infer/referenceDistribution';
 import { resolveSettings } from './settings';
 import type { FitSettings, NestedComparison, NestedData } from './types';
 
+/** Why the nested test is not formed when the added columns add no rank; the pane's streamed test throws it too. */
+export const NOTHING_ADDED_MESSAGE = 'The added columns are combinations of the base columns, so they cannot change the fit: there is nothing to test.';
+
 /**
  * The extra-sum-of-squares F test of the full model (base plus added columns) against the base
  * model. Nesting holds by construction, and the denominator is the full model's noise estimate
@@ -22,7 +25,7 @@ export function compareNested(data: NestedData, settings?: FitSettings): NestedC
   const base = solveModel({ y: data.y, x: data.base, weights: data.weights }, resolved);
   const dfNumerator = full.fit.rank - base.fit.rank;
   if (dfNumerator <= 0) {
-    throw new EngineError('nothing-added', 'The added columns are combinations of the base columns, so they cannot change the fit: there is nothing to test.');
+    throw new EngineError('nothing-added', NOTHING_ADDED_MESSAGE);
   }
 
   const known = resolved.knownSigma;

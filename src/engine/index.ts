@@ -2,27 +2,20 @@
  * Plumbline's engine: pure TypeScript, no Office, cells or UI. This is its only public entry.
  */
 export { fitModel } from './fitModel';
-export { compareNested } from './compareNested';
+export { compareNested, NOTHING_ADDED_MESSAGE } from './compareNested';
 export { predict } from './predict';
 export { compareCandidates, type CandidateResult } from './infer/modelComparison';
-export {
-  residualDiagnostics,
-  maxCooksDistance,
-  highLeverageCount,
-  type ResidualDiagnostics,
-  type RowDiagnostics,
-  type DiagnosticFlag,
-  type UndefinedReason,
-} from './infer/influence';
+export { residualDiagnostics, maxCooksDistance, type ResidualDiagnostics, type RowDiagnostics, type UndefinedReason } from './infer/influence';
 export { EngineError, type EngineErrorCode } from './errors';
 export { judgeNoiseSd, type NoiseSdVerdict } from './noiseSd';
 export type { CovarianceKind, FitSettings, ModelData, ModelFit, NestedComparison, NestedData, Prediction, ResolvedSettings, TermEstimate } from './types';
 export { modelCache } from './fitModel';
+export { COVARIANCE_KINDS } from './settings';
 export type { CacheStats } from './cache/modelCache';
 export { buildModelFrame, type FrameInput, type FrameOrigins, type ModelFrame, type SkippedRow } from './design/modelFrame';
 export { cellPlace, type RangeOrigin, rowNumber } from './design/origin';
 export { codeRow, type SourceColumn } from './design/categorical';
-export { badCellMessage, isCategoricalColumn } from './design/cellRules';
+export { badCellMessage, badWeightMessage, isCategoricalColumn } from './design/cellRules';
 export { type NewRowColumn, type NewRowNaming, type NewRowValues, readNewRowValues } from './design/newRows';
 export { classifyCell, describeCell, type Cell, type CellGrid, type CellValue, type CellErrorValue } from './design/cells';
 export { INTERCEPT_NAME } from './fit/design';
@@ -36,7 +29,7 @@ export {
   type LackOfFitVerdict,
   type OutlierVerdict,
   type ShapiroWilkVerdict,
-  type UnusualRow,
+  type CheckedRow,
 } from './infer/assumptionChecks';
 export { type DurbinWatsonExact, type DurbinWatsonExactReason, type DurbinWatsonMethod, EXACT_MAX_ROWS } from './infer/durbinWatsonExact';
 export { type ShapiroWilk, type ShapiroWilkReason, SHAPIRO_WILK_MAX_N, SHAPIRO_WILK_MIN_N } from './infer/shapiroWilk';

@@ -1,8 +1,8 @@
-import { type AssumptionChecks, EXACT_MAX_ROWS, type UnusualRow } from '../engine';
+import { type AssumptionChecks, EXACT_MAX_ROWS } from '../engine';
 import { COLLINEARITY_REASON_TEXT } from './collinearityReadings';
 import { formatFixed, formatLevel } from './numbers';
 import { formatP } from './pValues';
-import { LARGE_VIF } from './thresholds';
+import { LARGE_VIF, type UnusualRow, unusualRows } from './thresholds';
 
 /**
  * Plain-language readings of the engine's assumption checks, from its verdict codes (each test
@@ -102,9 +102,10 @@ export function overallReading(checks: AssumptionChecks): string {
   if (checks.largestVif === Number.POSITIVE_INFINITY) concerns.push('terms that are exact combinations of others');
   else if (checks.largestVif > LARGE_VIF) concerns.push(`strong collinearity (a VIF above ${LARGE_VIF})`);
   if (checks.exactFit) return ['exact fit: every residual is 0, so the residual checks do not apply', ...concerns].join('; ');
-  if (checks.unusualRows.length > 0) {
+  const unusual = unusualRows(checks);
+  if (unusual.length > 0) {
     const then = concerns.length > 0 ? `; then ${concerns.join(', ')}` : '';
-    return `worth a look first: ${unusualRowsReading(checks.unusualRows)}${then}`;
+    return `worth a look first: ${unusualRowsReading(unusual)}${then}`;
   }
   if (concerns.length === 0) return `nothing stands out at the ${formatLevel(1 - checks.alpha)} level`;
   return `worth a look: ${concerns.join(', ')}`;

@@ -6,7 +6,26 @@
 export { formatCount, formatFixed, formatLevel, formatNumber, formatShare, formatSigned, SIGNIFICANT_DIGITS } from './numbers';
 export { formatP, formatPValue, P_VALUE_DECIMALS, P_VALUE_FORMAT } from './pValues';
 export { decimalsFor, fixedFormat, formatDecimals, MINUS, roundedParts } from './decimals';
-export { CONDITION_BANDS, LARGE_VIF, NORMAL_KURTOSIS, NOTABLE_SKEWNESS } from './thresholds';
+export {
+  CONDITION_BANDS,
+  COOKS_NUMERATOR,
+  COOKS_RULE,
+  FLAG_TEXT,
+  HIGH_LEVERAGE_MULTIPLE,
+  highLeverageCount,
+  LARGE_STUDENTIZED,
+  LARGE_VIF,
+  LEVERAGE_RULE,
+  NORMAL_KURTOSIS,
+  NOTABLE_SKEWNESS,
+  type ResidualFlag,
+  residualFlags,
+  SCREENS_TEXT,
+  screenCutoffs,
+  UNUSUAL_COOKS_DISTANCE,
+  type UnusualRow,
+  unusualRows,
+} from './thresholds';
 export {
   breuschPaganReading,
   durbinWatsonMethodText,

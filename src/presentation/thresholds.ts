@@ -1,3 +1,5 @@
+import type { AssumptionChecks, CheckedRow, RowDiagnostics } from '../engine';
+
 /**
  * Rule-of-thumb cut-offs that decide only how a result is worded. Statistical decisions at
  * α = 1 − level are the engine's (its verdict codes); these are conventions for the words.
@@ -19,3 +21,91 @@ export const CONDITION_BANDS = { mild: 10, moderate: 30, serious: 100 } as const
  */
 export const NOTABLE_SKEWNESS = 0.5;
 export const NORMAL_KURTOSIS = { low: 2.5, high: 3.5 } as const;
+
+/**
+ * The screens of single rows, one definition for every surface: the Flag column of PLUMB.RESIDUALS,
+ * the report's residuals heading and its Cook's distance guide line, CHECKS' high-leverage count
+ * and unusual rows, and the pane's warnings. The engine gives the quantities (leverage, studentized
+ * residual, Cook's distance, the Bonferroni p at α); these rules of thumb only mark rows worth a
+ * look. Common practice, no single source: leverage above twice its average p/n, a deleted
+ * studentized residual beyond ±3, Cook's distance above 4/n.
+ */
+export const HIGH_LEVERAGE_MULTIPLE = 2;
+export const LARGE_STUDENTIZED = 3;
+export const COOKS_NUMERATOR = 4;
+
+/**
+ * Cook & Weisberg (Residuals and Influence in Regression, 1982): a Cook's distance above 1 marks a
+ * row that moves the fit, and puts it among CHECKS' unusual rows (from memory).
+ */
+export const UNUSUAL_COOKS_DISTANCE = 1;
+
+/** The cut-offs as they are written: "2p/n" and "4/n". */
+export const LEVERAGE_RULE = `${HIGH_LEVERAGE_MULTIPLE}p/n`;
+export const COOKS_RULE = `${COOKS_NUMERATOR}/n`;
+
+/** What the screens of PLUMB.RESIDUALS raise for a row. */
+export type ResidualFlag = 'high-leverage' | 'outlier' | 'influential';
+
+/**
+ * Each flag worded by the rule that raised it: PLUMB.CHECKS names outliers by the Bonferroni test
+ * and influential rows at Cook's distance above 1, so these words must not claim more than the
+ * screen found.
+ */
+export const FLAG_TEXT: Record<ResidualFlag, string> = {
+  'high-leverage': `high leverage (over ${LEVERAGE_RULE})`,
+  outlier: `large residual (|t| over ${LARGE_STUDENTIZED})`,
+  influential: `Cook's over ${COOKS_RULE}`,
+};
+
+/** The three screens in one line, for the heading above the residual table. */
+export const SCREENS_TEXT = `high leverage: h > ${LEVERAGE_RULE}; large residual: |studentized| > ${LARGE_STUDENTIZED}; ${FLAG_TEXT.influential}`;
+
+/** n rows used, p parameters estimated: the n and p of the rules. */
+interface ModelSize {
+  n: number;
+  p: number;
+}
+
+/** The cut-offs for a model of that size. */
+export function screenCutoffs({ n, p }: ModelSize): { leverage: number; studentized: number; cooksDistance: number } {
+  return { leverage: (HIGH_LEVERAGE_MULTIPLE * p) / n, studentized: LARGE_STUDENTIZED, cooksDistance: COOKS_NUMERATOR / n };
+}
+
+/** A row's flags, in the Flag column's order; a row the other rows fit exactly (t unbounded) is an outlier. */
+export function residualFlags(row: RowDiagnostics, size: ModelSize): ResidualFlag[] {
+  const cutoffs = screenCutoffs(size);
+  const flags: ResidualFlag[] = [];
+  if (row.leverage > cutoffs.leverage) flags.push('high-leverage');
+  if (Math.abs(row.studentized) > cutoffs.studentized || row.undefinedBecause === 'rest-fit-exactly') flags.push('outlier');
+  if (row.cooksDistance > cutoffs.cooksDistance) flags.push('influential');
+  return flags;
+}
+
+/** How many rows have leverage above 2p/n. */
+export function highLeverageCount({ rows, n, p }: ModelSize & { rows: readonly { leverage: number }[] }): number {
+  const cutoff = screenCutoffs({ n, p }).leverage;
+  return rows.filter((row) => row.leverage > cutoff).length;
+}
+
+/** A row CHECKS names first: an outlier by the Bonferroni test at α, or influential by Cook's distance above 1. */
+export interface UnusualRow extends CheckedRow {
+  influential: boolean;
+}
+
+/**
+ * The unusual rows, most extreme first. One such row can by itself produce the autocorrelation,
+ * uneven spread or non-normal shape the tests report, so readings name them first.
+ */
+export function unusualRows(checks: Pick<AssumptionChecks, 'rows'>): UnusualRow[] {
+  return checks.rows
+    .map((row): UnusualRow => ({ ...row, influential: row.cooksDistance > UNUSUAL_COOKS_DISTANCE }))
+    .filter((u) => u.outlier || u.influential)
+    .sort((a, b) => extremity(b) - extremity(a));
+}
+
+/** How far out a row is: its studentized residual, or for a row only Cook's distance marks, that distance. */
+function extremity(u: UnusualRow): number {
+  const t = Math.abs(u.studentized);
+  return Number.isNaN(t) ? u.cooksDistance : t;
+}

@@ -6,13 +6,14 @@
  * 10 (common practice, no source); Cook & Weisberg (1982) on a single row's influence.
  */
 import { describe, expect, it } from 'vitest';
-import { type AssumptionChecks, assumptionChecks, type UnusualRow } from '../../src/engine';
+import { type AssumptionChecks, assumptionChecks } from '../../src/engine';
 import {
   breuschPaganReading,
   durbinWatsonMethodText,
   durbinWatsonReading,
   largestVifTermReading,
   overallReading,
+  type UnusualRow,
   unusualRowsReading,
 } from '../../src/presentation';
 import { gaussian, mulberry32, randomProblem } from '../support/random';
@@ -64,18 +65,17 @@ function quietChecks(change: Partial<AssumptionChecks> = {}): AssumptionChecks {
     exactFit: false,
     largestCooksDistance: 0.2,
     largestCooksRow: 3,
-    highLeverageRows: 0,
     largestVif: 1.5,
     largestVifTerm: 'Dose',
     largestVifReason: undefined,
-    unusualRows: [],
+    rows: [],
     ...change,
   };
 }
 
 /** An unusual row; an outlier when its Bonferroni p is given (below α). */
 function unusual(row: number, studentized: number, cooksDistance: number, bonferroniP = Number.NaN): UnusualRow {
-  return { index: row - 2, row, studentized, bonferroniP, cooksDistance, outlier: bonferroniP < 0.05, influential: cooksDistance > 1 };
+  return { index: row - 2, row, leverage: 0.1, studentized, bonferroniP, cooksDistance, outlier: bonferroniP < 0.05, influential: cooksDistance > 1 };
 }
 
 describe('Durbin–Watson reading', () => {
@@ -203,7 +203,7 @@ describe('overall reading', () => {
         'non-normal residuals (Shapiro–Wilk p = 0.0200), lack of fit (against pure error, p = 0.0300), strong collinearity (a VIF above 10)',
     );
     const outlier = unusual(6, 5.2, 0.4, 0.001);
-    expect(overallReading({ ...checks, unusualRows: [outlier] })).toMatch(
+    expect(overallReading({ ...checks, rows: [outlier] })).toMatch(
       /^worth a look first: row 6 \(studentized residual 5\.2, Bonferroni p = 0\.0010\) stands out: check its data first, since such a row can cause the other signals; then negative autocorrelation/,
     );
     // Above 5000 rows Jarque–Bera is the normality test, and named as such.

@@ -21,3 +21,8 @@ export function badCellMessage(cell: Cell, place: string): string {
       : ' Use a number, or leave the cell blank to skip the row.';
   return `${place} holds ${describeCell(cell)}.${hint}`;
 }
+
+/** The message for a weight that is not positive; `place` names its cell, e.g. `weights cell Data!D5`. */
+export function badWeightMessage(value: number, place: string): string {
+  return `${place} is ${value}; every weight must be a positive number.`;
+}

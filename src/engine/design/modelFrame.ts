@@ -3,7 +3,7 @@ import { INTERCEPT_NAME } from '../fit/design';
 import type { ModelData } from '../types';
 import { type Cell, type CellGrid, classifyCell, describeCell, shortName } from './cells';
 import { codeCategorical, type SourceColumn } from './categorical';
-import { badCellMessage, isCategoricalColumn } from './cellRules';
+import { badCellMessage, badWeightMessage, isCategoricalColumn } from './cellRules';
 import { numericFrame } from './numericFrame';
 import { readNumericCells } from './numericCells';
 import { cellPlace, columnLetters, type RangeOrigin, rowNumber } from './origin';
@@ -28,6 +28,12 @@ export interface FrameOrigins {
   y?: RangeOrigin;
   x?: readonly (RangeOrigin | undefined)[];
   weights?: RangeOrigin;
+  /**
+   * For each x block, the 0-based worksheet column its first column is named by when it has no
+   * header, where that is not its origin's: the pane names the predictors a live report gathers
+   * onto its own sheet by the columns there, the only ones the report's cell functions see.
+   */
+  xNamedAt?: readonly (number | undefined)[];
 }
 
 export interface SkippedRow {
@@ -89,7 +95,7 @@ export function buildModelFrame(input: FrameInput): ModelFrame {
   const columnWithinBlock = input.x.flatMap((block) => Array.from({ length: block[0]?.length ?? 0 }, (_, j) => j));
   const hasHeader = rowCount > 1 && classifyCell(input.y[0][0]).kind === 'text';
   const firstData = hasHeader ? 1 : 0;
-  const responseName = hasHeader ? shortName((classifyCell(input.y[0][0]) as { text: string }).text) : 'y';
+  const responseName = hasHeader ? shortName((classifyCell(input.y[0][0]) as { text: string }).text) : worksheetColumnName(origins.y?.column, 0, 'y');
   const located = (j: number, name: string, categorical: boolean): Located => ({
     argument: blockArgument(columnBlocks[j]),
     origin: origins.x?.[columnBlocks[j]],
@@ -98,7 +104,9 @@ export function buildModelFrame(input: FrameInput): ModelFrame {
     name,
     categorical,
   });
-  const names = xColumns.map((cellAt, j) => headerName(hasHeader ? classifyCell(cellAt(0)) : undefined, j, located(j, '', false)));
+  const unnamed = (j: number): string =>
+    worksheetColumnName(origins.xNamedAt?.[columnBlocks[j]] ?? origins.x?.[columnBlocks[j]]?.column, columnWithinBlock[j], `x${j + 1}`);
+  const names = xColumns.map((cellAt, j) => headerName(hasHeader ? classifyCell(cellAt(0)) : undefined, unnamed(j), located(j, '', false)));
 
   // The common case, every cell a number, a blank or #N/A, in one pass; otherwise the general path.
   const numeric = readNumericCells(input.y, input.x, input.weights, firstData, [responseName, ...names, 'weight'], rowNumber(origins.y, 0));
@@ -136,7 +144,7 @@ export function buildModelFrame(input: FrameInput): ModelFrame {
       continue;
     }
     if (wCell !== undefined && wCell.kind === 'number' && !(wCell.value > 0)) {
-      throw new EngineError('bad-weight', `${placeOf(wPlace, position)} is ${wCell.value}; every weight must be a positive number.`);
+      throw new EngineError('bad-weight', badWeightMessage(wCell.value, placeOf(wPlace, position)));
     }
     usedRows.push(row);
     y.push((yCell as { value: number }).value);
@@ -226,8 +234,18 @@ function placeOf(where: Located, position: number): string {
   return cellPlace(where.argument, where.origin, position, where.column, where.singleColumn);
 }
 
-function headerName(cell: Cell | undefined, j: number, where: Located): string {
-  if (cell === undefined || cell.kind === 'missing') return `x${j + 1}`;
+/**
+ * A column without a header is named as the user finds it on the sheet, "column C", when its
+ * range's worksheet column is known; only without one (an array constant, a direct call) by its
+ * place in the fit, `fallback` ("y", "x1", …).
+ */
+function worksheetColumnName(firstColumn: number | undefined, within: number, fallback: string): string {
+  return firstColumn === undefined ? fallback : `column ${columnLetters(firstColumn + within)}`;
+}
+
+/** A predictor's name: its header, else (no header row, or a blank header cell) `unnamed`. */
+function headerName(cell: Cell | undefined, unnamed: string, where: Located): string {
+  if (cell === undefined || cell.kind === 'missing') return unnamed;
   if (cell.kind === 'text') return shortName(cell.text);
   throw new EngineError(
     'bad-value',

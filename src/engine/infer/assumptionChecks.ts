@@ -7,7 +7,7 @@ import { type BreuschPagan, type BreuschPaganReason, breuschPagan } from './breu
 import { type CollinearityReason, collinearity } from './collinearity';
 import { durbinWatsonMoments } from './durbinWatson';
 import { type DurbinWatsonExact, type DurbinWatsonExactReason, durbinWatsonExact } from './durbinWatsonExact';
-import { highLeverageCount, residualDiagnostics, type RowDiagnostics } from './influence';
+import { residualDiagnostics, type RowDiagnostics } from './influence';
 import { type JarqueBera, jarqueBera } from './jarqueBera';
 import { type LackOfFit, type LackOfFitReason, lackOfFit } from './lackOfFit';
 import { bonferroniP, type OutlierTest, type OutlierTestReason, outlierTest } from './outlierTest';
@@ -17,9 +17,10 @@ import { SHAPIRO_WILK_MAX_N, type ShapiroWilk, type ShapiroWilkReason, shapiroWi
  * The model's assumptions checked in one place: serial independence (Durbin–Watson, exact up to
  * EXACT_MAX_ROWS rows), constant spread (Breusch–Pagan, Koenker's form), normal residuals
  * (Shapiro–Wilk for 3 ≤ n ≤ 5000, Jarque–Bera above), the most outlying row (the Bonferroni outlier
- * test), the model's shape against pure error where settings repeat (lack of fit), influential and
- * high-leverage rows, and collinearity (largest VIF). Each test is decided at α = 1 − level and the
- * decision returned as a verdict code; the words for it are the presentation module's.
+ * test), the model's shape against pure error where settings repeat (lack of fit), each row's
+ * leverage, studentized residual and Cook's distance, and collinearity (largest VIF). Each test is
+ * decided at α = 1 − level and the decision returned as a verdict code; the words for it, and the
+ * rule-of-thumb screens of the rows (high leverage, influential), are the presentation module's.
  *
  * Weights: the residual tests use uᵢ = √wᵢ·eᵢ, the residuals that share one variance under the model
  * (see each test); lack of fit weights its pure error alike. Known σ: the tests are free of σ and
@@ -46,20 +47,13 @@ export interface AssumptionChecks {
   largestCooksDistance: number;
   /** Index of that row among the rows of `data`, or −1. */
   largestCooksRow: number;
-  /** Rows with leverage above 2p/n. */
-  highLeverageRows: number;
   /** Infinity when a term is constant or an exact combination of others; NaN without predictors. */
   largestVif: number;
   largestVifTerm: string | undefined;
   /** Why largestVif is infinite. */
   largestVifReason: CollinearityReason | undefined;
-  /**
-   * Rows that are outliers (their own Bonferroni p below α, as car::outlierTest lists them) or
-   * influential (Cook's distance above UNUSUAL_COOKS_DISTANCE), most extreme first. One such row can
-   * by itself produce the autocorrelation, uneven spread or non-normal shape the tests report, so
-   * readings name them first.
-   */
-  unusualRows: UnusualRow[];
+  /** Every row of `data`, in order, with what the screens of unusual and high-leverage rows read. */
+  rows: CheckedRow[];
 }
 
 /** Durbin–Watson read on the two-sided p at α: the sign of the autocorrelation found, or why d was not tested. */
@@ -75,24 +69,21 @@ export type OutlierVerdict = 'outlier' | 'none' | 'exact-fit' | OutlierTestReaso
 /** Lack of fit at α, or why it could not be tested (most often: no setting repeats). */
 export type LackOfFitVerdict = 'lack-of-fit' | 'none' | 'exact-fit' | LackOfFitReason;
 
-/**
- * Cook & Weisberg (Residuals and Influence in Regression, 1982): a Cook's distance above 1 marks a
- * row that moves the fit, and puts it among the unusual rows.
- */
-const UNUSUAL_COOKS_DISTANCE = 1;
-
-export interface UnusualRow {
+/** One row's quantities for the screens of src/presentation/thresholds.ts, and its outlier verdict at α. */
+export interface CheckedRow {
   /** Index among the rows of `data`. */
   index: number;
   /** The row's number as the user knows it: its worksheet row when given, else its place (1-based). */
   row: number;
+  /** hᵢ, as in residualDiagnostics. */
+  leverage: number;
   /** ±Infinity for a row the other rows fit exactly. */
   studentized: number;
   /** Its Bonferroni p; NaN where not computed (no studentized residual, or |t| too small to be an outlier). */
   bonferroniP: number;
   cooksDistance: number;
+  /** Its own Bonferroni p is below α, as car::outlierTest lists outliers. */
   outlier: boolean;
-  influential: boolean;
 }
 
 /**
@@ -127,21 +118,18 @@ export function assumptionChecks(data: ModelData, settings?: FitSettings, rowNum
     }
   });
   const largestCooksDistance = largestCooksRow < 0 ? Number.NaN : diagnostics.rows[largestCooksRow].cooksDistance;
-  const unusualRows = diagnostics.rows
-    .map((d, index): UnusualRow => {
-      const p = bonferroniOf(studentized[index]);
-      return {
-        index,
-        row: rowNumber(index),
-        studentized: studentized[index],
-        bonferroniP: p,
-        cooksDistance: d.cooksDistance,
-        outlier: p < alpha,
-        influential: d.cooksDistance > UNUSUAL_COOKS_DISTANCE,
-      };
-    })
-    .filter((u) => u.outlier || u.influential)
-    .sort((a, b) => extremity(b) - extremity(a));
+  const rows = diagnostics.rows.map((d, index): CheckedRow => {
+    const p = bonferroniOf(studentized[index]);
+    return {
+      index,
+      row: rowNumber(index),
+      leverage: d.leverage,
+      studentized: studentized[index],
+      bonferroniP: p,
+      cooksDistance: d.cooksDistance,
+      outlier: p < alpha,
+    };
+  });
 
   const terms = (data.x[0]?.length ?? 0) > 0 ? collinearity(data.x, data.names, data.weights, fit.settings).terms : [];
   // Centered VIFs only: a term standing in for the intercept has none, and its standard error is not inflated.
@@ -169,11 +157,10 @@ export function assumptionChecks(data: ModelData, settings?: FitSettings, rowNum
     exactFit,
     largestCooksDistance,
     largestCooksRow,
-    highLeverageRows: highLeverageCount(diagnostics),
     largestVif: top?.vif ?? Number.NaN,
     largestVifTerm: top?.name,
     largestVifReason: top?.undefinedBecause,
-    unusualRows,
+    rows,
   };
 }
 
@@ -193,10 +180,4 @@ function durbinWatsonVerdict(dw: DurbinWatsonExact, alpha: number): DurbinWatson
   if (dw.undefinedBecause !== undefined) return dw.undefinedBecause;
   if (!(dw.pTwoSided < alpha)) return 'none';
   return dw.pPositive < dw.pNegative ? 'positive-autocorrelation' : 'negative-autocorrelation';
-}
-
-/** How far out a row is: its studentized residual, or for a row only Cook's distance flags, that distance. */
-function extremity(u: UnusualRow): number {
-  const t = Math.abs(u.studentized);
-  return Number.isNaN(t) ? u.cooksDistance : t;
 }

@@ -16,6 +16,9 @@ import type { FitSettings, ModelData } from '../types';
  * the noise level, and that level is given); the studentized residual and DFFITS still use the
  * deleted σ̂₍ᵢ₎, because their purpose is to judge row i against a spread that row i did not help
  * to estimate.
+ *
+ * Which rows these numbers make worth a look (rules of thumb such as leverage over 2p/n) is the
+ * presentation's choice, not the engine's: see src/presentation/thresholds.ts.
  */
 export interface RowDiagnostics {
   fitted: number;
@@ -31,12 +34,9 @@ export interface RowDiagnostics {
   cooksDistance: number;
   /** tᵢ·√(hᵢ / (1 − hᵢ)) with tᵢ the studentized residual. */
   dffits: number;
-  flags: DiagnosticFlag[];
   /** Why some of the values above are NaN (or, for exactFit with σ known, why only some are). */
   undefinedBecause: UndefinedReason | undefined;
 }
-
-export type DiagnosticFlag = 'high-leverage' | 'outlier' | 'influential';
 
 /**
  * - leverage-one: 1 − hᵢ ≤ 1e-12, the fit passes through the row; nothing can be scaled by it.
@@ -44,7 +44,7 @@ export type DiagnosticFlag = 'high-leverage' | 'outlier' | 'influential';
  *   distance are still 0, the studentized residual and DFFITS are not defined.
  * - no-deleted-df: n = p + 1, so σ̂₍ᵢ₎ has no degrees of freedom.
  * - rest-fit-exactly: without row i the other rows fit exactly, σ̂₍ᵢ₎ = 0 and tᵢ is unbounded;
- *   the row is still flagged as an outlier.
+ *   a screen may still mark the row as an outlier.
  */
 export type UndefinedReason = 'leverage-one' | 'exact-fit' | 'no-deleted-df' | 'rest-fit-exactly';
 
@@ -54,8 +54,6 @@ export interface ResidualDiagnostics {
   /** Parameters estimated (aliased terms excluded): the p of every formula. */
   p: number;
   sigmaKnown: boolean;
-  /** The cut-offs the flags were raised at. */
-  thresholds: { leverage: number; studentized: number; cooksDistance: number };
 }
 
 /**
@@ -76,9 +74,6 @@ export function residualDiagnostics(data: ModelData, settings?: FitSettings): Re
   const p = fit.rank;
   const sigmaKnown = fit.settings.knownSigma !== undefined;
   const { yScale, scaledRss, perfectFit } = solution;
-  // Common-practice cut-offs (no single source): leverage above twice its average p/n, a deleted
-  // studentized residual beyond ±3, Cook's distance above 4/n.
-  const thresholds = { leverage: (2 * p) / n, studentized: 3, cooksDistance: 4 / n };
 
   // Scaled units (divided by yScale) throughout, so data near 1e±300 neither overflow nor underflow.
   const sigmaScaled = sigmaKnown ? (fit.settings.knownSigma as number) / yScale : Math.sqrt(scaledRss / (n - p));
@@ -97,7 +92,6 @@ export function residualDiagnostics(data: ModelData, settings?: FitSettings): Re
       studentized: Number.NaN,
       cooksDistance: Number.NaN,
       dffits: Number.NaN,
-      flags: [],
       undefinedBecause: undefined,
     };
     if (oneMinusH <= LEVERAGE_ONE_TOLERANCE) {
@@ -116,18 +110,9 @@ export function residualDiagnostics(data: ModelData, settings?: FitSettings): Re
         row.dffits = row.studentized * Math.sqrt(h / oneMinusH);
       }
     }
-    row.flags = flagsOf(row, thresholds);
     return row;
   });
-  return { rows, n, p, sigmaKnown, thresholds };
-}
-
-function flagsOf(row: RowDiagnostics, thresholds: ResidualDiagnostics['thresholds']): DiagnosticFlag[] {
-  const flags: DiagnosticFlag[] = [];
-  if (row.leverage > thresholds.leverage) flags.push('high-leverage');
-  if (Math.abs(row.studentized) > thresholds.studentized || row.undefinedBecause === 'rest-fit-exactly') flags.push('outlier');
-  if (row.cooksDistance > thresholds.cooksDistance) flags.push('influential');
-  return flags;
+  return { rows, n, p, sigmaKnown };
 }
 
 /**
@@ -155,9 +140,4 @@ export function maxCooksDistance(diagnostics: ResidualDiagnostics): number {
     (max, row) => (Number.isFinite(row.cooksDistance) && (Number.isNaN(max) || row.cooksDistance > max) ? row.cooksDistance : max),
     Number.NaN,
   );
-}
-
-/** Rows whose leverage exceeds 2p/n. */
-export function highLeverageCount(diagnostics: ResidualDiagnostics): number {
-  return diagnostics.rows.filter((row) => row.flags.includes('high-leverage')).length;
 }

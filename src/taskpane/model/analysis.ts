@@ -16,6 +16,7 @@ import type { PaneChoices } from './choices';
 import { labelled, type LabelledPrediction, type NewRowsRead, type PredictorColumn, readNewRowInputs } from './newRowPredictions';
 import type { CellsAnalysis } from './paneAnalysis';
 import { type ColumnFacts, paneWarnings } from './paneWarnings';
+import { gatheredColumns } from './reportSources';
 
 /** The cells the pane has read, one grid per chosen range, and the ranges they were read from. */
 export interface ReadData {
@@ -69,7 +70,9 @@ function predictions(frame: ModelFrame, fit: ModelFit, newRows: NewRowsRead, col
  * The in-memory source of the pane's analysis, from the engine (and so from the same cache as the
  * cell functions). Base predictors come first and added ones last, the order the report's
  * formulas use. Each column goes in as its own block with its worksheet origin, so rows are
- * numbered as the sheet numbers them and a bad cell is named by its address.
+ * numbered as the sheet numbers them and a bad cell is named by its address. A column without a
+ * header is named by the worksheet column the live report's formulas will read it from: its own,
+ * or, for predictors the report gathers, the report sheet's (reportSources.ts).
  */
 export function analyzeCells(data: ReadData, choices: PaneChoices): CellsAnalysis {
   const settings = settingsOf(choices);
@@ -84,6 +87,7 @@ export function analyzeCells(data: ReadData, choices: PaneChoices): CellsAnalysi
       y: originOf(sources.response),
       x: order.map((j) => originOf(sources.predictors[j])),
       weights: sources.weights === undefined ? undefined : originOf(sources.weights),
+      xNamedAt: gatheredColumns(order.map((j) => sources.predictors[j])),
     },
   });
   let fit: ModelFit | undefined;

@@ -1,6 +1,6 @@
 import { EngineError, type FitSettings } from '../../engine';
 import type { PaneChoices } from './choices';
-import { knownSigmaOf } from './noiseSdField';
+import { knownSigmaOf, noiseSdProblem } from './noiseSdField';
 
 export function settingsOf(choices: PaneChoices): FitSettings {
   return {
@@ -9,6 +9,15 @@ export function settingsOf(choices: PaneChoices): FitSettings {
     knownSigma: knownSigmaOf(choices.knownSigma),
     covariance: choices.robust,
   };
+}
+
+/**
+ * While the known-σ field holds an entry it refuses, the fit estimates σ (settingsOf): the results
+ * say so, so they are not read as fitted with the σ typed. Undefined when the entry is used or empty.
+ */
+export function unusedSigmaNotice(choices: PaneChoices): string | undefined {
+  if (noiseSdProblem(choices.knownSigma) === undefined) return undefined;
+  return `Known σ not used: "${choices.knownSigma.trim()}" is not a σ the fit can take (see the Known σ field), so σ is estimated from the data.`;
 }
 
 /** An engine error's own words; anything else is a bug, said as such. */

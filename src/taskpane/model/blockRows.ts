@@ -1,6 +1,7 @@
 import { cellAddress, quoteSheetName, type RangeRef } from '../../addressing/a1';
 import {
   badCellMessage,
+  badWeightMessage,
   buildModelFrame,
   type Cell,
   classifyCell,
@@ -47,8 +48,9 @@ const EXAMPLES = 5;
  * The header as the engine decides it for the cell functions and the in-memory pane (its model
  * frame, not a copy of its rule): the frame of the first row and, when the ranges have more rows,
  * a stand-in data row of zeros, which can neither fail nor change what the first row says. The
- * predictors go in `order` (sheet order unless given), as the fit reads them, since a column
- * without a header is named by its place there; names come back in sheet order. A numeric
+ * predictors go in `order` (sheet order unless given), as the fit reads them; a column without a
+ * header is named by its worksheet column. Names come back in sheet order. Streamed data get a
+ * values-only report, which gathers nothing, so no column is named by a report sheet's. A numeric
  * predictor header under a text response header is the engine's error, naming the cell.
  */
 export function detectHeader(first: BlockValues, sources: BlockSources, totalRows: number, order?: readonly number[]): BlockHeader {
@@ -139,10 +141,7 @@ export function convertBlock(values: BlockValues, sources: BlockSources, header:
     }
     const weight = located[p + 1]?.cell;
     if (weight !== undefined && weight.kind === 'number' && !(weight.value > 0)) {
-      throw new EngineError(
-        'bad-value',
-        `The weight in ${place(sources.weights as RangeRef, offset + i)} is ${weight.value}; every weight must be a positive number.`,
-      );
+      throw new EngineError('bad-value', badWeightMessage(weight.value, `weights cell ${place(sources.weights as RangeRef, offset + i)}`));
     }
     used[i] = 1;
     rows++;

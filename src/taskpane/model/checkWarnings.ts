@@ -1,5 +1,5 @@
 import type { AssumptionChecks } from '../../engine';
-import { durbinWatsonPText, formatFixed, formatP, LARGE_VIF, unusualRowsReading } from '../../presentation';
+import { durbinWatsonPText, formatFixed, formatP, LARGE_VIF, unusualRows, unusualRowsReading } from '../../presentation';
 
 export interface CheckWarning {
   text: string;
@@ -16,8 +16,9 @@ export interface CheckWarning {
  */
 export function checkWarnings(checks: AssumptionChecks): CheckWarning[] {
   const warnings: CheckWarning[] = [];
-  if (checks.unusualRows.length > 0) {
-    const reading = unusualRowsReading(checks.unusualRows);
+  const unusual = unusualRows(checks);
+  if (unusual.length > 0) {
+    const reading = unusualRowsReading(unusual);
     warnings.push({ text: `${reading[0].toUpperCase()}${reading.slice(1)}.`, suggestsRobust: false });
   }
   if (checks.breuschPagan.verdict === 'uneven-spread') {

@@ -5,6 +5,7 @@
  * in place as the data or the settings change.
  */
 import { formatAbsolute, type RangeRef } from '../../addressing/a1';
+import { COOKS_NUMERATOR, COOKS_RULE, FLAG_TEXT } from '../../presentation';
 
 /** 'auto': Excel scales the axis itself; otherwise the bounds are fixed when the report is written. */
 export type AxisBounds = 'auto' | { minimum: number; maximum: number };
@@ -59,13 +60,6 @@ export interface ReportChartsPlan {
   charts: ReportChartPlan[];
   cells: GuideCell[];
 }
-
-/**
- * Cook's distance cut-off: 4/n, the engine's own flag rule (engine/infer/influence.ts,
- * `thresholds.cooksDistance`, common practice, no single source), so the line and the
- * "influential" flags of PLUMB.RESIDUALS agree.
- */
-const COOKS_CUTOFF_NUMERATOR = 4;
 
 /**
  * Excel's automatic scale (Microsoft's knowledge-base article "How Chart Axis Limits Are
@@ -165,13 +159,14 @@ export function planReportCharts(sources: ReportChartSources, placement: ReportC
   const qqLine = diagonal(top + 4, 'y = x on the normal Q–Q plot', qq.normalQuantile);
 
   const cooksRow = top + 6;
-  const cutoff = `=${COOKS_CUTOFF_NUMERATOR}/COUNT(${refs(residuals.row)})`;
-  label(cooksRow, left, `${COOKS_CUTOFF_NUMERATOR}/n on Cook's distance (n = rows used; the cut-off of the residual table's "Cook's over 4/n" flag)`);
+  // The Cook's distance screen of src/presentation/thresholds.ts, so the line and the residual table's flags agree.
+  const cutoff = `=${COOKS_NUMERATOR}/COUNT(${refs(residuals.row)})`;
+  label(cooksRow, left, `${COOKS_RULE} on Cook's distance (n = rows used; the cut-off of the residual table's "${FLAG_TEXT.influential}" flag)`);
   formula(cooksRow, xColumn, `=MIN(${refs(residuals.row)})`);
   formula(cooksRow + 1, xColumn, `=MAX(${refs(residuals.row)})`);
   formula(cooksRow, yColumn, cutoff);
   formula(cooksRow + 1, yColumn, cutoff);
-  const cooksLine: ReportChartSeries = { name: `${COOKS_CUTOFF_NUMERATOR}/n`, x: pair(cooksRow, xColumn), y: pair(cooksRow, yColumn), drawn: 'line' };
+  const cooksLine: ReportChartSeries = { name: COOKS_RULE, x: pair(cooksRow, xColumn), y: pair(cooksRow, yColumn), drawn: 'line' };
 
   const fittedAndObserved = axisBoundsFor([...sources.now.fitted, ...sources.now.observed]);
   const points = (name: string, x: RangeRef, y: RangeRef): ReportChartSeries => ({ name, x, y, drawn: 'points' });
@@ -204,7 +199,7 @@ export function planReportCharts(sources: ReportChartSources, placement: ReportC
     },
     {
       name: 'CooksDistance',
-      title: `Cook's distance by row: points above the ${COOKS_CUTOFF_NUMERATOR}/n line steer the fit`,
+      title: `Cook's distance by row: points above the ${COOKS_RULE} line steer the fit`,
       series: [points("Cook's distance", residuals.row, residuals.cooksDistance), cooksLine],
       // The Row axis is bounded by the data's rows, which do not change with the values.
       xAxis: { title: 'Row', bounds: axisBoundsFor([sources.dataRows.first, sources.dataRows.last]) },

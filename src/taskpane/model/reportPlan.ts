@@ -3,8 +3,8 @@ import { QQ_HEADER } from '../../cellGrids/qqGrid';
 import { RESIDUALS_HEADER } from '../../cellGrids/residualsGrid';
 import type { PaneChoices, ResolvedRanges } from './choices';
 import type { CellsAnalysis } from './paneAnalysis';
-import { decimalsFor } from '../../presentation';
-import { fitModel } from '../../engine';
+import { decimalsFor, SCREENS_TEXT } from '../../presentation';
+import { COVARIANCE_KINDS, fitModel } from '../../engine';
 import { type ReportChartPlan, planReportCharts } from './reportCharts';
 import { type ReportCell, type ReportFormat, type ReportSection, SectionWriter, stackSections, stackTops } from './reportLayout';
 import {
@@ -59,17 +59,25 @@ function columnOf(headers: readonly string[], header: string): number {
 /**
  * The decimals of the term table's estimate, standard error and interval columns, one count per
  * column so that it suits whichever term a row shows: editing the intercept cell moves every term
- * up or down a row. It is the most any term needs in either intercept setting, so each row shows
- * at least three significant digits of its standard error. The other setting is fitted on the
- * same coded columns; with a categorical column PLUMB.TERMS then codes one level more, whose
- * standard error is on the scale of the intercept's.
+ * up or down a row, and editing the Standard errors cell (classical, HC0, HC1, HC3) can shrink a
+ * standard error. It is the most any term needs in any of those settings, so each row shows at
+ * least three significant digits of its standard error whatever the cells are set to. The other
+ * settings are fitted on the same coded columns; with a categorical column PLUMB.TERMS then codes
+ * one level more without the intercept, whose standard error is on the scale of the intercept's.
+ * A standard error another setting cannot give (NaN, e.g. HC3 of a term a leverage-1 row decides)
+ * asks for no digits.
  */
 function termDecimals({ frame, fit, settings }: CellsAnalysis): number {
   const standardErrors = (fit?.terms ?? []).map((t) => t.standardError);
-  try {
-    standardErrors.push(...fitModel(frame.data, { ...settings, intercept: !settings.intercept }).terms.map((t) => t.standardError));
-  } catch {
-    // The other setting cannot be fitted (too few rows for one more parameter): the current one decides.
+  for (const intercept of [true, false]) {
+    for (const covariance of COVARIANCE_KINDS) {
+      try {
+        const terms = fitModel(frame.data, { ...settings, intercept, covariance }).terms;
+        standardErrors.push(...terms.map((t) => t.standardError).filter((se) => se > 0 && Number.isFinite(se)));
+      } catch {
+        // This setting cannot be fitted (too few rows for one more parameter): the others decide.
+      }
+    }
   }
   return Math.max(2, ...standardErrors.map(decimalsFor));
 }
@@ -157,8 +165,7 @@ export function planReport({ sheetName, ranges, choices, analysis, writtenAt }: 
       }),
     );
   }
-  const residualsHeading =
-    "Every row used, with its residual and screening flags (high leverage: h > 2p/n; large residual: |studentized| > 3; Cook's over 4/n)";
+  const residualsHeading = `Every row used, with its residual and screening flags (${SCREENS_TEXT})`;
   const residuals = spillSection(sheetName, residualsHeading, true, plumb('RESIDUALS', l.y, l.x), 1 + dataRows);
   sections.push(
     checksSection(sheetName, `Each check is read at 1 − level. The charts on the right show the same residuals. ${notes.checks}`, plumb('CHECKS', l.y, l.x)),

@@ -33,6 +33,22 @@ export function joinRuns(columns: readonly RangeRef[]): RangeRef[] {
   return runs;
 }
 
+/**
+ * The report-sheet column each predictor (columns in fit order) is gathered into, or undefined for
+ * every one when they form one block the report reads where it is. Gathered columns keep their
+ * blank or missing headers, and the cell functions see only the report sheet, so a column without
+ * a header reads there as, say, "column Y"; the pane names it so too, and pane and report agree.
+ */
+export function gatheredColumns(ordered: readonly RangeRef[]): (number | undefined)[] {
+  if (joinRuns(ordered).length <= 1) return ordered.map(() => undefined);
+  let next = GATHER_COLUMN;
+  return ordered.map((column) => {
+    const at = next;
+    next += columnCount(column);
+    return at;
+  });
+}
+
 /** "$Y$1:$AA$61": a block of the report sheet, named without its sheet as formulas on that sheet do. */
 function onReportSheet(block: RangeRef): string {
   const text = formatAbsolute(block);

@@ -6,6 +6,7 @@ import {
   fitAccumulated,
   type ModelFit,
   type NestedComparison,
+  NOTHING_ADDED_MESSAGE,
   type SkippedRow,
 } from '../../engine';
 import { failureMessage, fitOrder, settingsOf } from './analysisParts';
@@ -169,7 +170,7 @@ function nestedStreamed(full: AccumulatedRows, fullFit: ModelFit, baseColumns: n
   ).fit;
   const dfNumerator = fullFit.rank - base.rank;
   if (dfNumerator <= 0) {
-    throw new EngineError('nothing-added', 'The added columns are combinations of the base columns, so they cannot change the fit: there is nothing to test.');
+    throw new EngineError('nothing-added', NOTHING_ADDED_MESSAGE);
   }
   const corner = fitAccumulated(trailingCorner(full, baseColumns, base.rank), { ...settings, intercept: false }).fit;
   if (corner.fDf[0] !== dfNumerator) {

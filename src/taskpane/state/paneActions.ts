@@ -11,6 +11,8 @@ export type PaneAction =
   | { type: 'selected'; field: RangeFieldName; address: string; append: boolean }
   /** The selection does not suit the field; the field keeps its address. */
   | { type: 'selectionRefused'; problem: FieldProblem }
+  /** Reading the data met a cell the field's range should not hold; the field shows why. */
+  | { type: 'readRefused'; problem: FieldProblem }
   /** The choices with whole columns clipped to the rows in use, and what is wrong with them. */
   | { type: 'checked'; chosen: PaneChoices; problems: FieldProblem[] }
   /** A fresh read begins: nothing from the last one is shown meanwhile. */

@@ -25,6 +25,7 @@ export function paneReducer(state: PaneState, action: PaneAction): PaneState {
       return withChoices(state, choices, [action.field]);
     }
     case 'selectionRefused':
+    case 'readRefused':
       return { ...state, problems: [...state.problems.filter((p) => p.field !== action.problem.field), action.problem] };
     case 'checked':
       return { ...state, choices: action.chosen, problems: rangeProblems(action.problems) };

@@ -1,4 +1,5 @@
 import { type Dispatch, useRef } from 'preact/hooks';
+import { EngineError } from '../../engine';
 import { freezeActiveReport } from '../excel/freezeCopy';
 import { ReadCancelled } from '../excel/readRowBlocks';
 import { missingSheetProblems } from '../excel/readRanges';
@@ -13,6 +14,7 @@ import { type PaneData, readData } from '../readData';
 import { refreshValuesReport, writeValuesReport } from '../valuesReport';
 import type { PaneAction } from './paneActions';
 import type { PaneState, RangeFieldName } from './paneState';
+import { fieldOfFailure } from './readFailure';
 
 export interface PaneCommands {
   takeSelection(field: RangeFieldName, append?: boolean): Promise<void>;
@@ -59,14 +61,19 @@ export function usePaneCommands(state: PaneState, dispatch: Dispatch<PaneAction>
     return ranges === undefined ? undefined : { ranges, chosen };
   };
 
-  /** Runs a block read with the progress bar and Cancel; a cancelled read leaves nothing behind. */
-  const withReading = async (run: (progress: (read: number, total: number) => void, signal: AbortSignal) => Promise<void>) => {
+  /**
+   * Runs a block read with the progress bar and Cancel; a cancelled read leaves nothing behind. A
+   * bad cell met while reading the data (`fromFields`) is shown beside the field it belongs to.
+   */
+  const withReading = async (run: (progress: (read: number, total: number) => void, signal: AbortSignal) => Promise<void>, fromFields = false) => {
     const controller = new AbortController();
     cancel.current = controller;
     try {
       await run((read, total) => dispatch({ type: 'readProgress', read, total }), controller.signal);
     } catch (error) {
-      failed(error instanceof ReadCancelled ? 'Reading cancelled' : failure(error));
+      const problem = fromFields && error instanceof EngineError ? fieldOfFailure(error.message) : undefined;
+      if (problem !== undefined) dispatch({ type: 'readRefused', problem });
+      else failed(error instanceof ReadCancelled ? 'Reading cancelled' : failure(error));
     } finally {
       cancel.current = undefined;
       dispatch({ type: 'readEnded' });
@@ -91,7 +98,7 @@ export function usePaneCommands(state: PaneState, dispatch: Dispatch<PaneAction>
     let read: PaneData | undefined;
     await withReading(async (progress, signal) => {
       read = await readData(ranges, progress, signal);
-    });
+    }, true);
     if (read !== undefined) {
       dispatch({ type: 'dataRead', data: read, chosen });
       await watchDataSheets(ranges);

@@ -10,6 +10,14 @@ function categoricalText(analysis: PaneAnalysis): string | undefined {
   return described.length === 0 ? undefined : `Categorical: ${described.join('; ')}.`;
 }
 
+/** The names the pane gives the columns: headers, else worksheet columns (a column without a header is named so too). */
+function namesText(analysis: PaneAnalysis): string {
+  const predictors = analysis.predictorNames.map((n) => `"${n}"`).join(', ');
+  if (analysis.hasHeader) return `Headers found: response "${analysis.responseName}", predictors ${predictors}.`;
+  const gathered = analysis.source === 'cells' ? '; predictors the live report gathers from separate areas, by their column on the report sheet' : '';
+  return `No header row found: columns are named by their worksheet column, response "${analysis.responseName}", predictors ${predictors}${gathered}.`;
+}
+
 /** What the pane understood of the data, however they were read: headers, rows used and skipped, categories. */
 export function AnalysisSummary({ analysis }: { analysis: PaneAnalysis }) {
   const { skippedExamples, rowsSkipped } = analysis;
@@ -17,11 +25,7 @@ export function AnalysisSummary({ analysis }: { analysis: PaneAnalysis }) {
   const categorical = categoricalText(analysis);
   return (
     <div class="data-summary" aria-label="What was read">
-      <p>
-        {analysis.hasHeader
-          ? `Headers found: response "${analysis.responseName}", predictors ${analysis.predictorNames.map((n) => `"${n}"`).join(', ')}.`
-          : 'No header row found: columns are named x1, x2, …'}
-      </p>
+      <p>{namesText(analysis)}</p>
       <p>
         Rows used: <strong>{formatCount(analysis.rowsUsed)}</strong>. Rows skipped: <strong>{formatCount(rowsSkipped)}</strong>
         {examples.length > 0 && ` (${examples.join('; ')}${rowsSkipped > examples.length ? '; …' : ''})`}.

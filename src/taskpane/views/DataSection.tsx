@@ -1,3 +1,4 @@
+import { analysisProblem } from '../state/readFailure';
 import { isReading } from '../state/selectors';
 import { AnalysisSummary } from './AnalysisSummary';
 import { RangeField } from './RangeField';
@@ -6,7 +7,7 @@ import { fieldTools, type SectionProps } from './sectionProps';
 
 /** The response and predictor ranges, the read with its progress, and what was read. */
 export function DataSection({ state, analysis, dispatch, commands }: SectionProps) {
-  const { problem, edit } = fieldTools({ state, dispatch });
+  const { problem, edit } = fieldTools({ state, analysis, dispatch });
   const { choices, reading, status } = state;
   return (
     <section aria-labelledby="data-heading">
@@ -40,7 +41,8 @@ export function DataSection({ state, analysis, dispatch, commands }: SectionProp
           <span>{status.what}</span>
         </div>
       )}
-      {typeof analysis === 'string' && (
+      {/* A failure that names a field sits beside that field instead. */}
+      {typeof analysis === 'string' && analysisProblem(analysis) === undefined && (
         <p class="problem" role="alert">
           {analysis}
         </p>

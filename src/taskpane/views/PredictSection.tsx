@@ -4,7 +4,7 @@ import { fieldTools, type SectionProps } from './sectionProps';
 
 /** The new rows to predict, and one card per row once the data are read. */
 export function PredictSection({ state, analysis, dispatch, commands }: SectionProps) {
-  const { problem, edit } = fieldTools({ state, dispatch });
+  const { problem, edit } = fieldTools({ state, analysis, dispatch });
   return (
     <section aria-labelledby="predict-heading">
       <h2 id="predict-heading">Predict</h2>

@@ -11,14 +11,8 @@ function rangesOf(analysis: PaneAnalysis, data: PaneData | undefined): ReadonlyM
 /** One card per new row: its label and inputs, the estimate with both intervals, and any extrapolation. */
 export function PredictionCards({ analysis, data, level }: { analysis: PaneAnalysis; data: PaneData | undefined; level: number }) {
   const { fit, predictions, predictionError } = analysis;
-  if (predictionError !== undefined) {
-    return (
-      <p class="problem" role="alert">
-        {predictionError}
-      </p>
-    );
-  }
-  if (fit === undefined || predictions.length === 0) return null;
+  // A failure to predict is shown beside the New rows field (sectionProps' fieldTools).
+  if (predictionError !== undefined || fit === undefined || predictions.length === 0) return null;
   const context = { responseName: analysis.responseName, level, observed: rangesOf(analysis, data) };
   const note = predictionIntervalsNote(fit);
   return (

@@ -1,3 +1,4 @@
+import { unusedSigmaNotice } from '../model/analysisParts';
 import { staleNotice } from '../state/selectors';
 import { ResultCards } from './ResultCards';
 import { fieldTools, type SectionProps } from './sectionProps';
@@ -7,12 +8,18 @@ export function ResultsSection({ state, analysis, dispatch }: Pick<SectionProps,
   const { edit } = fieldTools({ state, dispatch });
   const stale = staleNotice(state);
   const { choices } = state;
+  const sigmaNotice = unusedSigmaNotice(choices);
   return (
     <section aria-labelledby="results-heading" aria-live="polite">
       <h2 id="results-heading">Results</h2>
       {stale !== undefined && typeof analysis === 'object' && (
         <p class="stale" role="status">
           {stale}
+        </p>
+      )}
+      {sigmaNotice !== undefined && typeof analysis === 'object' && (
+        <p class="sigma-unused" role="status">
+          {sigmaNotice}
         </p>
       )}
       {typeof analysis === 'object' ? (

@@ -11,8 +11,8 @@ const ROBUST_OPTIONS: { value: PaneChoices['robust']; label: string }[] = [
 ];
 
 /** The fit's settings; each change refits the data already read at once. */
-export function SettingsSection({ state, dispatch, commands }: Pick<SectionProps, 'state' | 'dispatch' | 'commands'>) {
-  const { problem, edit } = fieldTools({ state, dispatch });
+export function SettingsSection({ state, analysis, dispatch, commands }: Pick<SectionProps, 'state' | 'analysis' | 'dispatch' | 'commands'>) {
+  const { problem, edit } = fieldTools({ state, analysis, dispatch });
   const { choices } = state;
   const levelProblem = problem('level');
   // Checked as the user types, by the rule noise_sd follows in the cells.

@@ -1,7 +1,8 @@
 import type { Dispatch } from 'preact/hooks';
 import type { PaneAnalysis } from '../model/paneAnalysis';
 import type { PaneChoices } from '../model/choices';
-import { problemOf } from '../state/fieldProblems';
+import { problemOf, RANGE_FIELDS } from '../state/fieldProblems';
+import { analysisProblemOf } from '../state/readFailure';
 import type { PaneAction } from '../state/paneActions';
 import type { PaneState } from '../state/paneState';
 import type { PaneCommands } from '../state/usePaneCommands';
@@ -15,10 +16,16 @@ export interface SectionProps {
   commands: PaneCommands;
 }
 
-/** Binds the shared helpers a section's fields use. */
-export function fieldTools({ state, dispatch }: Pick<SectionProps, 'state' | 'dispatch'>) {
+/**
+ * Binds the shared helpers a section's fields use. A field's problem is the one found in its
+ * address, else the one the analysis of the data read found in its cells (given `analysis`).
+ */
+export function fieldTools({ state, analysis, dispatch }: Pick<SectionProps, 'state' | 'dispatch'> & Partial<Pick<SectionProps, 'analysis'>>) {
   return {
-    problem: (field: keyof PaneChoices) => problemOf(field, state.choices, state.problems),
+    problem: (field: keyof PaneChoices) => {
+      const rangeField = RANGE_FIELDS.find((f) => f === field);
+      return problemOf(field, state.choices, state.problems) ?? (rangeField === undefined ? undefined : analysisProblemOf(rangeField, state, analysis));
+    },
     edit: (patch: Partial<PaneChoices>) => dispatch({ type: 'edited', patch }),
   };
 }

@@ -180,6 +180,33 @@ describe('worksheet origins (issue 13, contract C5)', () => {
     expect(() => buildModelFrame({ y, x: twoBlocks, intercept: true, origins: { y: origins.y } })).toThrow('predictors row 4, column 1 ("b") holds TRUE.');
   });
 
+  // Issue 14: a column without a header is named as the user finds it on the sheet (common practice (no source)).
+  it('without a header row, names each column by its worksheet column; a block without an origin keeps x by its place', () => {
+    const headerless = { y: y.slice(1), x: [x[0].slice(1)] };
+    const frame = buildModelFrame({ ...headerless, intercept: true, origins });
+    expect(frame.responseName).toBe('column B');
+    expect(frame.termNames).toEqual(['Intercept', 'column D', 'column E']);
+    expect(frame.skipped).toEqual([
+      { row: 10, reason: 'blank in column D' },
+      { row: 11, reason: '#N/A in column B' },
+    ]);
+    const second = [[1], [2], [3], [4], [5]];
+    const mixed = buildModelFrame({ y: headerless.y, x: [headerless.x[0], second], intercept: true, origins: { y: origins.y, x: [origins.x[0]] } });
+    expect(mixed.termNames).toEqual(['Intercept', 'column D', 'column E', 'x3']);
+    expect(buildModelFrame({ ...headerless, intercept: true }).responseName).toBe('y');
+  });
+
+  it('names a blank header cell by its worksheet column, or by xNamedAt where the caller says the fit reads it', () => {
+    const blankHeader = [x[0].map((row, i) => (i === 0 ? ['a', ''] : row))];
+    expect(buildModelFrame({ y, x: blankHeader, intercept: true, origins }).termNames).toEqual(['Intercept', 'a', 'column E']);
+    const gathered = buildModelFrame({ y, x: blankHeader, intercept: true, origins: { ...origins, xNamedAt: [24] } });
+    expect(gathered.termNames).toEqual(['Intercept', 'a', 'column Z']);
+    // Messages still name the cell where it is.
+    expect(() =>
+      buildModelFrame({ y, x: [blankHeader[0].map((row, i) => (i === 2 ? [20, true] : row))], intercept: true, origins: { ...origins, xNamedAt: [24] } }),
+    ).toThrow('predictors cell Data!E11 ("column Z") holds TRUE.');
+  });
+
   it('without origins rows stay 1-based positions in the range', () => {
     expect(buildModelFrame({ y, x, weights, intercept: true }).usedRows).toEqual([2, 5, 6]);
   });

@@ -18,7 +18,8 @@
  */
 import { Matrix, QrDecomposition, inverse } from 'ml-matrix';
 import { describe, expect, it } from 'vitest';
-import { assumptionChecks, collinearity, highLeverageCount, residualDiagnostics } from '../../../src/engine';
+import { assumptionChecks, collinearity, residualDiagnostics } from '../../../src/engine';
+import { highLeverageCount, unusualRows } from '../../../src/presentation';
 import { chiSquareUpperTail } from '../../../src/engine/distributions/chiSquare';
 import { studentTTwoSidedP } from '../../../src/engine/distributions/studentT';
 import { shapiroWilk } from '../../../src/engine/infer/shapiroWilk';
@@ -163,14 +164,14 @@ describe('Durbin–Watson', () => {
     y[23] += 25;
     const rowNumbers = x.map((_, i) => i + 5);
     const checks = assumptionChecks({ y, x }, undefined, rowNumbers);
-    expect(checks.unusualRows[0]).toMatchObject({ index: 23, row: 28, outlier: true });
-    expect(checks.unusualRows[0].studentized).toBeGreaterThan(10);
-    expect(checks.unusualRows[0].bonferroniP).toBeLessThan(1e-10);
-    expect(checks.unusualRows[0].influential).toBe(true);
+    expect(unusualRows(checks)[0]).toMatchObject({ index: 23, row: 28, outlier: true });
+    expect(unusualRows(checks)[0].studentized).toBeGreaterThan(10);
+    expect(unusualRows(checks)[0].bonferroniP).toBeLessThan(1e-10);
+    expect(unusualRows(checks)[0].influential).toBe(true);
     expect(checks.outlierTest).toMatchObject({ index: 23, row: 28, verdict: 'outlier' });
-    expect(checks.outlierTest.bonferroniP).toBe(checks.unusualRows[0].bonferroniP);
+    expect(checks.outlierTest.bonferroniP).toBe(unusualRows(checks)[0].bonferroniP);
     expect(checks.shapiroWilk.verdict).toBe('non-normal');
-    expect(assumptionChecks({ y, x }).unusualRows[0].row).toBe(24);
+    expect(unusualRows(assumptionChecks({ y, x }))[0].row).toBe(24);
   });
 
   it('finds strong positive autocorrelation on the two-sided p; independent noise gives none', () => {
@@ -289,7 +290,8 @@ describe('assumptionChecks: together', () => {
     const cooks = diagnostics.rows.map((r) => r.cooksDistance);
     expect(checks.largestCooksDistance).toBe(Math.max(...cooks));
     expect(checks.largestCooksRow).toBe(cooks.indexOf(Math.max(...cooks)));
-    expect(checks.highLeverageRows).toBe(highLeverageCount(diagnostics));
+    expect(highLeverageCount(checks)).toBe(highLeverageCount(diagnostics));
+    expect(checks.rows.map((r) => r.leverage)).toEqual(diagnostics.rows.map((r) => r.leverage));
     const vifs = collinearity(x).terms.map((t) => t.vif);
     expect(checks.largestVif).toBe(Math.max(...vifs));
     expect(checks.largestVifTerm).toBe(`x${vifs.indexOf(Math.max(...vifs)) + 1}`);
@@ -369,12 +371,12 @@ describe('assumptionChecks: together', () => {
     expect(Math.abs(row.studentized)).toBeGreaterThan(3);
     const expected = Math.min(1, 200 * studentTTwoSidedP(row.studentized, 200 - 2 - 1));
     expect(expected).toBeGreaterThan(0.05);
-    expect(checks.unusualRows.some((u) => u.index === 50)).toBe(false);
+    expect(unusualRows(checks).some((u) => u.index === 50)).toBe(false);
     expect(checks.outlierTest.verdict).toBe('none');
     y[50] = 1 + x[50][0] + 6;
     const planted = assumptionChecks({ y, x });
-    expect(planted.unusualRows[0]).toMatchObject({ index: 50, outlier: true });
-    expectRelative(planted.unusualRows[0].bonferroniP, Math.min(1, 200 * studentTTwoSidedP(planted.unusualRows[0].studentized, 197)), 1e-12);
+    expect(unusualRows(planted)[0]).toMatchObject({ index: 50, outlier: true });
+    expectRelative(unusualRows(planted)[0].bonferroniP, Math.min(1, 200 * studentTTwoSidedP(unusualRows(planted)[0].studentized, 197)), 1e-12);
   });
 
   it('a row the other rows fit exactly is an outlier with an unbounded studentized residual', () => {
@@ -383,7 +385,7 @@ describe('assumptionChecks: together', () => {
     y[3] += 1;
     const checks = assumptionChecks({ y, x });
     expect(checks.outlierTest).toMatchObject({ index: 3, studentized: Infinity, bonferroniP: 0, verdict: 'outlier' });
-    expect(checks.unusualRows[0]).toMatchObject({ index: 3, outlier: true });
+    expect(unusualRows(checks)[0]).toMatchObject({ index: 3, outlier: true });
   });
 
   it('lack of fit reads the fit it is given: replicated settings, weighted RSS, verdict at α', () => {

@@ -3,7 +3,8 @@
  * source), from the issue's own measurement), filled with everything it can show: the demo read
  * and fitted, new rows predicted, an added set tested, robust standard errors. Nothing may be
  * wider than the pane. Also the Copy button of the summary, both when the browser copies and
- * when it refuses.
+ * when it refuses; and the pane's notes at that width: every check in words, a failed check with
+ * its robust button, the stale notice, the unused known σ and a bad cell shown beside its field.
  */
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { generateBatchLog } from '../../../src/preview/demo/batchLog';
@@ -127,5 +128,58 @@ describe.skipIf(!available)('the pane at 320 px', () => {
     const selection = await summary.evaluate((el: HTMLTextAreaElement) => ({ start: el.selectionStart, end: el.selectionEnd, length: el.value.length }));
     expect(selection).toEqual({ start: 0, end: selection.length, length: selection.length });
     expect(await overflowing()).toEqual([]);
+  });
+
+  it('fits the checks in words, a failed check with its button, the stale and σ notices and a field problem', async () => {
+    // Spread that grows with steep time (invented for this layout, not a check of any value):
+    // Breusch–Pagan then fails, the check whose card offers robust standard errors.
+    const yields = generateBatchLog().map((row, i) => [Math.round((Number(row[1]) + (i % 2 === 1 ? 0.4 : -0.4) * (Number(row[2]) - 12)) * 100) / 100]);
+    await page().evaluate(
+      (values) =>
+        Excel.run(async (context) => {
+          context.workbook.worksheets.getItem('Batches').getRange('B2:B61').values = values;
+          await context.sync();
+        }),
+      yields,
+    );
+    await page().getByRole('button', { name: 'Read data and fit' }).click();
+    const failed = page().locator('ul[aria-label="Checks that failed"] li', { hasText: 'Residual spread changes' });
+    await expect.poll(() => failed.count()).toBe(1);
+    expect(await failed.getByRole('button', { name: 'Use robust (HC3) standard errors' }).isVisible()).toBe(true);
+    await page().locator('details.checks summary').click();
+    expect(
+      await page()
+        .locator('details.checks')
+        .evaluate((el: HTMLDetailsElement) => el.open),
+    ).toBe(true);
+    expect(await page().locator('details.checks dd').first().isVisible()).toBe(true);
+
+    await page().fill('#known-sigma', '0');
+    await expect.poll(() => page().locator('.sigma-unused').innerText()).toMatch(/^Known σ not used: .*σ is estimated from the data\.$/);
+    await page().fill('#response', 'Batches!B1:B60');
+    await page().press('#response', 'Tab');
+    await expect.poll(() => page().locator('.stale').innerText()).toMatch(/^Out of date: /);
+    await screenshot(page(), 'pane-320-notes');
+    expect(await overflowing()).toEqual([]);
+
+    // A bad cell among the predictors is named beside Predictors, by its address and header.
+    await page().fill('#known-sigma', '');
+    await page().fill('#response', 'Batches!B1:B61');
+    await page().press('#response', 'Tab');
+    await goTo('Batches!D8');
+    await page().fill('#formula-input', '=1/0');
+    await page().press('#formula-input', 'Enter');
+    await page().getByRole('button', { name: 'Read data and fit' }).click();
+    await expect.poll(() => page().locator('#predictors-problem').count()).toBe(1);
+    expect(await page().locator('#predictors-problem').innerText()).toMatch(/^Batches!D8 \(.+\) holds the error #DIV\/0!/);
+    expect(await page().locator('#predictors').getAttribute('aria-invalid')).toBe('true');
+    expect(await page().locator('#predictors').getAttribute('aria-describedby')).toContain('predictors-problem');
+    expect(await page().locator('section[aria-labelledby="data-heading"] > p.problem').count()).toBe(0);
+    await screenshot(page(), 'pane-320-field-problem');
+    expect(await overflowing()).toEqual([]);
+    // Gone once the field changes.
+    await page().fill('#predictors', 'Batches!C1:C61');
+    await page().press('#predictors', 'Tab');
+    await expect.poll(() => page().locator('#predictors-problem').count()).toBe(0);
   });
 });

@@ -33,11 +33,15 @@ const values = (y: unknown[], a: unknown[], b: unknown[]): BlockValues => ({ res
 describe('detectHeader', () => {
   it('takes names from a text first row, as the model frame does', () => {
     const v = values(['Yield (%)', 1, 2], ['Temp', 3, 4], ['', 5, 6]);
-    expect(detectHeader(v, sources, 100)).toEqual({ hasHeader: true, responseName: 'Yield (%)', predictorNames: ['Temp', 'x2'] });
+    expect(detectHeader(v, sources, 100)).toEqual({ hasHeader: true, responseName: 'Yield (%)', predictorNames: ['Temp', 'column D'] });
   });
 
-  it('finds no header when the response starts with a number', () => {
-    expect(detectHeader(values([1, 2], [3, 4], [5, 6]), sources, 100)).toEqual({ hasHeader: false, responseName: 'y', predictorNames: ['x1', 'x2'] });
+  it('finds no header when the response starts with a number, and names each column by its worksheet column', () => {
+    expect(detectHeader(values([1, 2], [3, 4], [5, 6]), sources, 100)).toEqual({
+      hasHeader: false,
+      responseName: 'column A',
+      predictorNames: ['column B', 'column D'],
+    });
   });
 
   it('rejects a numeric predictor header under a text response header, naming the cell', () => {

@@ -1,8 +1,7 @@
 /**
  * The header rule is the engine's own (its model frame decides it for the cell functions), so the
  * pane's two ways of reading data name the columns alike on tricky headers: text that looks like a
- * number, a blank header (named by its place in the fit, as the cell functions name it in the
- * gathered range the report reads), a header longer than a cell name may be (cut to
+ * number, a blank header (named by its worksheet column), a header longer than a cell name may be (cut to
  * engine NAME_LIMIT), and a number where a predictor's header should be (an error naming the
  * cell). Invented data (no source).
  */
@@ -33,16 +32,23 @@ describe('one header rule for cells and streams', () => {
   it.each<[string, CellValue[], PaneChoices]>([
     ['text that looks like a number', ['2024', ' 7.5 ', 'c'], EMPTY_CHOICES],
     ['a blank header', ['a', '', 'c'], EMPTY_CHOICES],
-    ['a blank header moved by the added set', ['', 'b', 'c'], { ...EMPTY_CHOICES, added: [0] }],
     ['a header longer than a name may be', ['a'.repeat(1500), 'b', 'c'], EMPTY_CHOICES],
   ])('names the columns alike: %s', (_case, headers, choices) => {
     const named = namesBothWays(headers, choices);
     expect(named.streamed).toEqual(named.cells);
   });
 
-  it('names a moved blank-header column by its place in the fit, as the report’s cell functions do', () => {
+  it('names a blank-header column by its worksheet column', () => {
+    const named = namesBothWays(['a', '', 'c'], EMPTY_CHOICES);
+    expect(named.cells.predictors).toEqual(['a', 'column C', 'c']);
+  });
+
+  it('names a blank-header column the live report gathers by its column there, as the report’s cell functions see it', () => {
+    // The added set puts B after C and D, so the live report gathers C, D, B into Y, Z, AA
+    // (reportSources.test.ts runs the report). Streamed data get a values report, read in place.
     const named = namesBothWays(['', 'b', 'c'], { ...EMPTY_CHOICES, added: [0] });
-    expect(named.cells.predictors).toEqual(['x3', 'b', 'c']);
+    expect(named.cells.predictors).toEqual(['column AA', 'b', 'c']);
+    expect(named.streamed.predictors).toEqual(['column B', 'b', 'c']);
   });
 
   it('refuses a number as a predictor header under a text response header, in the same words', () => {

@@ -10,6 +10,7 @@
 import { describe, expect, it } from 'vitest';
 import type { RangeRef } from '../../../src/addressing/a1';
 import { residualDiagnostics } from '../../../src/engine';
+import { screenCutoffs } from '../../../src/presentation';
 import { createWorkbook } from '../../../src/preview/workbook/workbook';
 import { axisBoundsFor, planReportCharts, type ReportChartSources } from '../../../src/taskpane/model/reportCharts';
 import { randomProblem } from '../../support/random';
@@ -68,10 +69,11 @@ describe('planReportCharts', () => {
     expect(cells.every((c) => c.row >= 30 && c.row < 40 && c.column >= 23 && c.column < 26)).toBe(true);
   });
 
-  it("draws the Cook's line where the engine flags influential rows, live as rows come and go", () => {
-    // The engine's flag rule (engine/infer/influence.ts) for a random fit of 20 rows.
+  it("draws the Cook's line where the residual table flags influential rows, live as rows come and go", () => {
+    // The flag rule (presentation/thresholds.ts) for a random fit of 20 rows.
     const { y, x } = randomProblem(17, 20, 2);
-    const { thresholds, n } = residualDiagnostics({ y, x });
+    const diagnostics = residualDiagnostics({ y, x });
+    const { n } = diagnostics;
     const { cells } = planReportCharts(sources(), placement);
     const wb = createWorkbook(SHEET);
     for (const cell of cells) wb.setInputs(SHEET, cell.row, cell.column, [[cell.kind === 'label' ? cell.text : cell.formula]]);
@@ -82,7 +84,7 @@ describe('planReportCharts', () => {
       0,
       Array.from({ length: n }, (_, i) => [i + 2]),
     );
-    expect(wb.valueAt({ sheet: SHEET, row: 36, column: 25 })).toBeCloseTo(thresholds.cooksDistance, 15);
+    expect(wb.valueAt({ sheet: SHEET, row: 36, column: 25 })).toBeCloseTo(screenCutoffs(diagnostics).cooksDistance, 15);
     expect([wb.valueAt({ sheet: SHEET, row: 36, column: 24 }), wb.valueAt({ sheet: SHEET, row: 37, column: 24 })]).toEqual([2, n + 1]);
     // A row left out: one fewer used, the line moves up to 4/(n − 1).
     wb.setInputs(SHEET, 45, 0, [[null]]);

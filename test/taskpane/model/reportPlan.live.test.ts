@@ -23,6 +23,35 @@ const dose = Array.from({ length: 20 }, (_, i) => 1000 + 5 * i);
 const yields = dose.map((v) => 100 + 0.5 * v + noise());
 const choices: PaneChoices = { ...EMPTY_CHOICES, response: 'Data!A1:A21', predictors: 'Data!B1:B21' };
 
+/** The data on sheet Data and the live report written for them, in a fresh preview workbook. */
+async function writeLiveReport(rows: (string | number)[][]) {
+  const model = await plumbPreview('Data');
+  model.setInputs('Data', 0, 0, rows);
+  const { ranges } = resolveRanges(choices);
+  if (ranges === undefined) throw new Error('bad test ranges');
+  const read = await readData(ranges, () => undefined, new AbortController().signal, false);
+  if (read.kind !== 'cells') throw new Error('expected the in-memory read');
+  const analysis = analyzeCells(read.data, choices);
+  let plan: ReportPlan | undefined;
+  const sheet = await writeReport((sheetName) => {
+    plan = planReport({ sheetName, ranges, choices, analysis, writtenAt: new Date('2026-12-03T10:00:00Z') });
+    return plan;
+  });
+  return { model, sheet, plan, cells: read.data };
+}
+
+/** The settings cell beside a label of the report's settings block. */
+function settingsCell(plan: ReportPlan | undefined, labelled: (text: string) => boolean) {
+  const label = plan?.cells.find((c) => c.kind === 'label' && c.column === 0 && labelled(c.text));
+  if (label === undefined) throw new Error('no such setting');
+  return { row: label.row, column: 1 };
+}
+
+/** How many decimals a cell's number format shows. */
+function formatDecimals(model: PreviewWorkbook, sheet: string, row: number, column: number): number {
+  return (model.numberFormatAt({ sheet, row, column }).split('.')[1] ?? '').length;
+}
+
 describe('the live report follows its settings cells', () => {
   let model: PreviewWorkbook;
   let sheet: string;
@@ -30,18 +59,7 @@ describe('the live report follows its settings cells', () => {
   let cells: ReadData | undefined;
 
   beforeAll(async () => {
-    model = await plumbPreview('Data');
-    model.setInputs('Data', 0, 0, [['Yield', 'Dose'], ...dose.map((v, i) => [yields[i], v])]);
-    const { ranges } = resolveRanges(choices);
-    if (ranges === undefined) throw new Error('bad test ranges');
-    const read = await readData(ranges, () => undefined, new AbortController().signal, false);
-    if (read.kind !== 'cells') throw new Error('expected the in-memory read');
-    cells = read.data;
-    const analysis = analyzeCells(read.data, choices);
-    sheet = await writeReport((sheetName) => {
-      plan = planReport({ sheetName, ranges, choices, analysis, writtenAt: new Date('2026-12-03T10:00:00Z') });
-      return plan;
-    });
+    ({ model, sheet, plan, cells } = await writeLiveReport([['Yield', 'Dose'], ...dose.map((v, i) => [yields[i], v])]));
   }, 60_000);
 
   const terms = () => {
@@ -59,11 +77,7 @@ describe('the live report follows its settings cells', () => {
     if (cell === undefined) throw new Error(`no ${start} formula`);
     return cell;
   };
-  const interceptCell = () => {
-    const label = plan?.cells.find((c) => c.kind === 'label' && c.column === 0 && c.text === 'Intercept');
-    if (label === undefined) throw new Error('no intercept setting');
-    return { row: label.row, column: 1 };
-  };
+  const interceptCell = () => settingsCell(plan, (text) => text === 'Intercept');
   const equationText = () => model.valueAt({ sheet, row: formulaCell('=PLUMB.EQUATION(').row, column: 0 });
   const expected = (intercept: boolean) => fittedEquation('Yield', { terms: (cells && analyzeCells(cells, { ...choices, intercept }).fit?.terms) ?? [] });
 
@@ -71,7 +85,7 @@ describe('the live report follows its settings cells', () => {
     const check = () => {
       for (const t of terms()) {
         for (const column of [1, 2, 5, 6]) {
-          const decimals = (model.numberFormatAt({ sheet, row: t.row, column }).split('.')[1] ?? '').length;
+          const decimals = formatDecimals(model, sheet, t.row, column);
           expect({ term: t.name, column, decimals }).toEqual({ term: t.name, column, decimals: Math.max(decimals, decimalsFor(t.standardError)) });
         }
       }
@@ -93,4 +107,32 @@ describe('the live report follows its settings cells', () => {
     model.setInputs(sheet, interceptCell().row, interceptCell().column, [[true]]);
     expect(equationText()).toBe(expected(true));
   });
+});
+
+describe('the term table keeps its digits when the Standard errors cell is edited', () => {
+  // Invented data, large residuals in the middle rows and small ones at both ends: the robust
+  // (HC0, HC1, HC3) standard errors of the slope come out about half the classical one, below 0.01
+  // where the classical one is above it, so they need one decimal more (the project's rounding
+  // rule, common practice, no source; the standard errors themselves are checked in test/engine).
+  const x = Array.from({ length: 20 }, (_, i) => i + 1);
+  const y = x.map((v, i) => 3 + 0.2 * v + (Math.abs(v - 10.5) < 5 ? 0.45 : 0.01) * (i % 2 === 0 ? 1 : -1));
+
+  it('formats every term for the smallest standard error of classical, HC0, HC1 and HC3', async () => {
+    const { model, sheet, plan } = await writeLiveReport([['Yield', 'Dose'], ...x.map((v, i) => [y[i], v])]);
+    const anchor = plan?.cells.find((c) => c.kind === 'formula' && c.formula.startsWith('=PLUMB.TERMS('));
+    if (anchor === undefined) throw new Error('no term table');
+    const slopeRow = anchor.row + 2;
+    expect(model.valueAt({ sheet, row: slopeRow, column: 0 })).toBe('Dose');
+    const classical = Number(model.valueAt({ sheet, row: slopeRow, column: 2 }));
+    const robustCell = settingsCell(plan, (text) => text.startsWith('Standard errors'));
+    for (const kind of ['HC0', 'HC1', 'HC3']) {
+      model.setInputs(sheet, robustCell.row, robustCell.column, [[kind]]);
+      const robust = Number(model.valueAt({ sheet, row: slopeRow, column: 2 }));
+      // The data do what they are meant to: the robust standard error needs more decimals than the classical one.
+      expect(decimalsFor(robust)).toBeGreaterThan(decimalsFor(classical));
+      for (const column of [1, 2, 5, 6]) {
+        expect({ kind, column, decimals: formatDecimals(model, sheet, slopeRow, column) }).toEqual({ kind, column, decimals: decimalsFor(robust) });
+      }
+    }
+  }, 60_000);
 });

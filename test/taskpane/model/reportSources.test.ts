@@ -21,7 +21,7 @@ import { analyzeCells } from '../../../src/taskpane/model/analysis';
 import type { CellsAnalysis as PaneAnalysis } from '../../../src/taskpane/model/paneAnalysis';
 import { EMPTY_CHOICES, type PaneChoices, resolveRanges } from '../../../src/taskpane/model/choices';
 import { planReport, type ReportPlan } from '../../../src/taskpane/model/reportPlan';
-import { joinRuns, reportSources } from '../../../src/taskpane/model/reportSources';
+import { gatheredColumns, joinRuns, reportSources } from '../../../src/taskpane/model/reportSources';
 import { readData } from '../../../src/taskpane/readData';
 import { NOT_AVAILABLE_CELL, plumbPreview } from '../../support/plumbPreview';
 import { randomProblem } from '../../support/random';
@@ -47,6 +47,12 @@ describe('reportSources', () => {
     const sources = reportSources('R', ranges([col(1), col(3)]), []);
     expect(sources.gathers).toEqual([{ areas: [col(1), col(3)], block: { sheet: 'R', top: 3, bottom: 17, left: 24, right: 25 } }]);
     expect(sources.x).toBe('$Y$4:$Z$18');
+  });
+
+  it('says which report-sheet column each gathered predictor lands in, and none for one block read in place', () => {
+    expect(gatheredColumns([col(1), col(2)])).toEqual([undefined, undefined]);
+    expect(gatheredColumns([col(1), col(3)])).toEqual([24, 25]);
+    expect(gatheredColumns([col(3), col(1), col(2)])).toEqual([24, 25, 26]);
   });
 });
 
@@ -148,5 +154,72 @@ describe('the live report in the preview host', () => {
     const planned = reports.areas.plan.charts.find((c) => c.name === 'ObservedVsFitted');
     expect(observed?.series).toHaveLength(planned?.series.length ?? -1);
     expect(observed?.series[0].y?.sheet).toBe(reports.areas.sheet);
+  });
+});
+
+/**
+ * Issue 14: a column without a header is named by its worksheet column, and the pane's names are
+ * the ones the live report's own PLUMB functions print. The report reads one block where it is
+ * (names of the data sheet); it gathers separate areas onto its sheet from column Y, where the
+ * functions see only that sheet's columns, so the pane names a gathered headerless column by its
+ * column there.
+ */
+describe('column names without headers, pane and live report alike', () => {
+  let model: PreviewWorkbook;
+  const terms: Record<string, { pane: string[]; report: unknown[] }> = {};
+
+  async function namesOf(name: string, choices: PaneChoices): Promise<void> {
+    const { ranges } = resolveRanges(choices);
+    if (ranges === undefined) throw new Error('bad test ranges');
+    const read = await readData(ranges, () => undefined, new AbortController().signal, false);
+    if (read.kind !== 'cells') throw new Error('expected the in-memory read');
+    const analysis = analyzeCells(read.data, choices);
+    let planned: ReportPlan | undefined;
+    const sheet = await writeReport((sheetName) => {
+      planned = planReport({ sheetName, ranges, choices, analysis, writtenAt: new Date('2026-12-03T10:00:00Z') });
+      return planned;
+    });
+    const anchor = planned?.cells.find((c) => c.kind === 'formula' && c.formula.startsWith('=PLUMB.TERMS('));
+    if (anchor === undefined) throw new Error('no TERMS');
+    const count = analysis.frame.termNames.length;
+    terms[name] = {
+      pane: analysis.frame.termNames,
+      report: Array.from({ length: count }, (_, i) => model.valueAt({ sheet, row: anchor.row + 1 + i, column: anchor.column })),
+    };
+  }
+
+  beforeAll(async () => {
+    model = await plumbPreview('Bare');
+    // 'Bare': no header row; y in A, a in B, notes in C, b in D, from sheet row 4. 'BareBlock': y, a, b in A:C.
+    // 'Titled': as 'Bare' under a header row whose cell over b is blank.
+    const rows = y.map((_, i) => [cell(i, 0), cell(i, 1), `batch ${i + 1}`, cell(i, 2)]);
+    model.setInputs('Bare', 3, 0, rows);
+    model.addSheet('BareBlock');
+    model.setInputs(
+      'BareBlock',
+      3,
+      0,
+      rows.map((r) => [r[0], r[1], r[3]]),
+    );
+    model.addSheet('Titled');
+    model.setInputs('Titled', 3, 0, [['Yield', 'Temp', 'note', ''], ...rows]);
+    await namesOf('block', { ...EMPTY_CHOICES, response: 'BareBlock!A4:A17', predictors: 'BareBlock!B4:C17' });
+    await namesOf('areas', { ...EMPTY_CHOICES, response: 'Bare!A4:A17', predictors: 'Bare!B4:B17,Bare!D4:D17' });
+    await namesOf('titled areas', { ...EMPTY_CHOICES, response: 'Titled!A4:A18', predictors: 'Titled!B4:B18,Titled!D4:D18' });
+    await namesOf('titled block', { ...EMPTY_CHOICES, response: 'Titled!A4:A18', predictors: 'Titled!D4:D18' });
+  }, 60_000);
+
+  it('names one block read in place by the data sheet’s columns, in the pane and the report', () => {
+    expect(terms.block.pane).toEqual(['Intercept', 'column B', 'column C']);
+    expect(terms.block.report).toEqual(terms.block.pane);
+    expect(terms['titled block'].pane).toEqual(['Intercept', 'column D']);
+    expect(terms['titled block'].report).toEqual(terms['titled block'].pane);
+  });
+
+  it('names gathered areas by the report sheet’s columns, in the pane and the report', () => {
+    expect(terms.areas.pane).toEqual(['Intercept', 'column Y', 'column Z']);
+    expect(terms.areas.report).toEqual(terms.areas.pane);
+    expect(terms['titled areas'].pane).toEqual(['Intercept', 'Temp', 'column Z']);
+    expect(terms['titled areas'].report).toEqual(terms['titled areas'].pane);
   });
 });
