@@ -97,6 +97,10 @@ function main(): void {
   console.log(execFileSync(process.execPath, ['--expose-gc', '--import', 'tsx', join(__dirname, 'benchPrecision.ts')], { encoding: 'utf8' }).trimEnd());
   console.log("\nWhat precision and size cost (issue #15): R² = 0.9999 against R² = 0.5, and a million rows against R's lm.fit");
   console.log(execFileSync(process.execPath, ['--expose-gc', '--import', 'tsx', join(__dirname, 'benchSpeed.ts')], { encoding: 'utf8' }).trimEnd());
+  console.log(
+    "\nLive report (issue #15): eight PLUMB formulas at 250,000 numbers against R's full analysis, a cached formula, diagnostics against a plain fit",
+  );
+  console.log(execFileSync(process.execPath, ['--expose-gc', '--import', 'tsx', join(__dirname, 'bench', 'liveReport.ts')], { encoding: 'utf8' }).trimEnd());
 }
 
 main();
