@@ -3,7 +3,7 @@
  */
 export { fitModel } from './fitModel';
 export { compareNested, NOTHING_ADDED_MESSAGE } from './compareNested';
-export { predict } from './predict';
+export { intervalsAround, predict } from './predict';
 export { compareCandidates, type CandidateResult } from './infer/modelComparison';
 export { residualDiagnostics, maxCooksDistance, type ResidualDiagnostics, type RowDiagnostics, type UndefinedReason } from './infer/influence';
 export { EngineError, type EngineErrorCode } from './errors';

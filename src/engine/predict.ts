@@ -42,18 +42,29 @@ export function predict(data: ModelData, xNew: number[][], settings?: FitSetting
     let estimate = 0;
     for (const col of solution.qr.accepted) estimate += full[col] * solution.coefficients[col];
     const leverage = leverageAt(full, solution);
-    const meanHalf = multiplier * inferenceSigma * Math.sqrt(leverage);
-    const newHalf = multiplier * inferenceSigma * Math.sqrt(leverage + 1 / w0);
+    const variance = inferenceSigma * inferenceSigma;
     return {
-      estimate,
-      meanLow: estimate - meanHalf,
-      meanHigh: estimate + meanHalf,
-      newLow: estimate - newHalf,
-      newHigh: estimate + newHalf,
+      ...intervalsAround(estimate, variance * leverage, variance / w0, multiplier),
       leverage,
       ...extrapolationFlags(row, leverage, span),
     };
   });
+}
+
+/**
+ * The two intervals around a predicted value: for the mean response, ± m·√(var of the estimate),
+ * and for one new observation, which adds the noise variance of that observation. One rule for the
+ * in-memory prediction above and the pane's streamed one, which has only the covariance.
+ */
+export function intervalsAround(
+  estimate: number,
+  estimateVariance: number,
+  noiseVariance: number,
+  multiplier: number,
+): Pick<Prediction, 'estimate' | 'meanLow' | 'meanHigh' | 'newLow' | 'newHigh'> {
+  const meanHalf = multiplier * Math.sqrt(estimateVariance);
+  const newHalf = multiplier * Math.sqrt(estimateVariance + noiseVariance);
+  return { estimate, meanLow: estimate - meanHalf, meanHigh: estimate + meanHalf, newLow: estimate - newHalf, newHigh: estimate + newHalf };
 }
 
 function notEstimable(outsideRange: number[]): Prediction {

@@ -11,26 +11,13 @@
  * concern is that CHECKS shows those numbers in the right rows, names rows as the input range does
  * (the header is row 1) and reads each verdict in words.
  */
-import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { checks } from '../../src/functions/functions';
 import { column, columns } from '../support/cells';
+import { checksFixture, fixtureCase } from '../support/checksFixture';
 import { randomProblem } from '../support/random';
 
-interface Fixture {
-  durbinWatson: { name: string; y: number[]; design: number[][]; intercept: boolean; dwtestGreater: number; dwtestTwoSided: number }[];
-  shapiroWilk: { name: string; w: number; p: number }[];
-  outlierTest: { name: string; y: number[]; design: number[][]; row: number; largest: number; bonferroni: number }[];
-  lackOfFit: { name: string; y: number[]; design: number[][]; lackDf: number; pureDf: number; f: number; p: number }[];
-}
-
-const fixture = JSON.parse(readFileSync(new URL('../engine/infer/fixtures/checks.json', import.meta.url), 'utf8')) as Fixture;
-
-function find<T extends { name: string }>(cases: T[], name: string): T {
-  const found = cases.find((c) => c.name === name);
-  if (found === undefined) throw new Error(`no fixture case ${name}`);
-  return found;
-}
+const fixture = checksFixture;
 
 function valueOf(grid: unknown[][], label: string, occurrence = 0): unknown {
   const row = grid.filter((r) => r[0] === label)[occurrence];
@@ -57,10 +44,10 @@ function checksOf(c: { y: number[]; design: number[][] }, level: number | null =
 }
 
 describe('PLUMB.CHECKS against R on lm(mpg ~ wt + hp, mtcars)', () => {
-  const grid = checksOf(find(fixture.durbinWatson, 'lm(mpg ~ wt + hp, mtcars)'));
+  const grid = checksOf(fixtureCase(fixture.durbinWatson, 'lm(mpg ~ wt + hp, mtcars)'));
 
   it("DW p-values are dwtest's exact ones, and the method row says so", () => {
-    const dw = find(fixture.durbinWatson, 'lm(mpg ~ wt + hp, mtcars)');
+    const dw = fixtureCase(fixture.durbinWatson, 'lm(mpg ~ wt + hp, mtcars)');
     expectRelative(valueOf(grid, 'DW p-value (ρ > 0)'), dw.dwtestGreater);
     expectRelative(valueOf(grid, 'DW p-value (two-sided)'), dw.dwtestTwoSided);
     expect(valueOf(grid, 'DW method')).toBe('exact');
@@ -71,14 +58,14 @@ describe('PLUMB.CHECKS against R on lm(mpg ~ wt + hp, mtcars)', () => {
   });
 
   it("Shapiro–Wilk W and p are shapiro.test's of the residuals, and decide normality", () => {
-    const sw = find(fixture.shapiroWilk, 'residuals of lm(mpg ~ wt + hp, mtcars)');
+    const sw = fixtureCase(fixture.shapiroWilk, 'residuals of lm(mpg ~ wt + hp, mtcars)');
     expectRelative(valueOf(grid, 'Shapiro–Wilk W'), sw.w, 1e-12);
     expectRelative(valueOf(grid, 'SW p-value'), sw.p);
     expect(valueOf(grid, 'SW reading')).toMatch(/^residuals depart from a normal shape \(p = 0\.0343\)/);
   });
 
   it("the outlier rows are car::outlierTest's: |t|, the row (header = range row 1) and the Bonferroni p", () => {
-    const outlier = find(fixture.outlierTest, 'lm(mpg ~ wt + hp, mtcars)');
+    const outlier = fixtureCase(fixture.outlierTest, 'lm(mpg ~ wt + hp, mtcars)');
     expectRelative(valueOf(grid, 'Largest |studentized residual|'), Math.abs(outlier.largest));
     expect(valueOf(grid, 'at row', 0)).toBe(outlier.row + 1);
     expectRelative(valueOf(grid, 'Outlier p-value (Bonferroni)'), outlier.bonferroni);
@@ -94,8 +81,8 @@ describe('PLUMB.CHECKS against R on lm(mpg ~ wt + hp, mtcars)', () => {
 
 describe('PLUMB.CHECKS against R: outliers and lack of fit', () => {
   it("lm(dist ~ speed, cars): car::outlierTest's row 49, and lack of fit from anova() against one mean per speed", () => {
-    const outlier = find(fixture.outlierTest, 'lm(dist ~ speed, cars)');
-    const lof = find(fixture.lackOfFit, 'lm(dist ~ speed, cars)');
+    const outlier = fixtureCase(fixture.outlierTest, 'lm(dist ~ speed, cars)');
+    const lof = fixtureCase(fixture.lackOfFit, 'lm(dist ~ speed, cars)');
     const grid = checksOf(lof);
     expect(valueOf(grid, 'at row', 0)).toBe(outlier.row + 1);
     expectRelative(valueOf(grid, 'Outlier p-value (Bonferroni)'), outlier.bonferroni);
@@ -107,7 +94,7 @@ describe('PLUMB.CHECKS against R: outliers and lack of fit', () => {
   });
 
   it("lm(breaks ~ wool + tension, warpbreaks): anova()'s lack of fit at p = 0.021 is a concern at 95% and not at 99%", () => {
-    const lof = find(fixture.lackOfFit, 'lm(breaks ~ wool + tension, warpbreaks)');
+    const lof = fixtureCase(fixture.lackOfFit, 'lm(breaks ~ wool + tension, warpbreaks)');
     const grid = checksOf(lof);
     expectRelative(valueOf(grid, 'Lack-of-fit F'), lof.f);
     expect([valueOf(grid, 'LOF df'), valueOf(grid, 'Pure-error df')]).toEqual([lof.lackDf, lof.pureDf]);
@@ -118,7 +105,7 @@ describe('PLUMB.CHECKS against R: outliers and lack of fit', () => {
   });
 
   it("lm(stack.loss ~ ., stackloss): car's Bonferroni p of row 21 (0.089) names it first at 90% and not at 95%", () => {
-    const outlier = find(fixture.outlierTest, 'lm(stack.loss ~ ., stackloss)');
+    const outlier = fixtureCase(fixture.outlierTest, 'lm(stack.loss ~ ., stackloss)');
     const at90 = checksOf(outlier, 0.9);
     expectRelative(valueOf(at90, 'Outlier p-value (Bonferroni)'), outlier.bonferroni);
     const row = outlier.row + 1;
@@ -134,7 +121,7 @@ describe('PLUMB.CHECKS against R: outliers and lack of fit', () => {
   });
 
   it('lm(LakeHuron ~ time): a two-sided p of 2e-22, exact to 1e-6 relative (dwtest)', () => {
-    const dw = find(fixture.durbinWatson, 'lm(LakeHuron ~ time(LakeHuron))');
+    const dw = fixtureCase(fixture.durbinWatson, 'lm(LakeHuron ~ time(LakeHuron))');
     const grid = checksOf(dw);
     expectRelative(valueOf(grid, 'DW p-value (ρ > 0)'), dw.dwtestGreater, 1e-6);
     expectRelative(valueOf(grid, 'DW p-value (two-sided)'), dw.dwtestTwoSided, 1e-6);
@@ -144,7 +131,7 @@ describe('PLUMB.CHECKS against R: outliers and lack of fit', () => {
 
 describe('PLUMB.CHECKS keeps its shape whatever the data', () => {
   const labels = (grid: unknown[][]) => grid.map((r) => r[0]);
-  const small = checksOf(find(fixture.lackOfFit, 'lm(dist ~ speed, cars)'));
+  const small = checksOf(fixtureCase(fixture.lackOfFit, 'lm(dist ~ speed, cars)'));
 
   it('no repeated settings: the four lack-of-fit values blank, and the reading says why', () => {
     const { y, x } = randomProblem(91, 25, 2);

@@ -4,24 +4,16 @@
  * whose speeds repeat, so lack of fit is tested too, and R's `mtcars` (mpg ~ wt + hp), whose
  * settings do not repeat; values as committed in test/engine/infer/fixtures/checks.json.
  */
-import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { checks } from '../../src/functions/functions';
 import { assumptionChecks, buildModelFrame, type CellGrid } from '../../src/engine';
 import { checkList } from '../../src/presentation';
 import { column, columns } from '../support/cells';
+import { checksFixture, type DurbinWatsonCase } from '../support/checksFixture';
 
-interface Case {
-  name: string;
-  y: number[];
-  design: number[][];
-}
-const fixture = JSON.parse(readFileSync(new URL('../engine/infer/fixtures/checks.json', import.meta.url), 'utf8')) as {
-  lackOfFit: Case[];
-  durbinWatson: Case[];
-};
+const fixture = checksFixture;
 
-function listAndGrid(c: Case) {
+function listAndGrid(c: DurbinWatsonCase) {
   const x = c.design.map((row) => row.slice(1));
   const names = x[0].map((_, j) => `x${j + 1}`);
   const y = column('y', c.y);
@@ -37,7 +29,7 @@ describe('checkList', () => {
     it(`gives CHECKS' own readings, outliers first: ${name}`, () => {
       const c = fixture.durbinWatson.find((k) => k.name === name);
       expect(c, name).toBeDefined();
-      const { list, grid } = listAndGrid(c as Case);
+      const { list, grid } = listAndGrid(c as DurbinWatsonCase);
       expect(list.map((l) => l.reading)).toEqual(
         ['Outlier reading', 'DW reading', 'BP reading', 'SW reading', 'LOF reading'].map((label) => readingOf(grid, label)),
       );

@@ -19,3 +19,9 @@ export function sheetNames(page: Page): Promise<string[]> {
     }),
   );
 }
+
+/** Selects a range, then presses the pane's Use selection button of one field. */
+export async function useSelectionFor(page: Page, address: string, field: string): Promise<void> {
+  await goTo(page, address);
+  await page.getByRole('button', { name: `Use selection for ${field}` }).click();
+}

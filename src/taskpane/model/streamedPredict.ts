@@ -1,4 +1,4 @@
-import type { ModelFit, Prediction } from '../../engine';
+import { intervalsAround, type ModelFit, type Prediction } from '../../engine';
 
 /** A prediction's numbers; which values lie outside the data is judged by the caller, who has their ranges. */
 export type Intervals = Omit<Prediction, 'outsideRange' | 'hiddenExtrapolation'>;
@@ -25,17 +25,11 @@ export function intervalsFromCovariance(x0: readonly number[], { fit, multiplier
       quadratic += a * fit.covariance[i][j] * b;
     });
   });
-  const meanHalf = multiplier * Math.sqrt(quadratic);
-  const newHalf = multiplier * Math.sqrt(quadratic + inferenceSigma * inferenceSigma);
-  if (!Number.isFinite(meanHalf)) {
+  if (!Number.isFinite(quadratic)) {
     return { estimate: Number.NaN, meanLow: Number.NaN, meanHigh: Number.NaN, newLow: Number.NaN, newHigh: Number.NaN, leverage: Number.NaN };
   }
   return {
-    estimate,
-    meanLow: estimate - meanHalf,
-    meanHigh: estimate + meanHalf,
-    newLow: estimate - newHalf,
-    newHigh: estimate + newHalf,
+    ...intervalsAround(estimate, quadratic, inferenceSigma * inferenceSigma, multiplier),
     // C = σ²(XᵀWX)⁻¹ for the σ the intervals use, so x₀ᵀCx₀/σ² is the engine's leverage.
     leverage: quadratic / (inferenceSigma * inferenceSigma),
   };

@@ -1,35 +1,25 @@
 import { analysisProblem } from '../state/readFailure';
 import { isReading } from '../state/selectors';
 import { AnalysisSummary } from './AnalysisSummary';
-import { RangeField } from './RangeField';
+import { RangeChoice } from './RangeChoice';
 import { ReadProgress } from './ReadProgress';
-import { fieldTools, type SectionProps } from './sectionProps';
+import type { SectionProps } from './sectionProps';
 
 /** The response and predictor ranges, the read with its progress, and what was read. */
-export function DataSection({ state, analysis, dispatch, commands }: SectionProps) {
-  const { problem, edit } = fieldTools({ state, analysis, dispatch });
-  const { choices, reading, status } = state;
+export function DataSection(props: SectionProps) {
+  const { state, analysis, commands } = props;
+  const { reading, status } = state;
   return (
     <section aria-labelledby="data-heading">
       <h2 id="data-heading">Data</h2>
-      <RangeField
-        id="response"
-        label="Response (one column)"
-        hint="Include the header cell to name it."
-        value={choices.response}
-        problem={problem('response')}
-        onChange={(response) => edit({ response })}
-        onUseSelection={() => commands.takeSelection('response')}
-      />
-      <RangeField
+      <RangeChoice {...props} field="response" id="response" label="Response (one column)" hint="Include the header cell to name it." />
+      <RangeChoice
+        {...props}
+        field="predictors"
         id="predictors"
         label="Predictors"
         hint="One or more column areas with the response's rows. Text columns are categorical."
-        value={choices.predictors}
-        problem={problem('predictors')}
-        onChange={(predictors) => edit({ predictors })}
-        onUseSelection={() => commands.takeSelection('predictors')}
-        onAddSelection={() => commands.takeSelection('predictors', true)}
+        appendable
       />
       <button type="button" class="primary" onClick={commands.readAndFit} disabled={isReading(state)}>
         Read data and fit

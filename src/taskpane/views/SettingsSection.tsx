@@ -1,6 +1,6 @@
 import type { PaneChoices } from '../model/choices';
 import { describedBy, ProblemNote } from './ProblemNote';
-import { RangeField } from './RangeField';
+import { RangeChoice } from './RangeChoice';
 import { fieldTools, type SectionProps } from './sectionProps';
 
 const ROBUST_OPTIONS: { value: PaneChoices['robust']; label: string }[] = [
@@ -11,7 +11,8 @@ const ROBUST_OPTIONS: { value: PaneChoices['robust']; label: string }[] = [
 ];
 
 /** The fit's settings; each change refits the data already read at once. */
-export function SettingsSection({ state, analysis, dispatch, commands }: Pick<SectionProps, 'state' | 'analysis' | 'dispatch' | 'commands'>) {
+export function SettingsSection(props: SectionProps) {
+  const { state, analysis, dispatch } = props;
   const { problem, edit } = fieldTools({ state, analysis, dispatch });
   const { choices } = state;
   const levelProblem = problem('level');
@@ -67,15 +68,7 @@ export function SettingsSection({ state, analysis, dispatch, commands }: Pick<Se
           ))}
         </select>
       </div>
-      <RangeField
-        id="weights"
-        label="Weights (optional)"
-        hint="A column of positive weights with the response's rows."
-        value={choices.weights}
-        problem={problem('weights')}
-        onChange={(weights) => edit({ weights })}
-        onUseSelection={() => commands.takeSelection('weights')}
-      />
+      <RangeChoice {...props} field="weights" id="weights" label="Weights (optional)" hint="A column of positive weights with the response's rows." />
     </section>
   );
 }

@@ -15,8 +15,8 @@
  *   n − k smallest, and the n − k largest but k', nonzero eigenvalues 2 − 2cos(πj/n) of A (k' slopes);
  * - a seeded simulation of the test's size (mulberry32, test/support/random.ts).
  */
-import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
+import { checksFixture, relativeError, type DurbinWatsonCase } from '../../support/checksFixture';
 import { solveModel } from '../../../src/engine/fitModel';
 import { durbinWatsonMoments } from '../../../src/engine/infer/durbinWatson';
 import {
@@ -28,35 +28,12 @@ import {
 } from '../../../src/engine/infer/durbinWatsonExact';
 import { gaussian, mulberry32, randomProblem } from '../../support/random';
 
-interface DurbinWatsonCase {
-  name: string;
-  y: number[];
-  design: number[][];
-  /** Whether the design's first column is the intercept. */
-  intercept: boolean;
-  statistic: number;
-  eigenvalues: number[];
-  dwtestGreater: number;
-  dwtestTwoSided: number;
-  panBelowStatistic: number;
-  panAboveStatistic: number;
-  grid: number[];
-  panBelow: number[];
-  panAbove: number[];
-  imhofBelow: number[];
-  imhofAbove: number[];
-}
-
-const fixture = JSON.parse(readFileSync(new URL('./fixtures/checks.json', import.meta.url), 'utf8')) as { durbinWatson: DurbinWatsonCase[] };
+const fixture = checksFixture;
 
 /** A fixture design with an intercept carries it as its first column; the engine adds its own. */
 function solve(c: DurbinWatsonCase) {
   const x = c.intercept ? c.design.map((row) => row.slice(1)) : c.design;
   return solveModel({ y: c.y, x }, { intercept: c.intercept }).solution;
-}
-
-function relativeError(actual: number, expected: number): number {
-  return Math.abs(actual - expected) / Math.abs(expected);
 }
 
 /** Imhof where its absolute accuracy is ample, pan in the tails. */

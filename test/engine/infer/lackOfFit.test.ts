@@ -5,30 +5,13 @@
  * lm(dist ~ speed, cars), lm(weight ~ Time, ChickWeight), lm(breaks ~ wool + tension, warpbreaks)
  * (two factors, six settings) and lm(mpg ~ cyl, mtcars); identities that are common practice (no source).
  */
-import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
+import { checksFixture, relativeError } from '../../support/checksFixture';
 import { fitModel } from '../../../src/engine';
 import { lackOfFit } from '../../../src/engine/infer/lackOfFit';
 import { gaussian, mulberry32 } from '../../support/random';
 
-interface LackCase {
-  name: string;
-  y: number[];
-  design: number[][];
-  settings: number;
-  lackDf: number;
-  pureDf: number;
-  pureSs: number;
-  lackSs: number;
-  f: number;
-  p: number;
-}
-
-const fixture = JSON.parse(readFileSync(new URL('./fixtures/checks.json', import.meta.url), 'utf8')) as { lackOfFit: LackCase[] };
-
-function relativeError(actual: number, expected: number): number {
-  return Math.abs(actual - expected) / Math.abs(expected);
-}
+const fixture = checksFixture;
 
 describe('lackOfFit against anova() in R', () => {
   it.each(fixture.lackOfFit.map((c) => [c.name, c] as const))('%s: sums of squares, df, F and p', (_, c) => {

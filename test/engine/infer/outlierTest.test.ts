@@ -5,29 +5,13 @@
  * mtcars) and lm(stack.loss ~ ., stackloss), both from R's own rstudent() and from the engine's
  * residual diagnostics of the same data. car reports n·p uncapped; ours is capped at 1.
  */
-import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
+import { checksFixture, relativeError } from '../../support/checksFixture';
 import { residualDiagnostics } from '../../../src/engine';
 import { outlierTest } from '../../../src/engine/infer/outlierTest';
 import { gaussian, mulberry32 } from '../../support/random';
 
-interface OutlierCase {
-  name: string;
-  y: number[];
-  design: number[][];
-  studentized: number[];
-  /** 1-based, as R numbers rows. */
-  row: number;
-  largest: number;
-  p: number;
-  bonferroni: number;
-}
-
-const fixture = JSON.parse(readFileSync(new URL('./fixtures/checks.json', import.meta.url), 'utf8')) as { outlierTest: OutlierCase[] };
-
-function relativeError(actual: number, expected: number): number {
-  return Math.abs(actual - expected) / Math.abs(expected);
-}
+const fixture = checksFixture;
 
 describe('outlierTest against car::outlierTest', () => {
   it.each(fixture.outlierTest.map((c) => [c.name, c] as const))('%s: row, t, p and Bonferroni p', (_, c) => {

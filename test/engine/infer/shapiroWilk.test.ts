@@ -7,23 +7,12 @@
  * the fixture) of n = 3, 4, 5, 11, 12, 20, 50, 500, 5000; the exact n = 3 distribution (Shapiro &
  * Wilk 1965) as a closed form; a seeded simulation of the size (mulberry32, test/support/random.ts).
  */
-import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
+import { checksFixture, relativeError } from '../../support/checksFixture';
 import { shapiroWilk } from '../../../src/engine/infer/shapiroWilk';
 import { gaussian, mulberry32 } from '../../support/random';
 
-interface ShapiroWilkCase {
-  name: string;
-  x: number[];
-  w: number;
-  p: number;
-}
-
-const fixture = JSON.parse(readFileSync(new URL('./fixtures/checks.json', import.meta.url), 'utf8')) as { shapiroWilk: ShapiroWilkCase[] };
-
-function relativeError(actual: number, expected: number): number {
-  return Math.abs(actual - expected) / Math.abs(expected);
-}
+const fixture = checksFixture;
 
 describe('shapiroWilk against R', () => {
   it.each(fixture.shapiroWilk.map((c) => [c.name, c.x.length, c] as const))('%s (n = %i): W and p as shapiro.test', (_, n, c) => {

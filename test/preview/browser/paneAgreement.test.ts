@@ -6,7 +6,7 @@
  * weights and the second response column are invented here; they serve no check of the numbers.
  */
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { goTo as goToAddress } from '../../support/previewPage';
+import { goTo as goToAddress, useSelectionFor } from '../../support/previewPage';
 import { type BrowserSession, chromiumAvailable, openPage } from '../../support/browser';
 
 const available = chromiumAvailable();
@@ -28,12 +28,7 @@ describe.skipIf(!available)('cards and report agree after every input change', (
   const page = () => session.page;
   const goTo = (address: string) => goToAddress(page(), address);
 
-  const useSelection = async (address: string, field: string) => {
-    await goTo(address);
-    await page()
-      .getByRole('button', { name: `Use selection for ${field}` })
-      .click();
-  };
+  const useSelection = (address: string, field: string) => useSelectionFor(page(), address, field);
 
   const reportValues = (sheet: string) =>
     page().evaluate(

@@ -8,7 +8,7 @@
  */
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { generateBatchLog } from '../../../src/preview/demo/batchLog';
-import { goTo as goToAddress } from '../../support/previewPage';
+import { goTo as goToAddress, useSelectionFor } from '../../support/previewPage';
 import { type BrowserSession, chromiumAvailable, openPage, screenshot } from '../../support/browser';
 
 const available = chromiumAvailable();
@@ -19,12 +19,7 @@ describe.skipIf(!available)('the pane at 320 px', () => {
   const origin = inject('previewOrigin');
   const page = () => session.page;
   const goTo = (address: string) => goToAddress(page(), address);
-  const useSelection = async (address: string, field: string) => {
-    await goTo(address);
-    await page()
-      .getByRole('button', { name: `Use selection for ${field}` })
-      .click();
-  };
+  const useSelection = (address: string, field: string) => useSelectionFor(page(), address, field);
 
   /** Every element of the pane wider than its box, or reaching past the pane's right edge. */
   const overflowing = () =>

@@ -5,17 +5,15 @@
  * delayForCellEdit), and a failed step leaves no copy behind.
  */
 import { describe, expect, it } from 'vitest';
+import { writeLiveReportFor } from '../../support/liveReport';
 import { PAYLOAD_LIMIT_BYTES } from '../../../src/preview/shim/hostSettings';
 import { freezeActiveReport, frozenText } from '../../../src/taskpane/excel/freezeCopy';
 import { AXES_FIXED_NOTE } from '../../../src/taskpane/model/reportCharts';
 import { REFRESH_NOTE, VALUES_SETTINGS_HEADING } from '../../../src/taskpane/model/reportSections';
 import { valuesNote } from '../../../src/taskpane/model/valuesReportPlan';
 import type { PreviewWorkbook } from '../../../src/preview/workbook/workbook';
-import { writeReport } from '../../../src/taskpane/excel/writeReport';
-import { analyzeCells } from '../../../src/taskpane/model/analysis';
-import { EMPTY_CHOICES, type PaneChoices, resolveRanges } from '../../../src/taskpane/model/choices';
-import { LIVE_NOTE, LIVE_QQ_LABEL, LIVE_SETTINGS_HEADING, planReport, REPORT_TITLE_PREFIX, type ReportPlan } from '../../../src/taskpane/model/reportPlan';
-import { readData } from '../../../src/taskpane/readData';
+import { EMPTY_CHOICES, type PaneChoices } from '../../../src/taskpane/model/choices';
+import { LIVE_NOTE, LIVE_QQ_LABEL, LIVE_SETTINGS_HEADING, REPORT_TITLE_PREFIX } from '../../../src/taskpane/model/reportPlan';
 import { plumbPreview } from '../../support/plumbPreview';
 import { randomProblem } from '../../support/random';
 import { afterPendingWork, freshHost } from '../../preview/shim/harness';
@@ -119,16 +117,7 @@ describe('freezeActiveReport of a live report', () => {
     const { y, x } = randomProblem(23, 15, 2);
     model.setInputs('Data', 0, 0, [['Yield', 'Temp', 'Time'], ...y.map((v, i) => [v, ...x[i]])]);
     const choices: PaneChoices = { ...EMPTY_CHOICES, response: 'Data!A1:A16', predictors: 'Data!B1:C16' };
-    const { ranges } = resolveRanges(choices);
-    if (ranges === undefined) throw new Error('bad test ranges');
-    const read = await readData(ranges, () => undefined, new AbortController().signal, false);
-    if (read.kind !== 'cells') throw new Error('expected the in-memory read');
-    const analysis = analyzeCells(read.data, choices);
-    let plan: ReportPlan | undefined;
-    const report = await writeReport((sheetName) => {
-      plan = planReport({ sheetName, ranges, choices, analysis, writtenAt: NOW });
-      return plan;
-    });
+    const { sheet: report, plan } = await writeLiveReportFor(choices, NOW);
     model.activateSheet(report);
     const name = await freezeActiveReport(NOW);
 

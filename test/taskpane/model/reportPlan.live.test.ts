@@ -7,14 +7,13 @@
  * common practice (no source). The statistics themselves are checked in test/engine.
  */
 import { beforeAll, describe, expect, it } from 'vitest';
+import { writeLiveReportFor } from '../../support/liveReport';
 import { decimalsFor } from '../../../src/presentation';
 import { fittedEquation } from '../../../src/cellGrids/equationGrid';
 import type { PreviewWorkbook } from '../../../src/preview/workbook/workbook';
-import { writeReport } from '../../../src/taskpane/excel/writeReport';
 import { analyzeCells, type ReadData } from '../../../src/taskpane/model/analysis';
-import { EMPTY_CHOICES, type PaneChoices, resolveRanges } from '../../../src/taskpane/model/choices';
-import { planReport, type ReportPlan } from '../../../src/taskpane/model/reportPlan';
-import { readData } from '../../../src/taskpane/readData';
+import { EMPTY_CHOICES, type PaneChoices } from '../../../src/taskpane/model/choices';
+import type { ReportPlan } from '../../../src/taskpane/model/reportPlan';
 import { plumbPreview } from '../../support/plumbPreview';
 import { gaussian, mulberry32 } from '../../support/random';
 
@@ -27,17 +26,8 @@ const choices: PaneChoices = { ...EMPTY_CHOICES, response: 'Data!A1:A21', predic
 async function writeLiveReport(rows: (string | number)[][]) {
   const model = await plumbPreview('Data');
   model.setInputs('Data', 0, 0, rows);
-  const { ranges } = resolveRanges(choices);
-  if (ranges === undefined) throw new Error('bad test ranges');
-  const read = await readData(ranges, () => undefined, new AbortController().signal, false);
-  if (read.kind !== 'cells') throw new Error('expected the in-memory read');
-  const analysis = analyzeCells(read.data, choices);
-  let plan: ReportPlan | undefined;
-  const sheet = await writeReport((sheetName) => {
-    plan = planReport({ sheetName, ranges, choices, analysis, writtenAt: new Date('2026-12-03T10:00:00Z') });
-    return plan;
-  });
-  return { model, sheet, plan, cells: read.data };
+  const { sheet, plan, cells } = await writeLiveReportFor(choices);
+  return { model, sheet, plan, cells };
 }
 
 /** The settings cell beside a label of the report's settings block. */

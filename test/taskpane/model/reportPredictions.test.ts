@@ -7,15 +7,13 @@
  * in test/engine and test/functions.
  */
 import { beforeAll, describe, expect, it } from 'vitest';
+import { writeLiveReportFor } from '../../support/liveReport';
 import type { PreviewWorkbook } from '../../../src/preview/workbook/workbook';
-import { writeReport } from '../../../src/taskpane/excel/writeReport';
-import { analyzeCells } from '../../../src/taskpane/model/analysis';
 import { EMPTY_CHOICES, type PaneChoices, resolveRanges } from '../../../src/taskpane/model/choices';
 import type { CellsAnalysis } from '../../../src/taskpane/model/paneAnalysis';
-import { planReport, type ReportPlan } from '../../../src/taskpane/model/reportPlan';
+import type { ReportPlan } from '../../../src/taskpane/model/reportPlan';
 import { NEW_ROW_LABEL_HEADER } from '../../../src/taskpane/model/reportSections';
 import { planValuesReport } from '../../../src/taskpane/model/valuesReportPlan';
-import { readData } from '../../../src/taskpane/readData';
 import { plumbPreview } from '../../support/plumbPreview';
 
 // Twelve rows of an invented response against two predictors, then three new rows in B16:C18
@@ -52,15 +50,7 @@ describe('labelled predictions', () => {
       ['P-02', 20, 6],
       [null, 3, 3],
     ]);
-    const { ranges } = resolveRanges(choices);
-    if (ranges === undefined) throw new Error('bad test ranges');
-    const read = await readData(ranges, () => undefined, new AbortController().signal, false);
-    if (read.kind !== 'cells') throw new Error('expected the in-memory read');
-    analysis = analyzeCells(read.data, choices);
-    sheet = await writeReport((sheetName) => {
-      plan = planReport({ sheetName, ranges, choices, analysis, writtenAt: new Date('2026-12-03T10:00:00Z') });
-      return plan;
-    });
+    ({ analysis, sheet, plan } = await writeLiveReportFor(choices));
   }, 60_000);
 
   it('labels each new row by the text left of it, else by its worksheet row, and flags the value outside the data', () => {

@@ -11,18 +11,16 @@
  * test/engine.
  */
 import { beforeAll, describe, expect, it } from 'vitest';
+import { writeLiveReportFor } from '../../support/liveReport';
 import type { RangeRef } from '../../../src/addressing/a1';
 import { FIT_STATS_LABELS } from '../../../src/cellGrids/fitStatsGrid';
 import { fitModel } from '../../../src/engine';
 import type { CellInput } from '../../../src/preview/workbook/types';
 import type { PreviewWorkbook } from '../../../src/preview/workbook/workbook';
-import { writeReport } from '../../../src/taskpane/excel/writeReport';
-import { analyzeCells } from '../../../src/taskpane/model/analysis';
 import type { CellsAnalysis as PaneAnalysis } from '../../../src/taskpane/model/paneAnalysis';
-import { EMPTY_CHOICES, type PaneChoices, resolveRanges } from '../../../src/taskpane/model/choices';
-import { planReport, type ReportPlan } from '../../../src/taskpane/model/reportPlan';
+import { EMPTY_CHOICES, type PaneChoices } from '../../../src/taskpane/model/choices';
+import type { ReportPlan } from '../../../src/taskpane/model/reportPlan';
 import { gatheredColumns, joinRuns, reportSources } from '../../../src/taskpane/model/reportSources';
-import { readData } from '../../../src/taskpane/readData';
 import { NOT_AVAILABLE_CELL, plumbPreview } from '../../support/plumbPreview';
 import { randomProblem } from '../../support/random';
 
@@ -72,18 +70,8 @@ describe('the live report in the preview host', () => {
   const reports: Record<string, { sheet: string; plan: ReportPlan; analysis: PaneAnalysis }> = {};
 
   async function report(name: string, choices: PaneChoices): Promise<void> {
-    const { ranges } = resolveRanges(choices);
-    if (ranges === undefined) throw new Error('bad test ranges');
-    const read = await readData(ranges, () => undefined, new AbortController().signal, false);
-    if (read.kind !== 'cells') throw new Error('expected the in-memory read');
-    const analysis = analyzeCells(read.data, choices);
-    let planned: ReportPlan | undefined;
-    const sheet = await writeReport((sheetName) => {
-      planned = planReport({ sheetName, ranges, choices, analysis, writtenAt: new Date('2026-12-03T10:00:00Z') });
-      return planned;
-    });
-    if (planned === undefined) throw new Error('no plan');
-    reports[name] = { sheet, plan: planned, analysis };
+    const { sheet, plan, analysis } = await writeLiveReportFor(choices);
+    reports[name] = { sheet, plan, analysis };
   }
 
   /** The grid a PLUMB formula of a report fills, read from its anchor cell. */
@@ -169,17 +157,8 @@ describe('column names without headers, pane and live report alike', () => {
   const terms: Record<string, { pane: string[]; report: unknown[] }> = {};
 
   async function namesOf(name: string, choices: PaneChoices): Promise<void> {
-    const { ranges } = resolveRanges(choices);
-    if (ranges === undefined) throw new Error('bad test ranges');
-    const read = await readData(ranges, () => undefined, new AbortController().signal, false);
-    if (read.kind !== 'cells') throw new Error('expected the in-memory read');
-    const analysis = analyzeCells(read.data, choices);
-    let planned: ReportPlan | undefined;
-    const sheet = await writeReport((sheetName) => {
-      planned = planReport({ sheetName, ranges, choices, analysis, writtenAt: new Date('2026-12-03T10:00:00Z') });
-      return planned;
-    });
-    const anchor = planned?.cells.find((c) => c.kind === 'formula' && c.formula.startsWith('=PLUMB.TERMS('));
+    const { sheet, plan: planned, analysis } = await writeLiveReportFor(choices);
+    const anchor = planned.cells.find((c) => c.kind === 'formula' && c.formula.startsWith('=PLUMB.TERMS('));
     if (anchor === undefined) throw new Error('no TERMS');
     const count = analysis.frame.termNames.length;
     terms[name] = {
