@@ -1,9 +1,15 @@
-import type { ModelFrame, NormalScorePoint } from '../engine';
+import type { ModelFrame, NormalScores } from '../engine';
 import { finiteOrBlank, type Grid } from './gridCell';
 
 export const QQ_HEADER = ['Normal quantile', 'Studentized residual', 'Row'];
 
 /** Sorted points of the normal Q–Q plot, each traced to its row as PLUMB.RESIDUALS numbers it. */
-export function qqGrid(points: NormalScorePoint[], frame: ModelFrame): Grid {
-  return [[...QQ_HEADER], ...points.map((p) => [finiteOrBlank(p.normalQuantile), finiteOrBlank(p.studentized), frame.usedRows[p.rowIndex]])];
+export function qqGrid(points: NormalScores, frame: ModelFrame): Grid {
+  const m = points.rowIndex.length;
+  const grid: Grid = new Array<Grid[number]>(m + 1);
+  grid[0] = [...QQ_HEADER];
+  for (let k = 0; k < m; k++) {
+    grid[k + 1] = [finiteOrBlank(points.normalQuantile[k]), finiteOrBlank(points.studentized[k]), frame.usedRows[points.rowIndex[k]]];
+  }
+  return grid;
 }

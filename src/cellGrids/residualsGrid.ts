@@ -1,5 +1,6 @@
-import type { ModelFrame, ResidualDiagnostics, RowDiagnostics, UndefinedReason } from '../engine';
-import { FLAG_TEXT, residualFlags } from '../presentation';
+import type { ModelFrame, ResidualDiagnostics, UndefinedReason } from '../engine';
+import { FLAG_TEXT } from '../presentation';
+import { flagsAt, type ResidualFlag, screenCutoffs } from '../presentation/thresholds';
 import { finiteOrBlank, type Grid } from './gridCell';
 
 export const RESIDUALS_HEADER = ['Row', 'Observed', 'Fitted', 'Residual', 'Standardized', 'Studentized', 'Leverage', "Cook's distance", 'DFFITS', 'Flag'];
@@ -20,27 +21,32 @@ const REASON_TEXT: Record<UndefinedReason, string> = {
  * the data (which would turn a blank into 0).
  */
 export function residualsGrid(diagnostics: ResidualDiagnostics, frame: ModelFrame): Grid {
-  return [[...RESIDUALS_HEADER], ...diagnostics.rows.map((row, i) => residualRow(row, diagnostics, frame.usedRows[i], frame.data.y[i]))];
-}
-
-function residualRow(row: RowDiagnostics, diagnostics: ResidualDiagnostics, rowNumber: number, observed: number): Grid[number] {
-  return [
-    rowNumber,
-    observed,
-    finiteOrBlank(row.fitted),
-    finiteOrBlank(row.residual),
-    finiteOrBlank(row.standardized),
-    finiteOrBlank(row.studentized),
-    finiteOrBlank(row.leverage),
-    finiteOrBlank(row.cooksDistance),
-    finiteOrBlank(row.dffits),
-    flagText(row, diagnostics),
-  ];
+  const { fitted, residual, standardized, studentized, leverage, cooksDistance, dffits, undefinedBecause } = diagnostics;
+  const cutoffs = screenCutoffs(diagnostics);
+  const grid: Grid = new Array<Grid[number]>(diagnostics.n + 1);
+  grid[0] = [...RESIDUALS_HEADER];
+  for (let i = 0; i < diagnostics.n; i++) {
+    const flags = flagsAt(cutoffs, leverage[i], studentized[i], cooksDistance[i], undefinedBecause[i]);
+    grid[i + 1] = [
+      frame.usedRows[i],
+      frame.data.y[i],
+      finiteOrBlank(fitted[i]),
+      finiteOrBlank(residual[i]),
+      finiteOrBlank(standardized[i]),
+      finiteOrBlank(studentized[i]),
+      finiteOrBlank(leverage[i]),
+      finiteOrBlank(cooksDistance[i]),
+      finiteOrBlank(dffits[i]),
+      flagText(flags, undefinedBecause[i]),
+    ];
+  }
+  return grid;
 }
 
 /** The screens' flags (src/presentation/thresholds.ts) and why a value is blank. */
-function flagText(row: RowDiagnostics, diagnostics: ResidualDiagnostics): string {
-  const parts = residualFlags(row, diagnostics).map((f) => FLAG_TEXT[f]);
-  if (row.undefinedBecause !== undefined) parts.push(REASON_TEXT[row.undefinedBecause]);
+function flagText(flags: readonly ResidualFlag[], reason: UndefinedReason | undefined): string {
+  if (flags.length === 0) return reason === undefined ? '' : REASON_TEXT[reason];
+  const parts = flags.map((f) => FLAG_TEXT[f]);
+  if (reason !== undefined) parts.push(REASON_TEXT[reason]);
   return parts.join(', ');
 }

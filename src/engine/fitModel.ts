@@ -1,4 +1,5 @@
 import { ModelCache } from './cache/modelCache';
+import { packedPredictorsOf } from './cache/packedPredictors';
 import { EngineError } from './errors';
 import { buildDesign } from './fit/design';
 import { type LeastSquaresSolution, solveLeastSquares } from './fit/leastSquares';
@@ -70,10 +71,20 @@ function approximateBytes(model: SolvedModel): number {
 }
 
 function solveUncached(data: ModelData, resolved: ResolvedSettings): SolvedModel {
-  const design = buildDesign(data.y, data.x, resolved.intercept, data.names, data.weights);
+  // The model frame's packed predictors, when it registered them, spare building its rows.
+  const packed = packedPredictorsOf(data);
+  const predictors = packed !== undefined && packed.rows === data.y.length ? packed : data.x;
+  const design = buildDesign(data.y, predictors, resolved.intercept, data.names, data.weights);
   if (design.matrix.cols === 0) throw new EngineError('shape', 'The model has no terms: give at least one predictor or keep the intercept.');
   const solution = solveLeastSquares(design);
-  return assembleFit(solution, resolved, rowTotalsOf(solution), Array.from(solution.fitted), Array.from(solution.residuals));
+  return assembleFit(solution, resolved, rowTotalsOf(solution), plainArray(solution.fitted), plainArray(solution.residuals));
+}
+
+/** A typed array's numbers as a plain array: a counted loop into a sized array is about twice Array.from's speed. */
+function plainArray(values: Float64Array): number[] {
+  const copy = new Array<number>(values.length);
+  for (let i = 0; i < values.length; i++) copy[i] = values[i];
+  return copy;
 }
 
 /**

@@ -2,7 +2,7 @@
  * Plumbline's engine: pure TypeScript, no Office, cells or UI. This is its only public entry.
  */
 export { fitModel } from './fitModel';
-export { compareNested, NOTHING_ADDED_MESSAGE } from './compareNested';
+export { compareLeadingColumns, compareNested, NOTHING_ADDED_MESSAGE } from './compareNested';
 export { intervalsAround, predict } from './predict';
 export { compareCandidates, type CandidateResult } from './infer/modelComparison';
 export { residualDiagnostics, maxCooksDistance, type ResidualDiagnostics, type RowDiagnostics, type UndefinedReason } from './infer/influence';
@@ -19,9 +19,10 @@ export { badCellMessage, badWeightMessage, isCategoricalColumn } from './design/
 export { type NewRowColumn, type NewRowNaming, type NewRowValues, readNewRowValues } from './design/newRows';
 export { classifyCell, describeCell, type Cell, type CellGrid, type CellValue, type CellErrorValue } from './design/cells';
 export { INTERCEPT_NAME } from './fit/design';
-export { collinearity, type Collinearity, type CollinearityReason, type TermCollinearity } from './infer/collinearity';
+export { collinearity, modelCollinearity, type Collinearity, type CollinearityReason, type TermCollinearity } from './infer/collinearity';
 export {
   assumptionChecks,
+  checkedRow,
   type AssumptionChecks,
   type BreuschPaganVerdict,
   type DurbinWatsonVerdict,
@@ -37,7 +38,7 @@ export type { OutlierTest, OutlierTestReason } from './infer/outlierTest';
 export type { LackOfFit, LackOfFitReason } from './infer/lackOfFit';
 export type { BreuschPagan, BreuschPaganReason } from './infer/breuschPagan';
 export type { JarqueBera } from './infer/jarqueBera';
-export { normalScores, type NormalScorePoint } from './infer/normalScores';
+export { normalScores, type NormalScores } from './infer/normalScores';
 export { RegressionAccumulator, type RowBlock, type AccumulatedRows } from './stream/regressionAccumulator';
 export { fitAccumulated } from './stream/fitAccumulated';
 export { blockResiduals } from './stream/blockResiduals';

@@ -1,3 +1,4 @@
+import { predictorValues } from './cache/packedPredictors';
 import { EngineError } from './errors';
 import { columnView } from './linalg/columnMajor';
 import { applyQTranspose } from './linalg/householderQr';
@@ -16,14 +17,16 @@ import type { FitSettings, ModelData, Prediction } from './types';
  */
 export function predict(data: ModelData, xNew: number[][], settings?: FitSettings, newWeights?: number[]): Prediction[] {
   const { solution, inferenceSigma, reference, fit } = solveModel(data, settings);
-  const p = data.x.length > 0 ? data.x[0].length : (data.names?.length ?? 0);
+  // Read from the packed predictors, so a cached fit builds no rows of its data.
+  const packed = predictorValues(data);
+  const p = packed.rows > 0 ? packed.p : (data.names?.length ?? 0);
   if (newWeights !== undefined && newWeights.length !== xNew.length) {
     throw new EngineError('shape', `There are ${newWeights.length} weights for ${xNew.length} new rows; they must match.`);
   }
   const multiplier = reference.multiplier(fit.settings.level);
   const hasIntercept = solution.design.hasIntercept;
   const aliasMaps = aliasCombinations(solution);
-  const span = fittingSpan(data.x, solution);
+  const span = fittingSpan(data, solution);
 
   return xNew.map((row, i) => {
     if (row.length !== p) {

@@ -1,7 +1,8 @@
 /**
  * The Excel boundary: raw argument values as custom functions receive them, turned into the
- * engine's neutral cell values and settings. This is the only module that accepts `unknown`
- * cells from the host.
+ * engine's neutral cell values and settings. This is the only module that knows how Excel's
+ * cells look: the engine's one-pass read of all-numeric ranges takes them as Excel passed them
+ * and reads an error object through errorCodeOf; any other range is turned into CellValues here.
  */
 import { type CellGrid, type CellValue, type CovarianceKind, EngineError, type FitSettings, judgeNoiseSd, type NoiseSdVerdict } from '../engine';
 import { noiseSdMessage } from '../presentation';
@@ -56,6 +57,17 @@ export function toCellGrid(range: RangeArgument | null | undefined, argument: st
   return isPlainGrid(range, argument) ? range : range.map((row) => row.map(toCellValue));
 }
 
+/**
+ * A range's rows, checked as toCellGrid checks them (a range of rows that are arrays), with the
+ * cells left as Excel passed them: for callers that look at a row or two, or only count rows.
+ */
+export function rangeRows(range: RangeArgument | null | undefined, argument: string): readonly unknown[][] {
+  if (range === null || range === undefined) return [];
+  if (!Array.isArray(range)) throw notRange(argument);
+  for (const row of range as unknown[]) if (!Array.isArray(row)) throw notRange(argument);
+  return range;
+}
+
 function notRange(argument: string): EngineError {
   return new EngineError('shape', `${argument} must be a range of cells.`);
 }
@@ -78,7 +90,7 @@ function isPlainGrid(range: unknown[], argument: string): range is CellValue[][]
   return plain;
 }
 
-function toCellValue(value: unknown): CellValue {
+export function toCellValue(value: unknown): CellValue {
   if (value === null || value === undefined) return null;
   if (typeof value === 'number' || typeof value === 'string' || typeof value === 'boolean') return value;
   // Any other object (a data type, say) is no cell value a regression can use.

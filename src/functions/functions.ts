@@ -11,12 +11,12 @@
  */
 import {
   compareCandidates,
-  compareNested,
+  compareLeadingColumns,
   fitModel,
   predict as predictRows,
   residualDiagnostics,
   assumptionChecks,
-  collinearity as collinearityOf,
+  modelCollinearity,
   normalScores,
 } from '../engine';
 import { guarded } from './cellError';
@@ -334,18 +334,9 @@ export function nestedF(
       { level, intercept, noise_sd, weights, robust, weightsIndex: WEIGHTS_AFTER_THREE },
       invocation,
     );
-    const { x, y, weights: w } = r.frame.data;
-    const inBase = r.frame.termBlocks.map((b) => b === 0);
-    const result = compareNested(
-      {
-        y,
-        base: x.map((row) => row.filter((_, j) => inBase[j])),
-        added: x.map((row) => row.filter((_, j) => !inBase[j])),
-        weights: w,
-      },
-      r.settings,
-    );
-    return nestedGrid(result);
+    // Terms come in block order, so base's terms are the frame's leading columns.
+    const baseColumns = r.frame.termBlocks.filter((b) => b === 0).length;
+    return nestedGrid(compareLeadingColumns(r.frame.data, baseColumns, r.settings));
   });
 }
 
@@ -493,8 +484,7 @@ export function collinearity(
     const at = argumentOrigins(invocation);
     const settings = { level, intercept, knownSigma: noise_sd, weights: weights as RangeArgument | null, robust };
     const r = readPredictors(predictors as RangeArgument, settings, { x: at(0), weights: at(4) });
-    const { x, names, weights: w } = r.frame.data;
-    return collinearityGrid(collinearityOf(x, names, w, r.settings));
+    return collinearityGrid(modelCollinearity(r.frame.data, r.settings));
   });
 }
 

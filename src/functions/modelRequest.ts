@@ -1,5 +1,5 @@
-import { buildModelFrame, classifyCell, EngineError, type FitSettings, type FrameOrigins, type ModelFrame, type RangeOrigin } from '../engine';
-import { parseSettings, type RangeArgument, toCellGrid } from './cellInput';
+import { buildModelFrame, classifyCell, EngineError, type FitSettings, type FrameInput, type FrameOrigins, type ModelFrame, type RangeOrigin } from '../engine';
+import { errorCodeOf, parseSettings, type RangeArgument, rangeRows, toCellGrid, toCellValue } from './cellInput';
 
 /** What every PLUMB function reads first: its ranges as a model frame, and the shared settings. */
 export interface ModelRequest {
@@ -15,7 +15,12 @@ export interface SettingArguments {
   robust?: unknown;
 }
 
-/** origins: where the ranges sit on their worksheets, so messages and row numbers are the user's. */
+/**
+ * origins: where the ranges sit on their worksheets, so messages and row numbers are the user's.
+ * The ranges go to the engine as Excel passed them, read in one pass when all-numeric; only
+ * otherwise are their cells turned into CellValues (toCellGrid, whose checks word a range that is
+ * no range of cells) for the engine's general read.
+ */
 export function readModel(
   knownY: RangeArgument,
   xBlocks: { range: RangeArgument; argument: string }[],
@@ -23,15 +28,34 @@ export function readModel(
   origins?: FrameOrigins,
 ): ModelRequest {
   const settings = parseSettings(s.level, s.intercept, s.knownSigma, s.robust);
-  const weights = s.weights === null || s.weights === undefined ? undefined : toCellGrid(s.weights, 'weights');
-  const frame = buildModelFrame({
-    y: toCellGrid(knownY, 'response'),
-    x: xBlocks.map((b) => toCellGrid(b.range, b.argument)),
-    xArguments: xBlocks.map((b) => b.argument),
-    weights: weights !== undefined && weights.length > 0 ? weights : undefined,
-    intercept: settings.intercept ?? true,
-    origins,
-  });
+  const intercept = settings.intercept ?? true;
+  const xArguments = xBlocks.map((b) => b.argument);
+  const asCells = (): FrameInput => {
+    const weights = s.weights === null || s.weights === undefined ? undefined : toCellGrid(s.weights, 'weights');
+    return {
+      y: toCellGrid(knownY, 'response'),
+      x: xBlocks.map((b) => toCellGrid(b.range, b.argument)),
+      xArguments,
+      weights: weights !== undefined && weights.length > 0 ? weights : undefined,
+      intercept,
+      origins,
+    };
+  };
+  const weights = s.weights ?? [];
+  // A range that is no array at all is worded by toCellGrid before anything else is read.
+  const allArrays = Array.isArray(knownY) && Array.isArray(weights) && xBlocks.every((b) => Array.isArray(b.range));
+  const frame = allArrays
+    ? buildModelFrame({
+        y: knownY,
+        x: xBlocks.map((b) => b.range),
+        xArguments,
+        weights: weights.length > 0 ? weights : undefined,
+        intercept,
+        origins,
+        errorCodeOf,
+        asCells,
+      })
+    : buildModelFrame(asCells());
   return { frame, settings };
 }
 
@@ -43,14 +67,17 @@ export function readModel(
  * The zeros' values never reach a result: callers use only the frame's x, names and weights.
  */
 export function readPredictors(knownX: RangeArgument, s: SettingArguments, origins?: { x?: RangeOrigin; weights?: RangeOrigin }): ModelRequest {
-  const x = toCellGrid(knownX, 'predictors');
+  // Only the rows are checked here and only row 1's cells read: readModel reads every cell.
+  const x = rangeRows(knownX, 'predictors');
   if (x.length === 0 || x[0].length === 0) throw new EngineError('no-rows', 'predictors is empty: select the predictor columns.');
-  const weightRows = s.weights === null || s.weights === undefined ? 0 : toCellGrid(s.weights, 'weights').length;
+  const weightRows = rangeRows(s.weights, 'weights').length;
   if (weightRows > 0 && weightRows !== x.length) {
     throw new EngineError('shape', `predictors has ${x.length} rows but weights has ${weightRows}; select the same rows for both.`);
   }
-  const hasHeader = x.length > 1 && x[0].every((cell) => classifyCell(cell).kind === 'text');
-  const standIn = x.map((_, i): unknown[] => [hasHeader && i === 0 ? 'y' : 0]);
+  const hasHeader = x.length > 1 && x[0].every((cell) => classifyCell(toCellValue(cell)).kind === 'text');
+  // One row of zero stands for every data row: read only, it spares an array per row.
+  const zeroRow: unknown[] = [0];
+  const standIn = x.map((_, i): unknown[] => (hasHeader && i === 0 ? ['y'] : zeroRow));
   // The stand-in sits beside predictors, so rows are numbered by predictors' worksheet rows.
   return readModel(standIn, [{ range: knownX, argument: 'predictors' }], s, { y: origins?.x, x: [origins?.x], weights: origins?.weights });
 }

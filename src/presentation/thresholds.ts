@@ -1,4 +1,4 @@
-import type { AssumptionChecks, CheckedRow, RowDiagnostics } from '../engine';
+import { type AssumptionChecks, type CheckedRow, checkedRow, type RowDiagnostics } from '../engine';
 
 /**
  * Rule-of-thumb cut-offs that decide only how a result is worded. Statistical decisions at
@@ -67,25 +67,44 @@ interface ModelSize {
   p: number;
 }
 
+/** The cut-offs of the three screens for a model of one size. */
+export interface ScreenCutoffs {
+  leverage: number;
+  studentized: number;
+  cooksDistance: number;
+}
+
 /** The cut-offs for a model of that size. */
-export function screenCutoffs({ n, p }: ModelSize): { leverage: number; studentized: number; cooksDistance: number } {
+export function screenCutoffs({ n, p }: ModelSize): ScreenCutoffs {
   return { leverage: (HIGH_LEVERAGE_MULTIPLE * p) / n, studentized: LARGE_STUDENTIZED, cooksDistance: COOKS_NUMERATOR / n };
 }
 
 /** A row's flags, in the Flag column's order; a row the other rows fit exactly (t unbounded) is an outlier. */
 export function residualFlags(row: RowDiagnostics, size: ModelSize): ResidualFlag[] {
-  const cutoffs = screenCutoffs(size);
+  return flagsAt(screenCutoffs(size), row.leverage, row.studentized, row.cooksDistance, row.undefinedBecause);
+}
+
+/** residualFlags from a row's values, with the cut-offs worked out once for a table of many rows. */
+export function flagsAt(
+  cutoffs: ScreenCutoffs,
+  leverage: number,
+  studentized: number,
+  cooksDistance: number,
+  undefinedBecause: RowDiagnostics['undefinedBecause'],
+): ResidualFlag[] {
   const flags: ResidualFlag[] = [];
-  if (row.leverage > cutoffs.leverage) flags.push('high-leverage');
-  if (Math.abs(row.studentized) > cutoffs.studentized || row.undefinedBecause === 'rest-fit-exactly') flags.push('outlier');
-  if (row.cooksDistance > cutoffs.cooksDistance) flags.push('influential');
+  if (leverage > cutoffs.leverage) flags.push('high-leverage');
+  if (Math.abs(studentized) > cutoffs.studentized || undefinedBecause === 'rest-fit-exactly') flags.push('outlier');
+  if (cooksDistance > cutoffs.cooksDistance) flags.push('influential');
   return flags;
 }
 
 /** How many rows have leverage above 2p/n. */
-export function highLeverageCount({ rows, n, p }: ModelSize & { rows: readonly { leverage: number }[] }): number {
+export function highLeverageCount({ leverage, n, p }: ModelSize & { leverage: ArrayLike<number> }): number {
   const cutoff = screenCutoffs({ n, p }).leverage;
-  return rows.filter((row) => row.leverage > cutoff).length;
+  let count = 0;
+  for (let i = 0; i < leverage.length; i++) if (leverage[i] > cutoff) count++;
+  return count;
 }
 
 /** A row CHECKS names first: an outlier by the Bonferroni test at α, or influential by Cook's distance above 1. */
@@ -97,11 +116,13 @@ export interface UnusualRow extends CheckedRow {
  * The unusual rows, most extreme first. One such row can by itself produce the autocorrelation,
  * uneven spread or non-normal shape the tests report, so readings name them first.
  */
-export function unusualRows(checks: Pick<AssumptionChecks, 'rows'>): UnusualRow[] {
-  return checks.rows
-    .map((row): UnusualRow => ({ ...row, influential: row.cooksDistance > UNUSUAL_COOKS_DISTANCE }))
-    .filter((u) => u.outlier || u.influential)
-    .sort((a, b) => extremity(b) - extremity(a));
+export function unusualRows(checks: Omit<AssumptionChecks, 'rows'>): UnusualRow[] {
+  const unusual: UnusualRow[] = [];
+  for (let i = 0; i < checks.n; i++) {
+    const influential = checks.cooksDistance[i] > UNUSUAL_COOKS_DISTANCE;
+    if (influential || checks.bonferroniP[i] < checks.alpha) unusual.push({ ...checkedRow(checks, i), influential });
+  }
+  return unusual.sort((a, b) => extremity(b) - extremity(a));
 }
 
 /** How far out a row is: its studentized residual, or for a row only Cook's distance marks, that distance. */

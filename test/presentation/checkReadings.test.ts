@@ -68,8 +68,32 @@ function quietChecks(change: Partial<AssumptionChecks> = {}): AssumptionChecks {
     largestVif: 1.5,
     largestVifTerm: 'Dose',
     largestVifReason: undefined,
+    leverage: new Float64Array(0),
+    studentized: new Float64Array(0),
+    bonferroniP: new Float64Array(0),
+    cooksDistance: new Float64Array(0),
+    rowNumbers: new Int32Array(0),
     rows: [],
     ...change,
+  };
+}
+
+/** The checks with these rows' values in their per-row arrays (every other row plain: NaN, not an outlier). */
+function withRows(checks: AssumptionChecks, rows: readonly UnusualRow[]): AssumptionChecks {
+  const column = (value: (row: UnusualRow) => number) => {
+    const values = new Float64Array(checks.n).fill(Number.NaN);
+    for (const row of rows) values[row.index] = value(row);
+    return values;
+  };
+  const rowNumbers = Int32Array.from({ length: checks.n }, (_, i) => i + 2);
+  return {
+    ...checks,
+    leverage: column((r) => r.leverage),
+    studentized: column((r) => r.studentized),
+    bonferroniP: column((r) => r.bonferroniP),
+    cooksDistance: column((r) => r.cooksDistance),
+    rowNumbers,
+    rows,
   };
 }
 
@@ -203,7 +227,7 @@ describe('overall reading', () => {
         'non-normal residuals (Shapiro–Wilk p = 0.0200), lack of fit (against pure error, p = 0.0300), strong collinearity (a VIF above 10)',
     );
     const outlier = unusual(6, 5.2, 0.4, 0.001);
-    expect(overallReading({ ...checks, rows: [outlier] })).toMatch(
+    expect(overallReading(withRows(checks, [outlier]))).toMatch(
       /^worth a look first: row 6 \(studentized residual 5\.2, Bonferroni p = 0\.0010\) stands out: check its data first, since such a row can cause the other signals; then negative autocorrelation/,
     );
     // Above 5000 rows Jarque–Bera is the normality test, and named as such.

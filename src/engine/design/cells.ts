@@ -20,6 +20,14 @@ export type Cell =
 /** A grid as it arrives from a range: row-major, possibly ragged when a caller builds it by hand. */
 export type CellGrid = readonly (readonly CellValue[])[];
 
+/** A range as a host hands it over: rows (which may turn out not to be arrays) of cells of any kind. */
+export type HostGrid = readonly unknown[];
+
+/** The error code of a CellValue that is an object: a CellErrorValue's own. */
+export function cellErrorCode(value: object): string | undefined {
+  return (value as CellErrorValue).errorCode;
+}
+
 const ERROR_LITERALS = new Set(['#N/A', '#DIV/0!', '#VALUE!', '#REF!', '#NAME?', '#NUM!', '#NULL!', '#SPILL!', '#CALC!', '#GETTING_DATA', '#BUSY!']);
 
 export function classifyCell(value: CellValue): Cell {

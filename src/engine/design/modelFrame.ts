@@ -1,12 +1,16 @@
 import { EngineError } from '../errors';
 import { INTERCEPT_NAME } from '../fit/design';
 import type { ModelData } from '../types';
-import { type Cell, type CellGrid, classifyCell, describeCell, shortName } from './cells';
+import { type Cell, type CellGrid, cellErrorCode, classifyCell } from './cells';
 import { codeCategorical, type SourceColumn } from './categorical';
 import { badCellMessage, badWeightMessage, isCategoricalColumn } from './cellRules';
+import { frameNames } from './frameNames';
+import { hostNumericFrame, type HostFrameInput } from './hostFrame';
 import { numericFrame } from './numericFrame';
 import { readNumericCells } from './numericCells';
 import { cellPlace, columnLetters, type RangeOrigin, rowNumber } from './origin';
+
+export type { HostFrameInput } from './hostFrame';
 
 export interface FrameInput {
   y: CellGrid;
@@ -75,7 +79,16 @@ interface Located {
   categorical: boolean;
 }
 
-export function buildModelFrame(input: FrameInput): ModelFrame {
+/**
+ * Cells as CellValues, or a host's ranges as it hands them over (HostFrameInput: read in one pass
+ * when all-numeric, else as the CellValues it makes on request).
+ */
+export function buildModelFrame(input: FrameInput | HostFrameInput): ModelFrame {
+  if ('asCells' in input) return hostNumericFrame(input) ?? cellsFrame(input.asCells());
+  return cellsFrame(input);
+}
+
+function cellsFrame(input: FrameInput): ModelFrame {
   const rowCount = input.y.length;
   if (rowCount === 0) throw new EngineError('no-rows', 'response is empty: select the column of responses.');
   requireRectangular(input.y, 'response');
@@ -91,11 +104,18 @@ export function buildModelFrame(input: FrameInput): ModelFrame {
   }
 
   const xColumns = input.x.flatMap((block) => Array.from({ length: block[0]?.length ?? 0 }, (_, j) => (i: number) => block[i][j]));
-  const columnBlocks = input.x.flatMap((block, b) => Array.from({ length: block[0]?.length ?? 0 }, () => b));
-  const columnWithinBlock = input.x.flatMap((block) => Array.from({ length: block[0]?.length ?? 0 }, (_, j) => j));
-  const hasHeader = rowCount > 1 && classifyCell(input.y[0][0]).kind === 'text';
-  const firstData = hasHeader ? 1 : 0;
-  const responseName = hasHeader ? shortName((classifyCell(input.y[0][0]) as { text: string }).text) : worksheetColumnName(origins.y?.column, 0, 'y');
+  const naming = frameNames(
+    {
+      rowCount,
+      responseFirst: classifyCell(input.y[0][0]),
+      widths: input.x.map((block) => block[0]?.length ?? 0),
+      headerCell: (b, j) => classifyCell(input.x[b][0][j]),
+      xArguments: input.xArguments,
+      origins,
+    },
+    true,
+  );
+  const { hasHeader, firstData, responseName, names, columnBlocks, columnWithinBlock } = naming;
   const located = (j: number, name: string, categorical: boolean): Located => ({
     argument: blockArgument(columnBlocks[j]),
     origin: origins.x?.[columnBlocks[j]],
@@ -104,12 +124,9 @@ export function buildModelFrame(input: FrameInput): ModelFrame {
     name,
     categorical,
   });
-  const unnamed = (j: number): string =>
-    worksheetColumnName(origins.xNamedAt?.[columnBlocks[j]] ?? origins.x?.[columnBlocks[j]]?.column, columnWithinBlock[j], `x${j + 1}`);
-  const names = xColumns.map((cellAt, j) => headerName(hasHeader ? classifyCell(cellAt(0)) : undefined, unnamed(j), located(j, '', false)));
 
   // The common case, every cell a number, a blank or #N/A, in one pass; otherwise the general path.
-  const numeric = readNumericCells(input.y, input.x, input.weights, firstData, [responseName, ...names, 'weight'], rowNumber(origins.y, 0));
+  const numeric = readNumericCells(input.y, input.x, input.weights, firstData, [responseName, ...names, 'weight'], rowNumber(origins.y, 0), cellErrorCode);
   if (numeric !== undefined) return numericFrame(numeric, { hasHeader, responseName, names, columnBlocks, intercept: input.intercept });
 
   const classified = xColumns.map((cellAt) => Array.from({ length: rowCount - firstData }, (_, k) => classifyCell(cellAt(k + firstData))));
@@ -232,26 +249,6 @@ function valueOf(cell: Cell): number | string {
 
 function placeOf(where: Located, position: number): string {
   return cellPlace(where.argument, where.origin, position, where.column, where.singleColumn);
-}
-
-/**
- * A column without a header is named as the user finds it on the sheet, "column C", when its
- * range's worksheet column is known; only without one (an array constant, a direct call) by its
- * place in the fit, `fallback` ("y", "x1", …).
- */
-function worksheetColumnName(firstColumn: number | undefined, within: number, fallback: string): string {
-  return firstColumn === undefined ? fallback : `column ${columnLetters(firstColumn + within)}`;
-}
-
-/** A predictor's name: its header, else (no header row, or a blank header cell) `unnamed`. */
-function headerName(cell: Cell | undefined, unnamed: string, where: Located): string {
-  if (cell === undefined || cell.kind === 'missing') return unnamed;
-  if (cell.kind === 'text') return shortName(cell.text);
-  throw new EngineError(
-    'bad-value',
-    `response starts with a header but ${placeOf(where, 0)} holds ${describeCell(cell)}: ` +
-      'give every predictor column a text header, or select the ranges without headers.',
-  );
 }
 
 /** position: the cell's 0-based row within its range. */

@@ -1,9 +1,9 @@
 /**
  * The model frame of an all-numeric read (numericCells.ts): no coding to do, every column a term
- * of its own, and predictors kept packed so that the cache keys them without rows (the rows are
- * built on first use, for the operations that read them).
+ * of its own, and the numbers kept packed so that the cache keys them without rows (the plain
+ * arrays are built on first use, for the operations that read them).
  */
-import { registerPackedPredictors } from '../cache/packedPredictors';
+import { registerPackedData } from '../cache/packedPredictors';
 import { INTERCEPT_NAME } from '../fit/design';
 import type { ModelData } from '../types';
 import type { ModelFrame } from './modelFrame';
@@ -34,21 +34,47 @@ export function numericFrame(cells: NumericCells, parts: NumericFrameParts): Mod
   };
 }
 
+/** A counted loop into a sized array: about twice Array.from's speed. */
+function plainArray(values: Float64Array): number[] {
+  const copy = new Array<number>(values.length);
+  for (let i = 0; i < values.length; i++) copy[i] = values[i];
+  return copy;
+}
+
+/** n rows of p numbers from row-major `values`, by counted loops (no typed view per row). */
+function packedRows(values: Float64Array, n: number, p: number): number[][] {
+  const rows = new Array<number[]>(n);
+  for (let i = 0, at = 0; i < n; i++) {
+    const row = new Array<number>(p);
+    for (let j = 0; j < p; j++, at++) row[j] = values[at];
+    rows[i] = row;
+  }
+  return rows;
+}
+
 function packedData(cells: NumericCells, names: string[]): ModelData {
   const n = cells.y.length;
   const p = names.length;
   const values = cells.x;
+  let y: number[] | undefined;
   let rows: number[][] | undefined;
+  let weights: number[] | undefined;
   const data: ModelData = {
-    y: cells.y,
-    // Read-only, so the packed numbers registered below stay the rows' own.
+    // Read-only, so the packed numbers registered below stay the data's own.
+    get y(): number[] {
+      y ??= plainArray(cells.y);
+      return y;
+    },
     get x(): number[][] {
-      rows ??= Array.from({ length: n }, (_, i) => Array.from(values.subarray(i * p, (i + 1) * p)));
+      rows ??= packedRows(values, n, p);
       return rows;
     },
     names,
-    weights: cells.weights,
+    get weights(): number[] | undefined {
+      if (cells.weights !== undefined) weights ??= plainArray(cells.weights);
+      return weights;
+    },
   };
-  registerPackedPredictors(data, { values, rows: n, p });
+  registerPackedData(data, { y: cells.y, predictors: { values, rows: n, p }, weights: cells.weights });
   return data;
 }

@@ -17,24 +17,36 @@ export interface WeightedDesign {
   response: Float64Array;
   /** √w per row, or undefined for an unweighted model. */
   rootWeights: Float64Array | undefined;
+  /** Each column's sum of squares in row order, when the builder gathered it (unweighted designs). */
+  columnSquares?: Float64Array;
 }
 
-/** Rows copied into the columns per block (see buildDesign). */
-const ROW_BLOCK = 256;
+/**
+ * Predictors as the model frame packs them (cache/packedPredictors.ts): rows × p numbers in one
+ * row-major typed array, read without building a row array.
+ */
+export interface PackedRows {
+  values: Float64Array;
+  rows: number;
+  p: number;
+}
 
 export function buildDesign(
   y: readonly number[],
-  x: readonly (readonly number[])[],
+  x: readonly (readonly number[])[] | PackedRows,
   intercept: boolean,
   names: readonly string[] | undefined,
   weights: readonly number[] | undefined,
 ): WeightedDesign {
   const n = y.length;
-  if (x.length !== n) {
-    throw new EngineError('shape', `y has ${n} rows but x has ${x.length}; they must match.`);
+  const packed = Array.isArray(x) ? undefined : (x as PackedRows);
+  const rows = packed === undefined ? (x as readonly (readonly number[])[]) : undefined;
+  const xRows = packed?.rows ?? rows?.length ?? 0;
+  if (xRows !== n) {
+    throw new EngineError('shape', `y has ${n} rows but x has ${xRows}; they must match.`);
   }
-  const p = n > 0 ? x[0].length : (names?.length ?? 0);
-  x.forEach((row, i) => {
+  const p = packed?.p ?? (n > 0 && rows !== undefined ? rows[0].length : (names?.length ?? 0));
+  rows?.forEach((row, i) => {
     if (row.length !== p) throw new EngineError('shape', `Row ${i + 1} of x has ${row.length} values; row 1 has ${p}.`);
   });
   if (names !== undefined && names.length !== p) {
@@ -43,27 +55,18 @@ export function buildDesign(
   for (let i = 0; i < n; i++) {
     if (!Number.isFinite(y[i])) throw new EngineError('non-finite', `y in row ${i + 1} is ${y[i]}; every value must be a finite number.`);
   }
-  // Filled straight into the columns, a block of rows at a time: the block's row arrays stay in
-  // cache while each column's stretch is written in order.
   const q = p + (intercept ? 1 : 0);
   const data = new Float64Array(n * q);
   const offset = intercept ? n : 0;
-  for (let from = 0; from < n; from += ROW_BLOCK) {
-    const to = Math.min(n, from + ROW_BLOCK);
-    for (let i = from; i < to; i++) {
-      const row = x[i];
-      for (let j = 0; j < p; j++) {
-        if (!Number.isFinite(row[j])) {
-          throw new EngineError('non-finite', `x column ${j + 1} in row ${i + 1} is ${row[j]}; every value must be a finite number.`);
-        }
-      }
-    }
-    for (let j = 0; j < p; j++) {
-      const base = offset + j * n;
-      for (let i = from; i < to; i++) data[base + i] = x[i][j];
-    }
+  // Each column's sum of squares, gathered in the copy's own pass, row by row as a norm of the
+  // column would add them, so solveLeastSquares need not read the columns again to scale them.
+  const squares = new Float64Array(q);
+  if (packed !== undefined) copyPacked(packed.values, n, p, data, offset, squares.subarray(q - p));
+  else copyRows(rows ?? [], n, p, data, offset, squares.subarray(q - p));
+  if (intercept) {
+    data.fill(1, 0, n);
+    squares[0] = n;
   }
-  if (intercept) data.fill(1, 0, n);
   const rootWeights = weights === undefined ? undefined : rootsOfWeights(weights, n);
   const response = Float64Array.from(y);
   let yw = response;
@@ -79,7 +82,40 @@ export function buildDesign(
     y: yw,
     response,
     rootWeights,
+    // Weighting changes the columns after the sums were taken.
+    columnSquares: rootWeights === undefined ? squares : undefined,
   };
+}
+
+function nonFinite(j: number, i: number, value: number): EngineError {
+  return new EngineError('non-finite', `x column ${j + 1} in row ${i + 1} is ${value}; every value must be a finite number.`);
+}
+
+/**
+ * Row by row into the columns: each row is read once, and its p writes land on p cache lines that
+ * the next rows fill further, so the columns are written in order without a second pass.
+ */
+function copyRows(rows: readonly (readonly number[])[], n: number, p: number, data: Float64Array, offset: number, squares: Float64Array): void {
+  for (let i = 0; i < n; i++) {
+    const row = rows[i];
+    for (let j = 0; j < p; j++) {
+      const value = row[j];
+      if (!Number.isFinite(value)) throw nonFinite(j, i, value);
+      data[offset + j * n + i] = value;
+      squares[j] += value * value;
+    }
+  }
+}
+
+function copyPacked(values: Float64Array, n: number, p: number, data: Float64Array, offset: number, squares: Float64Array): void {
+  for (let i = 0, at = 0; i < n; i++) {
+    for (let j = 0; j < p; j++, at++) {
+      const value = values[at];
+      if (!Number.isFinite(value)) throw nonFinite(j, i, value);
+      data[offset + j * n + i] = value;
+      squares[j] += value * value;
+    }
+  }
 }
 
 function rootsOfWeights(weights: readonly number[], n: number): Float64Array {

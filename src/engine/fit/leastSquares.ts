@@ -99,9 +99,10 @@ export function solveLeastSquares(design: WeightedDesign, precision: Precision =
   // storage and then holds its reflectors; the carried column comes out as Qᵀy/yScale.
   const q = matrix.cols;
   const scaled: ColumnMajorMatrix = { rows: n, cols: q + 1, data: new Float64Array(n * (q + 1)) };
+  const squares = design.columnSquares;
   for (let j = 0; j < q; j++) {
     const col = columnView(matrix, j);
-    const s = columnNorm(col);
+    const s = squares === undefined ? columnNorm(col) : normFromSquares(squares[j], col);
     columnScales[j] = s > 0 ? s : 1;
     const target = columnView(scaled, j);
     const scale = columnScales[j];
@@ -161,13 +162,14 @@ export function solveLeastSquares(design: WeightedDesign, precision: Precision =
   });
   if (perfectFit) scaledRss = 0;
 
-  const residuals = new Float64Array(n);
-  const fitted = new Float64Array(n);
+  // The weighted residual is this solve's own array, so it becomes the residuals in place.
+  const residuals = perfectFit ? new Float64Array(n) : (weightedResidual ?? directResidual(design, qr.accepted, accepted, extended));
   if (!perfectFit) {
-    weightedResidual ??= directResidual(design, qr.accepted, accepted, extended);
     const roots = design.rootWeights;
-    for (let i = 0; i < n; i++) residuals[i] = roots === undefined ? weightedResidual[i] * residualUnit : (weightedResidual[i] * residualUnit) / roots[i];
+    if (roots !== undefined) for (let i = 0; i < n; i++) residuals[i] = (residuals[i] * residualUnit) / roots[i];
+    else if (residualUnit !== 1) for (let i = 0; i < n; i++) residuals[i] *= residualUnit;
   }
+  const fitted = new Float64Array(n);
   for (let i = 0; i < n; i++) fitted[i] = design.response[i] - residuals[i];
 
   return {
@@ -191,6 +193,11 @@ export function solveLeastSquares(design: WeightedDesign, precision: Precision =
 function columnNorm(x: Float64Array): number {
   let sum = 0;
   for (let i = 0; i < x.length; i++) sum += x[i] * x[i];
+  return normFromSquares(sum, x);
+}
+
+/** ‖x‖ from x's sum of squares taken in row order, as columnNorm takes it. */
+function normFromSquares(sum: number, x: Float64Array): number {
   return sum > 1e-280 && sum < 1e280 ? Math.sqrt(sum) : stableNorm(x);
 }
 

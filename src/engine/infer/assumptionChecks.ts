@@ -1,13 +1,14 @@
 import { normalQuantile } from '../distributions/normal';
 import { studentTTwoSidedP } from '../distributions/studentT';
+import { predictorValues } from '../cache/packedPredictors';
 import { solveModel } from '../fitModel';
-import type { LeastSquaresSolution } from '../fit/leastSquares';
 import type { FitSettings, ModelData } from '../types';
 import { type BreuschPagan, type BreuschPaganReason, breuschPagan } from './breuschPagan';
-import { type CollinearityReason, collinearity } from './collinearity';
+import { collinearityOfFit, type CollinearityReason } from './collinearity';
 import { durbinWatsonMoments } from './durbinWatson';
 import { type DurbinWatsonExact, type DurbinWatsonExactReason, durbinWatsonExact } from './durbinWatsonExact';
-import { residualDiagnostics, type RowDiagnostics } from './influence';
+import { equalVarianceResiduals } from './equalVarianceResiduals';
+import { type ResidualDiagnostics, residualDiagnostics } from './influence';
 import { type JarqueBera, jarqueBera } from './jarqueBera';
 import { type LackOfFit, type LackOfFitReason, lackOfFit } from './lackOfFit';
 import { bonferroniP, type OutlierTest, type OutlierTestReason, outlierTest } from './outlierTest';
@@ -52,8 +53,17 @@ export interface AssumptionChecks {
   largestVifTerm: string | undefined;
   /** Why largestVif is infinite. */
   largestVifReason: CollinearityReason | undefined;
-  /** Every row of `data`, in order, with what the screens of unusual and high-leverage rows read. */
-  rows: CheckedRow[];
+  /**
+   * What the screens of unusual and high-leverage rows read, one array per quantity, entry i for
+   * row i of `data` (see CheckedRow). `rows` gives them one object per row, built on its first read.
+   */
+  leverage: Float64Array;
+  studentized: Float64Array;
+  bonferroniP: Float64Array;
+  cooksDistance: Float64Array;
+  /** How the user knows each row (see rowNumbers): its worksheet row when given, else its place (1-based). */
+  rowNumbers: Int32Array;
+  readonly rows: readonly CheckedRow[];
 }
 
 /** Durbin–Watson read on the two-sided p at α: the sign of the autocorrelation found, or why d was not tested. */
@@ -91,53 +101,47 @@ export interface CheckedRow {
  * numbered by their place among the rows used.
  */
 export function assumptionChecks(data: ModelData, settings?: FitSettings, rowNumbers?: readonly number[]): AssumptionChecks {
-  const { fit, solution } = solveModel(data, settings);
+  const solved = solveModel(data, settings);
+  const { fit, solution } = solved;
   const alpha = 1 - fit.settings.level;
-  const rowNumber = (index: number) => (index < 0 ? -1 : (rowNumbers?.[index] ?? index + 1));
+  const numbers = new Int32Array(fit.n);
+  for (let i = 0; i < fit.n; i++) numbers[i] = rowNumbers?.[i] ?? i + 1;
+  const rowNumber = (index: number) => (index < 0 ? -1 : numbers[index]);
   const exactFit = fit.perfectFit;
 
   const dw = durbinWatsonExact(solution);
-  const bp = breuschPagan(solution, data.x);
-  const sw = shapiroWilk(scaledResiduals(solution));
+  const bp = breuschPagan(solution, data);
+  const sw = shapiroWilk(equalVarianceResiduals(solution));
   const jb = jarqueBera(solution);
   const lof = lackOfFit(data, fit.rss, fit.rank);
 
   const diagnostics = residualDiagnostics(data, settings);
-  const studentized = diagnostics.rows.map(testedStudentized);
+  const { leverage, cooksDistance } = diagnostics;
+  const studentized = testedStudentized(diagnostics);
   const outliers = outlierTest(studentized, fit.n, fit.rank);
   // P(|T| > t) ≥ P(|Z| > t): a row inside the normal's Bonferroni bound cannot be an outlier, so
   // only the rows past it pay for a t tail.
   const candidateBound = -normalQuantile(alpha / (2 * Math.max(1, outliers.rowsTested)));
-  const bonferroniOf = (t: number) =>
-    Math.abs(t) > candidateBound ? bonferroniP(studentTTwoSidedP(t, fit.n - fit.rank - 1), outliers.rowsTested) : Number.NaN;
-
+  const bonferroni = new Float64Array(fit.n).fill(Number.NaN);
   let largestCooksRow = -1;
-  diagnostics.rows.forEach((row, i) => {
-    if (Number.isFinite(row.cooksDistance) && (largestCooksRow < 0 || row.cooksDistance > diagnostics.rows[largestCooksRow].cooksDistance)) {
+  let largestCooksDistance = Number.NaN;
+  for (let i = 0; i < fit.n; i++) {
+    const t = studentized[i];
+    if (Math.abs(t) > candidateBound) bonferroni[i] = bonferroniP(studentTTwoSidedP(t, fit.n - fit.rank - 1), outliers.rowsTested);
+    const d = cooksDistance[i];
+    if (Number.isFinite(d) && (largestCooksRow < 0 || d > largestCooksDistance)) {
       largestCooksRow = i;
+      largestCooksDistance = d;
     }
-  });
-  const largestCooksDistance = largestCooksRow < 0 ? Number.NaN : diagnostics.rows[largestCooksRow].cooksDistance;
-  const rows = diagnostics.rows.map((d, index): CheckedRow => {
-    const p = bonferroniOf(studentized[index]);
-    return {
-      index,
-      row: rowNumber(index),
-      leverage: d.leverage,
-      studentized: studentized[index],
-      bonferroniP: p,
-      cooksDistance: d.cooksDistance,
-      outlier: p < alpha,
-    };
-  });
+  }
 
-  const terms = (data.x[0]?.length ?? 0) > 0 ? collinearity(data.x, data.names, data.weights, fit.settings).terms : [];
+  const terms = predictorValues(data).p > 0 ? collinearityOfFit(data, solved).terms : [];
   // Centered VIFs only: a term standing in for the intercept has none, and its standard error is not inflated.
   const top = terms
     .filter((t) => t.undefinedBecause !== 'spans-intercept')
     .reduce<(typeof terms)[number] | undefined>((best, t) => (best === undefined || t.vif > best.vif ? t : best), undefined);
 
-  return {
+  const checks: Omit<AssumptionChecks, 'rows'> = {
     n: fit.n,
     p: fit.rank,
     alpha,
@@ -160,19 +164,44 @@ export function assumptionChecks(data: ModelData, settings?: FitSettings, rowNum
     largestVif: top?.vif ?? Number.NaN,
     largestVifTerm: top?.name,
     largestVifReason: top?.undefinedBecause,
-    rows,
+    leverage,
+    studentized,
+    bonferroniP: bonferroni,
+    cooksDistance,
+    rowNumbers: numbers,
+  };
+  let rows: CheckedRow[] | undefined;
+  return {
+    ...checks,
+    get rows(): CheckedRow[] {
+      rows ??= Array.from({ length: checks.n }, (_, i) => checkedRow(checks, i));
+      return rows;
+    },
   };
 }
 
-/** uᵢ = √wᵢ·eᵢ/yScale: the residuals of equal variance, in units that neither over- nor underflow. */
-function scaledResiduals(solution: LeastSquaresSolution): number[] {
-  return Array.from(solution.residuals, (e, i) => ((solution.design.rootWeights?.[i] ?? 1) * e) / solution.yScale);
+/** Row `index` of the checks as one object. */
+export function checkedRow(checks: Omit<AssumptionChecks, 'rows'>, index: number): CheckedRow {
+  const bonferroni = checks.bonferroniP[index];
+  return {
+    index,
+    row: checks.rowNumbers[index],
+    leverage: checks.leverage[index],
+    studentized: checks.studentized[index],
+    bonferroniP: bonferroni,
+    cooksDistance: checks.cooksDistance[index],
+    outlier: bonferroni < checks.alpha,
+  };
 }
 
-/** The studentized residual the outlier test reads: ±Infinity for a row the other rows fit exactly. */
-function testedStudentized(row: RowDiagnostics): number {
-  if (row.undefinedBecause !== 'rest-fit-exactly') return row.studentized;
-  return row.residual < 0 ? Number.NEGATIVE_INFINITY : Number.POSITIVE_INFINITY;
+/** The studentized residuals the outlier test reads: ±Infinity for a row the other rows fit exactly. */
+function testedStudentized(diagnostics: ResidualDiagnostics): Float64Array {
+  const { studentized, undefinedBecause, residual } = diagnostics;
+  const tested = new Float64Array(studentized);
+  for (let i = 0; i < tested.length; i++) {
+    if (undefinedBecause[i] === 'rest-fit-exactly') tested[i] = residual[i] < 0 ? Number.NEGATIVE_INFINITY : Number.POSITIVE_INFINITY;
+  }
+  return tested;
 }
 
 /** Autocorrelation of either sign is a concern, so d is decided on the two-sided p; its side gives the sign. */

@@ -1,6 +1,11 @@
+import { predictorValues } from '../cache/packedPredictors';
 import { chiSquareUpperTail } from '../distributions/chiSquare';
 import { buildDesign } from '../fit/design';
-import { type LeastSquaresSolution, solveLeastSquares } from '../fit/leastSquares';
+import { frobeniusCondition, type LeastSquaresSolution, needsExtendedPrecision, solveLeastSquares } from '../fit/leastSquares';
+import { stableNorm } from '../linalg/columnMajor';
+import { applyQTranspose } from '../linalg/householderQr';
+import type { ModelData } from '../types';
+import { equalVarianceResiduals } from './equalVarianceResiduals';
 
 /**
  * Breusch & Pagan, "A simple test for heteroscedasticity and random coefficient variation"
@@ -12,7 +17,13 @@ import { type LeastSquaresSolution, solveLeastSquares } from '../fit/leastSquare
  *
  * Weights: uᵢ = √wᵢ·eᵢ, the residuals of the √w-scaled problem, which have equal variance under
  * the model; the auxiliary regression is unweighted, on the predictors as given, so the test asks
- * whether what the weights left over still changes with the predictors.
+ * whether what the weights left over still changes with the predictors. `data` is the model's
+ * data, whose predictors the auxiliary regression reads.
+ *
+ * For an unweighted model with an intercept the auxiliary design is the model's own, so its QR is
+ * reused: the auxiliary RSS is the part of Qᵀu² below the rank, O(n·p) instead of a second fit. The
+ * same precision check as the fit's (needsExtendedPrecision) decides whether double suffices; where
+ * it does not, the auxiliary regression is fitted on its own, refinement included.
  */
 export interface BreuschPagan {
   statistic: number;
@@ -32,7 +43,7 @@ export type BreuschPaganReason = 'exact-fit' | 'no-predictors' | 'equal-squares'
 /** A relative spread of the squares below this is rounding of squares that are equal. */
 const EQUAL_SQUARES_TOLERANCE = 1e-9;
 
-export function breuschPagan(solution: LeastSquaresSolution, x: readonly (readonly number[])[]): BreuschPagan {
+export function breuschPagan(solution: LeastSquaresSolution, data: ModelData): BreuschPagan {
   const n = solution.residuals.length;
   const result = (undefinedBecause: BreuschPaganReason, df = Number.NaN): BreuschPagan => ({
     statistic: Number.NaN,
@@ -42,9 +53,10 @@ export function breuschPagan(solution: LeastSquaresSolution, x: readonly (readon
   });
   if (solution.perfectFit) return result('exact-fit');
   // Squares of residuals in units of yScale, so that values near 1e±300 survive squaring.
-  const squares = Array.from(solution.residuals, (e, i) => (((solution.design.rootWeights?.[i] ?? 1) * e) / solution.yScale) ** 2);
-  const auxiliary = solveLeastSquares(buildDesign(squares, x, true, undefined, undefined));
-  const rank = auxiliary.qr.accepted.length;
+  const u = equalVarianceResiduals(solution);
+  const squares = new Float64Array(n);
+  for (let i = 0; i < n; i++) squares[i] = u[i] * u[i];
+  const { rss, rank } = auxiliaryFit(solution, squares, data);
   const df = rank - 1;
   if (df === 0) return result('no-predictors', 0);
   if (n <= rank) return result('too-few-rows', df);
@@ -58,7 +70,31 @@ export function breuschPagan(solution: LeastSquaresSolution, x: readonly (readon
   }
   total -= (correction * correction) / n;
   if (!(Math.sqrt(total / n) > EQUAL_SQUARES_TOLERANCE * mean)) return result('equal-squares', df);
-  const rss = auxiliary.scaledRss * auxiliary.yScale ** 2;
   const statistic = Math.max(0, (n * (total - rss)) / total);
   return { statistic, df, pValue: chiSquareUpperTail(statistic, df), undefinedBecause: undefined };
+}
+
+/** RSS and rank of u² regressed on an intercept and the predictors. */
+function auxiliaryFit(solution: LeastSquaresSolution, squares: Float64Array, data: ModelData): { rss: number; rank: number } {
+  if (solution.design.rootWeights === undefined && solution.design.hasIntercept) {
+    const reused = rssOnModelQr(solution, squares);
+    if (reused !== undefined) return reused;
+  }
+  const auxiliary = solveLeastSquares(buildDesign(Array.from(squares), predictorValues(data), true, undefined, undefined));
+  return { rss: auxiliary.scaledRss * auxiliary.yScale ** 2, rank: auxiliary.qr.accepted.length };
+}
+
+/** The auxiliary RSS from the model's QR, in units of ‖u²‖ as the fit would take it; undefined when double may fall short. */
+function rssOnModelQr(solution: LeastSquaresSolution, squares: Float64Array): { rss: number; rank: number } | undefined {
+  const { qr, rInverse } = solution;
+  const rank = qr.accepted.length;
+  const scale = stableNorm(squares);
+  if (!(scale > 0)) return undefined;
+  const qtu = new Float64Array(squares.length);
+  for (let i = 0; i < qtu.length; i++) qtu[i] = squares[i] / scale;
+  applyQTranspose(qr, qtu);
+  let scaledRss = 0;
+  for (let i = rank; i < qtu.length; i++) scaledRss += qtu[i] * qtu[i];
+  if (needsExtendedPrecision(frobeniusCondition(qr.r, rInverse, rank), Math.sqrt(scaledRss))) return undefined;
+  return { rss: scaledRss * scale * scale, rank };
 }

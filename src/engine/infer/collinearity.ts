@@ -1,12 +1,15 @@
+import { predictorValues } from '../cache/packedPredictors';
 import { EngineError } from '../errors';
-import { buildDesign } from '../fit/design';
-import { aliasTolerance } from '../fit/leastSquares';
+import { buildDesign, type PackedRows } from '../fit/design';
+import { aliasTolerance, type LeastSquaresSolution } from '../fit/leastSquares';
 import { type ColumnMajorMatrix, columnView, stableNorm } from '../linalg/columnMajor';
-import { householderQr } from '../linalg/householderQr';
+import { householderQr, type QrFactorization } from '../linalg/householderQr';
 import { singularValues } from '../linalg/jacobiSvd';
 import { invertUpper } from '../linalg/triangular';
+import type { SolvedModel } from '../fitModel';
 import { resolveSettings } from '../settings';
-import type { FitSettings } from '../types';
+import type { FitSettings, ModelData } from '../types';
+import { sharedCollinearity } from './sharedCollinearity';
 
 /**
  * How far each predictor term is explained by the others, and how close the design is to singular.
@@ -62,14 +65,44 @@ export interface Collinearity {
   hasIntercept: boolean;
 }
 
-export function collinearity(x: number[][], names?: string[], weights?: number[], settings?: FitSettings): Collinearity {
+/** Rows of predictors, or the same numbers packed row-major (cache/packedPredictors.ts). */
+type Predictors = readonly (readonly number[])[] | PackedRows;
+
+export function collinearity(x: readonly (readonly number[])[], names?: string[], weights?: number[], settings?: FitSettings): Collinearity {
+  return collinearityOf(x, names, weights, settings);
+}
+
+/**
+ * collinearity of a model's predictors (and weights), read from their packed numbers without
+ * building rows, and shared with every request over equal numbers (sharedCollinearity.ts).
+ */
+export function modelCollinearity(data: ModelData, settings?: FitSettings): Collinearity {
+  const packed = predictorValues(data);
   const { intercept } = resolveSettings(settings);
-  if (x.length === 0) throw new EngineError('no-rows', 'There are no rows of predictors to examine.');
-  const own = termVifs(x, names, weights, intercept);
-  if (intercept) return { ...own, hasIntercept: true };
-  const centered = termVifs(x, names, weights, true).terms;
+  const compute = (): Collinearity => collinearityOf(packed, data.names, data.weights, settings);
+  // What the computation refuses (no rows, names not one per column) is never looked up.
+  if (packed.rows === 0 || (data.names !== undefined && data.names.length !== packed.p)) return compute();
+  const names = data.names ?? Array.from({ length: packed.p }, (_, j) => `x${j + 1}`);
+  return sharedCollinearity(data, intercept, names, compute);
+}
+
+function collinearityOf(x: Predictors, names: string[] | undefined, weights: number[] | undefined, settings: FitSettings | undefined): Collinearity {
+  const { intercept } = resolveSettings(settings);
+  const rows = isPacked(x) ? x.rows : x.length;
+  if (rows === 0) throw new EngineError('no-rows', 'There are no rows of predictors to examine.');
+  // One weighted design with the intercept's column first serves both sets of auxiliary
+  // regressions: without an intercept they use the same unit-scaled columns, the first left out.
+  const design = buildDesign(new Array<number>(rows).fill(0), x, true, names, weights);
+  const scaled = scaleToUnitNorm(design.matrix);
+  const predictorNames = design.names.slice(1);
+  const constants = constantColumns(x, predictorNames.length);
+  const centered = termVifs(scaled, design.rootWeights, predictorNames, constants, true);
+  if (intercept) return { ...centered, hasIntercept: true };
+  if (predictorNames.length === 0) throw new EngineError('shape', 'The model has no terms: give at least one predictor or keep the intercept.');
+  const withoutIntercept: ColumnMajorMatrix = { rows, cols: scaled.cols - 1, data: scaled.data.subarray(rows) };
+  const own = termVifs(withoutIntercept, design.rootWeights, predictorNames, constants, false);
   const terms = own.terms.map((u, j): TermCollinearity => {
-    const c = centered[j];
+    const c = centered.terms[j];
     if (u.undefinedBecause !== undefined) return { ...u, uncenteredVif: u.vif };
     // Defined without the constant, undefined with it: the constant is what it spans.
     if (c.undefinedBecause !== undefined) {
@@ -80,26 +113,93 @@ export function collinearity(x: number[][], names?: string[], weights?: number[]
   return { terms, conditionNumber: own.conditionNumber, singularValues: own.singularValues, hasIntercept: false };
 }
 
-/** The VIFs of the auxiliary regressions of the design with or without the intercept, and that design's conditioning. */
-function termVifs(x: number[][], names: string[] | undefined, weights: number[] | undefined, intercept: boolean): Omit<Collinearity, 'hasIntercept'> {
-  const design = buildDesign(new Array<number>(x.length).fill(0), x, intercept, names, weights);
-  const n = design.matrix.rows;
-  const q = design.matrix.cols;
+/**
+ * collinearity of the predictors a model was fitted to, from the fit's own factorization: the fit
+ * factors the very design collinearity does (the intercept's column first, every column √w-weighted
+ * and scaled to unit norm), so with an intercept only the O(n·p) parts remain to be done here.
+ * Without one the centered VIFs need a design the fit does not have, and are computed afresh.
+ */
+export function collinearityOfFit(data: ModelData, model: SolvedModel): Collinearity {
+  if (!model.solution.design.hasIntercept) return modelCollinearity(data, { intercept: false });
+  // The cached fit may carry another formula's names; the fit's terms are named for this data.
+  const names = model.fit.terms.slice(1).map((t) => t.name);
+  return sharedCollinearity(data, true, names, () => fromFitFactor(data, model.solution, names));
+}
+
+function fromFitFactor(data: ModelData, solution: LeastSquaresSolution, names: readonly string[]): Collinearity {
+  const { design } = solution;
+  const { rows, cols } = design.matrix;
+  const scaled: ColumnMajorMatrix = { rows, cols, data: new Float64Array(rows * cols) };
+  for (let c = 0; c < cols; c++) {
+    const from = columnView(design.matrix, c);
+    const to = columnView(scaled, c);
+    const scale = solution.columnScales[c];
+    for (let i = 0; i < rows; i++) to[i] = from[i] / scale;
+  }
+  const rank = solution.qr.accepted.length;
+  const factor = { qr: solution.qr, rInverse: rank === cols ? solution.rInverse : undefined };
+  return { ...termVifs(scaled, design.rootWeights, names, constantColumns(predictorValues(data), cols - 1), true, factor), hasIntercept: true };
+}
+
+function isPacked(x: Predictors): x is PackedRows {
+  return !Array.isArray(x);
+}
+
+/** Per predictor column: whether every row holds the same value, and whether that value is 0. */
+interface ConstantColumns {
+  constant: boolean[];
+  zero: boolean[];
+}
+
+function constantColumns(x: Predictors, p: number): ConstantColumns {
+  const packed = isPacked(x);
+  const rows = packed ? x.rows : x.length;
+  const valueAt = packed ? (i: number, j: number): number => x.values[i * x.p + j] : (i: number, j: number): number => x[i][j];
+  const constant = new Array<boolean>(p).fill(true);
+  for (let j = 0; j < p; j++) {
+    const first = valueAt(0, j);
+    for (let i = 1; i < rows && constant[j]; i++) constant[j] = valueAt(i, j) === first;
+  }
+  return { constant, zero: constant.map((c, j) => c && valueAt(0, j) === 0) };
+}
+
+/** A QR of the unit-scaled columns (aliased ones skipped), with R⁻¹ when no column is aliased. */
+interface ScaledFactor {
+  qr: Pick<QrFactorization, 'accepted' | 'aliased' | 'r'>;
+  rInverse: Float64Array | undefined;
+}
+
+function factorOf(scaled: ColumnMajorMatrix): ScaledFactor {
+  const qr = householderQr(scaled, aliasTolerance(scaled.rows));
+  return { qr, rInverse: qr.accepted.length === scaled.cols ? invertUpper(qr.r, scaled.cols) : undefined };
+}
+
+/**
+ * The VIFs of the auxiliary regressions among the unit-scaled columns of `scaled` (the intercept's
+ * first when `intercept`), and those columns' conditioning, from `factor` when it is at hand.
+ */
+function termVifs(
+  scaled: ColumnMajorMatrix,
+  rootWeights: Float64Array | undefined,
+  names: readonly string[],
+  constants: ConstantColumns,
+  intercept: boolean,
+  factor?: ScaledFactor,
+): Omit<Collinearity, 'hasIntercept'> {
+  const n = scaled.rows;
+  const q = scaled.cols;
   if (q === 0) throw new EngineError('shape', 'The model has no terms: give at least one predictor or keep the intercept.');
-  const scaled = unitScaled(design.matrix);
-  const qr = householderQr(scaled, aliasTolerance(n));
+  const { qr, rInverse } = factor ?? factorOf(scaled);
   const rank = qr.accepted.length;
   const values = singularValues(qr.r, rank, rank);
   const conditionNumber = rank < q ? Number.POSITIVE_INFINITY : values[0] / values[rank - 1];
 
   const offset = intercept ? 1 : 0;
-  const rInverse = rank === q ? invertUpper(qr.r, q) : undefined;
-  const terms = design.names.slice(offset).map((name, j): TermCollinearity => {
+  const terms = names.map((name, j): TermCollinearity => {
     const c = j + offset;
-    const column = x.map((row) => row[j]);
-    if (column.every((v) => v === column[0]) && (intercept || column[0] === 0)) return undefinedTerm(name, 'constant');
+    if (constants.constant[j] && (intercept || constants.zero[j])) return undefinedTerm(name, 'constant');
     if (q - offset === 1) return { name, vif: 1, tolerance: 1, undefinedBecause: undefined };
-    const total = intercept ? centeredSquares(columnView(scaled, c), design.rootWeights) : 1;
+    const total = intercept ? centeredSquares(columnView(scaled, c), rootWeights) : 1;
     let rss: number;
     if (rInverse !== undefined) {
       let norm2 = 0;
@@ -124,16 +224,24 @@ function undefinedTerm(name: string, reason: CollinearityReason): TermCollineari
   return { name, vif: Number.POSITIVE_INFINITY, tolerance: 0, undefinedBecause: reason };
 }
 
-/** Columns divided by their norms (a zero column stays zero), as the least-squares fit scales them. */
-function unitScaled(matrix: ColumnMajorMatrix): ColumnMajorMatrix {
-  const scaled: ColumnMajorMatrix = { rows: matrix.rows, cols: matrix.cols, data: new Float64Array(matrix.data.length) };
+/** Columns divided by their norms in place (a zero column stays zero), as the least-squares fit scales them. */
+function scaleToUnitNorm(matrix: ColumnMajorMatrix): ColumnMajorMatrix {
   for (let j = 0; j < matrix.cols; j++) {
     const col = columnView(matrix, j);
-    const norm = stableNorm(col);
-    const target = columnView(scaled, j);
-    for (let i = 0; i < matrix.rows; i++) target[i] = norm > 0 ? col[i] / norm : 0;
+    const norm = columnNorm(col);
+    for (let i = 0; i < matrix.rows; i++) col[i] = norm > 0 ? col[i] / norm : 0;
   }
-  return scaled;
+  return matrix;
+}
+
+/**
+ * ‖x‖ from the plain sum of squares where no square can overflow or underflow, else stableNorm,
+ * whose result is the plain formula's wherever that is finite: one fast pass for ordinary data.
+ */
+function columnNorm(x: Float64Array): number {
+  let sum = 0;
+  for (let i = 0; i < x.length; i++) sum += x[i] * x[i];
+  return sum > 1e-280 && sum < 1e280 ? Math.sqrt(sum) : stableNorm(x);
 }
 
 function withColumnLast(matrix: ColumnMajorMatrix, c: number): ColumnMajorMatrix {
@@ -148,21 +256,37 @@ function withColumnLast(matrix: ColumnMajorMatrix, c: number): ColumnMajorMatrix
  * algorithm (Chan, Golub & LeVeque 1983) so that a large mean does not swamp a small spread.
  */
 function centeredSquares(column: Float64Array, rootWeights: Float64Array | undefined): number {
+  if (rootWeights === undefined) return centeredSquaresUnweighted(column);
   const n = column.length;
-  const root = (i: number): number => (rootWeights === undefined ? 1 : rootWeights[i]);
   let weightSum = 0;
   let mean = 0;
   for (let i = 0; i < n; i++) {
-    weightSum += root(i) ** 2;
-    mean += root(i) * column[i];
+    weightSum += rootWeights[i] ** 2;
+    mean += rootWeights[i] * column[i];
   }
   mean /= weightSum;
   let sum = 0;
   let correction = 0;
   for (let i = 0; i < n; i++) {
-    const d = column[i] / root(i) - mean;
-    sum += root(i) ** 2 * d * d;
-    correction += root(i) ** 2 * d;
+    const d = column[i] / rootWeights[i] - mean;
+    sum += rootWeights[i] ** 2 * d * d;
+    correction += rootWeights[i] ** 2 * d;
   }
   return sum - (correction * correction) / weightSum;
+}
+
+/** centeredSquares with every weight 1: the same sums, without reading weights. */
+function centeredSquaresUnweighted(column: Float64Array): number {
+  const n = column.length;
+  let mean = 0;
+  for (let i = 0; i < n; i++) mean += column[i];
+  mean /= n;
+  let sum = 0;
+  let correction = 0;
+  for (let i = 0; i < n; i++) {
+    const d = column[i] - mean;
+    sum += d * d;
+    correction += d;
+  }
+  return sum - (correction * correction) / n;
 }

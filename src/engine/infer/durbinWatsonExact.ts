@@ -5,6 +5,7 @@ import type { LeastSquaresSolution } from '../fit/leastSquares';
 import type { QrFactorization } from '../linalg/householderQr';
 import { symmetricEigenvalues } from '../linalg/symmetricEigen';
 import { durbinWatsonMoments } from './durbinWatson';
+import { equalVarianceResiduals } from './equalVarianceResiduals';
 
 /**
  * The Durbin–Watson test with the exact null distribution of d for the design at hand.
@@ -100,7 +101,7 @@ export function durbinWatsonExact(solution: LeastSquaresSolution): DurbinWatsonE
 
 /** d = Σ(uᵢ − uᵢ₋₁)²/Σuᵢ², uᵢ = √wᵢ·eᵢ/yScale (scaled so that squares neither over- nor underflow). */
 function durbinWatsonStatistic(solution: LeastSquaresSolution): number {
-  const u = Array.from(solution.residuals, (e, i) => ((solution.design.rootWeights?.[i] ?? 1) * e) / solution.yScale);
+  const u = equalVarianceResiduals(solution);
   let differences = 0;
   let squares = u[0] * u[0];
   for (let i = 1; i < u.length; i++) {

@@ -1,5 +1,8 @@
-import type { LeastSquaresSolution } from '../fit/leastSquares';
+import { predictorValues } from '../cache/packedPredictors';
+import { frobeniusCondition, type LeastSquaresSolution } from '../fit/leastSquares';
 import { solveUpperTransposed } from '../linalg/triangular';
+import type { ModelData } from '../types';
+import { leverages } from './leverages';
 
 /**
  * Where a prediction stands against the rows the model was fitted to.
@@ -34,14 +37,17 @@ const LEVERAGE_TIE_TOLERANCE = 1e-9;
  * Aliased columns do not enter (their coefficients are not estimated).
  */
 export function leverageAt(full: readonly number[], solution: LeastSquaresSolution): number {
-  const rank = solution.qr.accepted.length;
-  const u = new Float64Array(rank);
-  solution.qr.accepted.forEach((col, a) => {
-    u[a] = full[col] / solution.columnScales[col];
-  });
-  solveUpperTransposed(solution.qr.r, rank, u);
+  return leverageOfRow((col) => full[col], solution, new Float64Array(solution.qr.accepted.length));
+}
+
+/** leverageAt with the model's column `col` read through `valueAt`, into the caller's work array of length rank. */
+function leverageOfRow(valueAt: (col: number) => number, solution: LeastSquaresSolution, u: Float64Array): number {
+  const { accepted, r } = solution.qr;
+  const rank = accepted.length;
+  for (let a = 0; a < rank; a++) u[a] = valueAt(accepted[a]) / solution.columnScales[accepted[a]];
+  solveUpperTransposed(r, rank, u);
   let sum = 0;
-  for (const v of u) sum += v * v;
+  for (let a = 0; a < rank; a++) sum += u[a] * u[a];
   return sum;
 }
 
@@ -58,23 +64,73 @@ export function extrapolationFlags(row: readonly number[], leverage: number, spa
 /** Kept per factorization: the model cache hands the same solution to every prediction of a model. */
 const spans = new WeakMap<LeastSquaresSolution, FittingSpan>();
 
-/** The fitting rows' span; x are their predictor columns as fitted (ModelData.x, no intercept). */
-export function fittingSpan(x: readonly (readonly number[])[], solution: LeastSquaresSolution): FittingSpan {
+/** The fitting rows' span: `data` is what `solution` was fitted to (its predictors as given, no intercept). */
+export function fittingSpan(data: ModelData, solution: LeastSquaresSolution): FittingSpan {
   const known = spans.get(solution);
   if (known !== undefined) return known;
-  const p = x.length > 0 ? x[0].length : solution.design.matrix.cols - (solution.design.hasIntercept ? 1 : 0);
-  const low = new Array<number>(p).fill(Number.POSITIVE_INFINITY);
-  const high = new Array<number>(p).fill(Number.NEGATIVE_INFINITY);
-  let largestLeverage = Number.NaN;
-  for (const row of x) {
-    row.forEach((v, j) => {
-      if (v < low[j]) low[j] = v;
-      if (v > high[j]) high[j] = v;
-    });
-    const leverage = leverageAt(solution.design.hasIntercept ? [1, ...row] : row, solution);
-    if (Number.isNaN(largestLeverage) || leverage > largestLeverage) largestLeverage = leverage;
+  const packed = predictorValues(data);
+  const p = packed.rows > 0 ? packed.p : solution.design.matrix.cols - (solution.design.hasIntercept ? 1 : 0);
+  const low = new Array<number>(p);
+  const high = new Array<number>(p);
+  const { values } = packed;
+  const end = packed.rows * p;
+  for (let j = 0; j < p; j++) {
+    let smallest = Number.POSITIVE_INFINITY;
+    let largest = Number.NEGATIVE_INFINITY;
+    for (let at = j; at < end; at += p) {
+      const v = values[at];
+      if (v < smallest) smallest = v;
+      if (v > largest) largest = v;
+    }
+    low[j] = smallest;
+    high[j] = largest;
   }
-  const span = { low, high, largestLeverage };
+  const span = { low, high, largestLeverage: largestFittingLeverage(values, p, solution) };
   spans.set(solution, span);
   return span;
+}
+
+/**
+ * The largest leverageAt over the fitting rows, found from the hat diagonal the residual diagnostics
+ * share (hᵢ/wᵢ is xᵢᵀ(XᵀWX)⁻¹xᵢ) instead of a triangular solve per row. The two routes differ by
+ * rounding, so the rows within `tieWindow` of the largest hᵢ/wᵢ are solved by leverageAt itself
+ * and the largest of those is taken: the same number the solve over every row gives, so a new row
+ * equal to a fitting row computes exactly the leverage that row contributed, and never exceeds it.
+ */
+function largestFittingLeverage(values: Float64Array, p: number, solution: LeastSquaresSolution): number {
+  const h = leverages(solution);
+  const roots = solution.design.rootWeights;
+  const n = h.length;
+  const onPredictorScale = roots === undefined ? h : Float64Array.from(h, (v, i) => v / (roots[i] * roots[i]));
+  let largestHat = Number.NaN;
+  for (let i = 0; i < n; i++) {
+    if (Number.isNaN(largestHat) || onPredictorScale[i] > largestHat) largestHat = onPredictorScale[i];
+  }
+  const threshold = largestHat * (1 - tieWindow(solution));
+  const offset = solution.design.hasIntercept ? 1 : 0;
+  const u = new Float64Array(solution.qr.accepted.length);
+  let largest = Number.NaN;
+  for (let i = 0; i < n; i++) {
+    if (!(onPredictorScale[i] >= threshold)) continue;
+    const at = i * p - offset;
+    const leverage = leverageOfRow((col) => (col < offset ? 1 : values[at + col]), solution, u);
+    if (Number.isNaN(largest) || leverage > largest) largest = leverage;
+  }
+  return largest;
+}
+
+/** Far above what rounding parts the two routes by on a well-conditioned design (about 1e-13), so every near-tie is re-solved. */
+const TIE_WINDOW_FLOOR = 1e-6;
+const UNIT_ROUNDOFF = 2 ** -53;
+
+/**
+ * How far hᵢ/wᵢ and leverageAt may differ for one row, relative: both are exact for a design within
+ * rounding of X, so each moves by about κ·u times a modest factor of the size (Higham, Accuracy and
+ * Stability of Numerical Algorithms, ch. 8 and 19: triangular solves and Householder QR), bounded
+ * here generously by n·rank·κ·u. On an ill-conditioned design the window grows until every row is re-solved.
+ */
+function tieWindow(solution: LeastSquaresSolution): number {
+  const rank = solution.qr.accepted.length;
+  const condition = frobeniusCondition(solution.qr.r, solution.rInverse, rank);
+  return Math.max(TIE_WINDOW_FLOOR, 2 * solution.qr.rows * rank * condition * UNIT_ROUNDOFF);
 }

@@ -1,7 +1,8 @@
 import { solveModel } from '../fitModel';
 import type { LeastSquaresSolution } from '../fit/leastSquares';
-import { applyQ } from '../linalg/householderQr';
 import type { FitSettings, ModelData } from '../types';
+import { equalVarianceResiduals } from './equalVarianceResiduals';
+import { leverages } from './leverages';
 
 /**
  * Residual diagnostics, row by row.
@@ -19,6 +20,8 @@ import type { FitSettings, ModelData } from '../types';
  *
  * Which rows these numbers make worth a look (rules of thumb such as leverage over 2p/n) is the
  * presentation's choice, not the engine's: see src/presentation/thresholds.ts.
+ *
+ * The diagnostics of a fit are computed once and shared by every caller: treat them as read-only.
  */
 export interface RowDiagnostics {
   fitted: number;
@@ -48,12 +51,25 @@ export interface RowDiagnostics {
  */
 export type UndefinedReason = 'leverage-one' | 'exact-fit' | 'no-deleted-df' | 'rest-fit-exactly';
 
+/**
+ * The diagnostics of every row, one array per quantity (entry i for row i of the data), so that a
+ * large fit builds no object per row. `rows` gives the same numbers one object per row, built on
+ * its first read; the cell grids and the checks read the arrays.
+ */
 export interface ResidualDiagnostics {
-  rows: RowDiagnostics[];
-  n: number;
+  readonly n: number;
   /** Parameters estimated (aliased terms excluded): the p of every formula. */
-  p: number;
-  sigmaKnown: boolean;
+  readonly p: number;
+  readonly sigmaKnown: boolean;
+  readonly fitted: Float64Array;
+  readonly residual: Float64Array;
+  readonly leverage: Float64Array;
+  readonly standardized: Float64Array;
+  readonly studentized: Float64Array;
+  readonly cooksDistance: Float64Array;
+  readonly dffits: Float64Array;
+  readonly undefinedBecause: readonly (UndefinedReason | undefined)[];
+  readonly rows: readonly RowDiagnostics[];
 }
 
 /**
@@ -70,74 +86,88 @@ const DELETED_RSS_TOLERANCE = 1e-10;
 
 export function residualDiagnostics(data: ModelData, settings?: FitSettings): ResidualDiagnostics {
   const { solution, fit } = solveModel(data, settings);
-  const n = fit.n;
-  const p = fit.rank;
-  const sigmaKnown = fit.settings.knownSigma !== undefined;
-  const { yScale, scaledRss, perfectFit } = solution;
-
-  // Scaled units (divided by yScale) throughout, so data near 1e±300 neither overflow nor underflow.
-  const sigmaScaled = sigmaKnown ? (fit.settings.knownSigma as number) / yScale : Math.sqrt(scaledRss / (n - p));
-  const deletedDf = n - p - 1;
-  const leverages = hatDiagonal(solution);
-
-  const rows = leverages.map((h, i): RowDiagnostics => {
-    const root = solution.design.rootWeights === undefined ? 1 : solution.design.rootWeights[i];
-    const u = (root * solution.residuals[i]) / yScale;
-    const oneMinusH = 1 - h;
-    const row: RowDiagnostics = {
-      fitted: solution.fitted[i],
-      residual: solution.residuals[i],
-      leverage: h,
-      standardized: Number.NaN,
-      studentized: Number.NaN,
-      cooksDistance: Number.NaN,
-      dffits: Number.NaN,
-      undefinedBecause: undefined,
-    };
-    if (oneMinusH <= LEVERAGE_ONE_TOLERANCE) {
-      row.undefinedBecause = 'leverage-one';
-    } else {
-      if (!(perfectFit && !sigmaKnown)) {
-        row.standardized = u / (sigmaScaled * Math.sqrt(oneMinusH));
-        row.cooksDistance = (row.standardized ** 2 * h) / (p * oneMinusH);
-      }
-      const deletedRss = scaledRss - (u * u) / oneMinusH;
-      if (perfectFit) row.undefinedBecause = 'exact-fit';
-      else if (deletedDf <= 0) row.undefinedBecause = 'no-deleted-df';
-      else if (deletedRss <= DELETED_RSS_TOLERANCE * scaledRss) row.undefinedBecause = 'rest-fit-exactly';
-      else {
-        row.studentized = u / (Math.sqrt(deletedRss / deletedDf) * Math.sqrt(oneMinusH));
-        row.dffits = row.studentized * Math.sqrt(h / oneMinusH);
-      }
-    }
-    return row;
-  });
-  return { rows, n, p, sigmaKnown };
+  const knownSigma = fit.settings.knownSigma;
+  if (last?.solution !== solution || last.knownSigma !== knownSigma)
+    last = { solution, knownSigma, diagnostics: diagnosticsOf(solution, fit.rank, knownSigma) };
+  return last.diagnostics;
 }
 
 /**
- * hᵢ = ‖row i of Q₁‖², Q₁ the first p columns of the QR's Q, each made by applying the stored
- * reflectors to a unit vector: O(n·p²) time, O(n) extra memory, never the n×n hat matrix. Q₁ is
- * orthonormal to rounding however ill-conditioned the design, which X·R⁻¹ would not be.
+ * The last diagnostics computed, with the solution and known σ they are of (nothing else in the
+ * settings changes them): CHECKS, RESIDUALS and QQPOINTS of one fit then compute them once. One is
+ * kept, as they are several numbers per row.
  */
-function hatDiagonal(solution: LeastSquaresSolution): number[] {
-  const { qr } = solution;
-  const n = qr.rows;
-  const h = new Array<number>(n).fill(0);
-  const column = new Float64Array(n);
-  for (let k = 0; k < qr.accepted.length; k++) {
-    column.fill(0);
-    column[k] = 1;
-    applyQ(qr, column);
-    for (let i = 0; i < n; i++) h[i] += column[i] * column[i];
+let last: { solution: LeastSquaresSolution; knownSigma: number | undefined; diagnostics: ResidualDiagnostics } | undefined;
+
+function diagnosticsOf(solution: LeastSquaresSolution, p: number, knownSigma: number | undefined): ResidualDiagnostics {
+  const { yScale, scaledRss, perfectFit } = solution;
+  const u = equalVarianceResiduals(solution);
+  const leverage = leverages(solution);
+  const n = leverage.length;
+  const sigmaKnown = knownSigma !== undefined;
+  // Scaled units (divided by yScale) throughout, so data near 1e±300 neither overflow nor underflow.
+  const sigmaScaled = sigmaKnown ? knownSigma / yScale : Math.sqrt(scaledRss / (n - p));
+  const deletedDf = n - p - 1;
+  const standardized = new Float64Array(n).fill(Number.NaN);
+  const studentized = new Float64Array(n).fill(Number.NaN);
+  const cooksDistance = new Float64Array(n).fill(Number.NaN);
+  const dffits = new Float64Array(n).fill(Number.NaN);
+  const undefinedBecause = new Array<UndefinedReason | undefined>(n).fill(undefined);
+  for (let i = 0; i < n; i++) {
+    const h = leverage[i];
+    const oneMinusH = 1 - h;
+    if (oneMinusH <= LEVERAGE_ONE_TOLERANCE) {
+      undefinedBecause[i] = 'leverage-one';
+      continue;
+    }
+    if (!(perfectFit && !sigmaKnown)) {
+      standardized[i] = u[i] / (sigmaScaled * Math.sqrt(oneMinusH));
+      cooksDistance[i] = (standardized[i] ** 2 * h) / (p * oneMinusH);
+    }
+    const deletedRss = scaledRss - (u[i] * u[i]) / oneMinusH;
+    if (perfectFit) undefinedBecause[i] = 'exact-fit';
+    else if (deletedDf <= 0) undefinedBecause[i] = 'no-deleted-df';
+    else if (deletedRss <= DELETED_RSS_TOLERANCE * scaledRss) undefinedBecause[i] = 'rest-fit-exactly';
+    else {
+      studentized[i] = u[i] / (Math.sqrt(deletedRss / deletedDf) * Math.sqrt(oneMinusH));
+      dffits[i] = studentized[i] * Math.sqrt(h / oneMinusH);
+    }
   }
-  return h;
+  const columns = {
+    n,
+    p,
+    sigmaKnown,
+    fitted: solution.fitted,
+    residual: solution.residuals,
+    leverage,
+    standardized,
+    studentized,
+    cooksDistance,
+    dffits,
+    undefinedBecause,
+  };
+  let rows: RowDiagnostics[] | undefined;
+  return {
+    ...columns,
+    get rows(): RowDiagnostics[] {
+      rows ??= Array.from({ length: n }, (_, i) => ({
+        fitted: columns.fitted[i],
+        residual: columns.residual[i],
+        leverage: leverage[i],
+        standardized: standardized[i],
+        studentized: studentized[i],
+        cooksDistance: cooksDistance[i],
+        dffits: dffits[i],
+        undefinedBecause: undefinedBecause[i],
+      }));
+      return rows;
+    },
+  };
 }
 
 /** The largest finite Cook's distance, or NaN when no row has one. */
 export function maxCooksDistance(diagnostics: ResidualDiagnostics): number {
-  return diagnostics.rows.reduce(
-    (max, row) => (Number.isFinite(row.cooksDistance) && (Number.isNaN(max) || row.cooksDistance > max) ? row.cooksDistance : max),
-    Number.NaN,
-  );
+  let max = Number.NaN;
+  for (const d of diagnostics.cooksDistance) if (Number.isFinite(d) && (Number.isNaN(max) || d > max)) max = d;
+  return max;
 }

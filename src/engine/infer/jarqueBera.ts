@@ -1,4 +1,5 @@
 import type { LeastSquaresSolution } from '../fit/leastSquares';
+import { equalVarianceResiduals } from './equalVarianceResiduals';
 
 /**
  * Jarque & Bera, "Efficient tests for normality, homoscedasticity and serial independence of
@@ -22,14 +23,16 @@ export interface JarqueBera {
 export function jarqueBera(solution: LeastSquaresSolution): JarqueBera {
   const nan = Number.NaN;
   if (solution.perfectFit) return { statistic: nan, skewness: nan, kurtosis: nan, pValue: nan, undefinedBecause: 'exact-fit' };
-  const u = Array.from(solution.residuals, (e, i) => ((solution.design.rootWeights?.[i] ?? 1) * e) / solution.yScale);
+  const u = equalVarianceResiduals(solution);
   const n = u.length;
-  const mean = u.reduce((s, v) => s + v, 0) / n;
+  let sum = 0;
+  for (let i = 0; i < n; i++) sum += u[i];
+  const mean = sum / n;
   let m2 = 0;
   let m3 = 0;
   let m4 = 0;
-  for (const v of u) {
-    const d = v - mean;
+  for (let i = 0; i < n; i++) {
+    const d = u[i] - mean;
     m2 += d * d;
     m3 += d * d * d;
     m4 += d * d * d * d;

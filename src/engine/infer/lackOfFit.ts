@@ -1,5 +1,7 @@
 import { fisherFUpperTail } from '../distributions/fisherF';
+import { predictorValues } from '../cache/packedPredictors';
 import type { ModelData } from '../types';
+import { settingGroups } from './settingGroups';
 
 /**
  * Lack of fit against pure error (NIST/SEMATECH e-Handbook of Statistical Methods §4.4.4.3;
@@ -36,15 +38,9 @@ export type LackOfFitReason = 'no-replicates' | 'no-lack-df' | 'replicates-agree
 
 export function lackOfFit(data: ModelData, rss: number, rank: number): LackOfFit {
   const n = data.y.length;
-  const groups = new Map<string, number[]>();
-  data.x.forEach((row, i) => {
-    // Numbers print uniquely (shortest round-trip form), so equal keys are exactly equal values.
-    const key = row.join('|');
-    const members = groups.get(key);
-    if (members === undefined) groups.set(key, [i]);
-    else members.push(i);
-  });
-  const settings = groups.size;
+  const { values, p } = predictorValues(data);
+  const groups = settingGroups(values, n, p);
+  const settings = groups.count;
   const pureDf = n - settings;
   const lackDf = settings - rank;
   const nan = Number.NaN;
@@ -52,19 +48,21 @@ export function lackOfFit(data: ModelData, rss: number, rank: number): LackOfFit
   if (pureDf <= 0) return { ...result, undefinedBecause: 'no-replicates' };
   if (lackDf <= 0) return { ...result, undefinedBecause: 'no-lack-df' };
 
-  const weightOf = (i: number): number => data.weights?.[i] ?? 1;
+  const { y, weights } = data;
+  const { first, next, sizes } = groups;
   let pureSs = 0;
-  for (const members of groups.values()) {
-    if (members.length < 2) continue;
+  for (let g = 0; g < settings; g++) {
+    if (sizes[g] < 2) continue;
     // Two passes: the mean first, then squares about it, so a large common level cancels exactly.
     let weightSum = 0;
     let weighted = 0;
-    for (const i of members) {
-      weightSum += weightOf(i);
-      weighted += weightOf(i) * data.y[i];
+    for (let i = first[g]; i >= 0; i = next[i]) {
+      const w = weights?.[i] ?? 1;
+      weightSum += w;
+      weighted += w * y[i];
     }
     const mean = weighted / weightSum;
-    for (const i of members) pureSs += weightOf(i) * (data.y[i] - mean) ** 2;
+    for (let i = first[g]; i >= 0; i = next[i]) pureSs += (weights?.[i] ?? 1) * (y[i] - mean) ** 2;
   }
   result.pureSs = pureSs;
   // The difference of two sums of squares can come out a rounding below 0 when the model fits every mean.

@@ -29,7 +29,7 @@ export interface OutlierTest {
  */
 export type OutlierTestReason = 'no-deleted-df' | 'no-studentized';
 
-export function outlierTest(studentized: readonly number[], n: number, p: number): OutlierTest {
+export function outlierTest(studentized: ArrayLike<number>, n: number, p: number): OutlierTest {
   const df = n - p - 1;
   const result: OutlierTest = {
     index: -1,
@@ -40,14 +40,15 @@ export function outlierTest(studentized: readonly number[], n: number, p: number
     undefinedBecause: undefined,
   };
   if (df <= 0) return { ...result, undefinedBecause: 'no-deleted-df' };
-  studentized.forEach((t, i) => {
-    if (Number.isNaN(t)) return;
+  for (let i = 0; i < studentized.length; i++) {
+    const t = studentized[i];
+    if (Number.isNaN(t)) continue;
     result.rowsTested++;
     if (result.index < 0 || Math.abs(t) > Math.abs(result.studentized)) {
       result.index = i;
       result.studentized = t;
     }
-  });
+  }
   if (result.index < 0) return { ...result, undefinedBecause: 'no-studentized' };
   result.pValue = studentTTwoSidedP(result.studentized, df);
   result.bonferroniP = bonferroniP(result.pValue, result.rowsTested);

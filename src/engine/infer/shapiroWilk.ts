@@ -53,12 +53,12 @@ function polynomial(coefficients: readonly number[], x: number): number {
   return sum;
 }
 
-export function shapiroWilk(values: readonly number[]): ShapiroWilk {
+export function shapiroWilk(values: ArrayLike<number>): ShapiroWilk {
   const n = values.length;
   const nan = Number.NaN;
   if (n < SHAPIRO_WILK_MIN_N) return { statistic: nan, pValue: nan, n, undefinedBecause: 'too-few' };
   if (n > SHAPIRO_WILK_MAX_N) return { statistic: nan, pValue: nan, n, undefinedBecause: 'too-many' };
-  const x = [...values].sort((a, b) => a - b);
+  const x = Array.from(values).sort((a, b) => a - b);
   const range = x[n - 1] - x[0];
   if (!(range > 0)) return { statistic: nan, pValue: nan, n, undefinedBecause: 'constant' };
 

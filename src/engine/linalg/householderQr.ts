@@ -20,6 +20,9 @@ export interface QrFactorization {
   taus: Float64Array;
 }
 
+/** The one reflector block every factorization uses in turn (see ReflectorBlock on why one). */
+const SHARED_BLOCK = new ReflectorBlock();
+
 export function householderQr(scaled: ColumnMajorMatrix, aliasTolerance: number): QrFactorization {
   return factorInPlace({ rows: scaled.rows, cols: scaled.cols, data: new Float64Array(scaled.data) }, aliasTolerance);
 }
@@ -45,34 +48,38 @@ export function factorInPlace(m: ColumnMajorMatrix, aliasTolerance: number, carr
 
   // Left-looking within a block, right-looking across blocks: each column first receives the
   // reflectors still pending, and a full block is then applied to every later column at once.
-  const block = new ReflectorBlock(work, n);
-  for (let j = 0; j < factored; j++) {
-    const k = accepted.length;
-    const col = columnView(m, j);
-    const remaining = k < n ? normOf(block.prepareColumn(j, k), col, k) : 0;
-    if (!(remaining > aliasTolerance)) {
-      aliased[j] = true;
-      continue;
+  const block = SHARED_BLOCK.attach(work, n);
+  try {
+    for (let j = 0; j < factored; j++) {
+      const k = accepted.length;
+      const col = columnView(m, j);
+      const remaining = k < n ? normOf(block.prepareColumn(j, k), col, k) : 0;
+      if (!(remaining > aliasTolerance)) {
+        aliased[j] = true;
+        continue;
+      }
+      const rColumn = col.slice(0, k + 1);
+      const alpha = col[k];
+      const tau = reflectInPlace(col, k, remaining);
+      rColumn[k] = col[k];
+      // The same 1/(α − β) that reflectInPlace scaled by.
+      const inverse = 1 / (alpha - col[k]);
+      col[k] = 1;
+      block.add(j * n, k, tau, inverse);
+      if (block.size === BLOCK_SIZE) {
+        block.applyTo(j + 1, m.cols - j - 1);
+        block.clear();
+      }
+      accepted.push(j);
+      reflectors.push(col);
+      tauList.push(tau);
+      rColumns.push(rColumn);
     }
-    const rColumn = col.slice(0, k + 1);
-    const alpha = col[k];
-    const tau = reflectInPlace(col, k, remaining);
-    rColumn[k] = col[k];
-    // The same 1/(α − β) that reflectInPlace scaled by.
-    const inverse = 1 / (alpha - col[k]);
-    col[k] = 1;
-    block.add(j * n, k, tau, inverse);
-    if (block.size === BLOCK_SIZE) {
-      block.applyTo(j + 1, m.cols - j - 1);
-      block.clear();
-    }
-    accepted.push(j);
-    reflectors.push(col);
-    tauList.push(tau);
-    rColumns.push(rColumn);
+    // What is still pending reaches the carried columns; the factored ones have had it already.
+    block.applyTo(factored, carried);
+  } finally {
+    block.detach();
   }
-  // What is still pending reaches the carried columns; the factored ones have had it already.
-  block.applyTo(factored, carried);
 
   const rank = accepted.length;
   const r = new Float64Array(rank * rank);

@@ -12,6 +12,12 @@ export const BLOCK_SIZE = 4;
  * cache, that is what bounds the factorization.
  *
  * Each v_a is a column of `data` starting at offsets[a], zero above its row ks[a] and 1 there.
+ *
+ * One instance serves every factorization (attach, then detach). With a block made per fit, V8
+ * dropped the optimized code of these methods at each full garbage collection that found no
+ * instance alive (the instances' hidden class died with them), so the next fit ran its kernels
+ * unoptimized until they were compiled again: 6 ms became 30–60 ms at 12,500 × 20 (seen here with
+ * node --trace-opt, Node 20).
  */
 export class ReflectorBlock {
   size = 0;
@@ -22,10 +28,23 @@ export class ReflectorBlock {
   /** v_aᵀx over rows > k of the column `prepareColumn` last handled. */
   private readonly columnDots = new Float64Array(BLOCK_SIZE);
 
-  constructor(
-    private readonly data: Float64Array,
-    private readonly rows: number,
-  ) {}
+  private data: Float64Array = new Float64Array(0);
+  private rows = 0;
+
+  /** Starts a factorization of the column-major `data` with `rows` rows, with no reflectors held. */
+  attach(data: Float64Array, rows: number): this {
+    this.data = data;
+    this.rows = rows;
+    this.clear();
+    return this;
+  }
+
+  /** Lets go of the factorization's storage, so a finished fit's matrix is not kept alive here. */
+  detach(): void {
+    this.data = new Float64Array(0);
+    this.rows = 0;
+    this.clear();
+  }
 
   /**
    * Adds H = I − τvvᵀ after the reflectors already held. v is at `offset`, from row k, made from
@@ -56,44 +75,84 @@ export class ReflectorBlock {
    */
   prepareColumn(column: number, k: number): number {
     const s = this.size;
+    if (s === 0) return sumOfSquares(this.data, column * this.rows + k, column * this.rows + this.rows);
+    if (s >= BLOCK_SIZE) throw new Error('a full block is applied before the next column is prepared');
     const { data, rows, t, offsets, columnDots } = this;
     const base = column * rows;
-    columnDots.fill(0);
-    const y = new Float64Array(s);
-    const start = s > 0 ? Math.min(this.ks[0], k) : k;
-    if (s > 0) {
-      for (let from = start; from < rows; from += ROW_TILE) {
-        const to = Math.min(rows, from + ROW_TILE);
-        for (let a = 0; a < s; a++) {
-          const va = offsets[a];
-          let dot = 0;
-          for (let i = from; i < to; i++) dot += data[va + i] * data[base + i];
-          y[a] += dot;
-        }
-      }
-      for (let a = s - 1; a >= 0; a--) {
-        let sum = 0;
-        for (let b = 0; b <= a; b++) sum += t[b * BLOCK_SIZE + a] * y[b];
-        y[a] = sum;
-      }
-    }
-    let squares = 0;
+    // Up to three reflectors are pending here (a fourth completes the block, which is then applied
+    // whole), taken together in each sweep. An absent one reads reflector 0 in the products, which
+    // are then left unused, and is skipped in the update, so every number is what one sweep per
+    // reflector gives.
+    const v0 = offsets[0];
+    const v1 = s > 1 ? offsets[1] : v0;
+    const v2 = s > 2 ? offsets[2] : v0;
+    const start = this.ks[0];
+    let y0 = 0;
+    let y1 = 0;
+    let y2 = 0;
     for (let from = start; from < rows; from += ROW_TILE) {
       const to = Math.min(rows, from + ROW_TILE);
-      for (let a = 0; a < s; a++) {
-        const va = offsets[a];
-        const ya = y[a];
-        for (let i = from; i < to; i++) data[base + i] -= data[va + i] * ya;
+      let d0 = 0;
+      let d1 = 0;
+      let d2 = 0;
+      for (let i = from; i < to; i++) {
+        const x = data[base + i];
+        d0 += data[v0 + i] * x;
+        d1 += data[v1 + i] * x;
+        d2 += data[v2 + i] * x;
       }
-      for (let i = Math.max(from, k); i < to; i++) squares += data[base + i] * data[base + i];
-      const after = Math.max(from, k + 1);
-      for (let a = 0; a < s; a++) {
-        const va = offsets[a];
-        let dot = 0;
-        for (let i = after; i < to; i++) dot += data[va + i] * data[base + i];
-        columnDots[a] += dot;
-      }
+      y0 += d0;
+      y1 += d1;
+      y2 += d2;
     }
+    // Y = Tᵀy, from the last entry up; entries past s stay 0.
+    const y = [y0, y1, y2];
+    for (let a = s - 1; a >= 0; a--) {
+      let sum = 0;
+      for (let b = 0; b <= a; b++) sum += t[b * BLOCK_SIZE + a] * y[b];
+      y[a] = sum;
+    }
+    const w0 = y[0];
+    const w1 = s > 1 ? y[1] : 0;
+    const w2 = s > 2 ? y[2] : 0;
+    let squares = 0;
+    let c0 = 0;
+    let c1 = 0;
+    let c2 = 0;
+    for (let from = start; from < rows; from += ROW_TILE) {
+      const to = Math.min(rows, from + ROW_TILE);
+      let e0 = 0;
+      let e1 = 0;
+      let e2 = 0;
+      // Rows up to k are brought up to date only (k's own square counts); past k they also feed v_aᵀx.
+      const head = Math.min(to, Math.max(from, k + 1));
+      for (let i = from; i < head; i++) {
+        let x = data[base + i];
+        x -= data[v0 + i] * w0;
+        if (s > 1) x -= data[v1 + i] * w1;
+        if (s > 2) x -= data[v2 + i] * w2;
+        data[base + i] = x;
+        if (i >= k) squares += x * x;
+      }
+      for (let i = head; i < to; i++) {
+        let x = data[base + i];
+        x -= data[v0 + i] * w0;
+        if (s > 1) x -= data[v1 + i] * w1;
+        if (s > 2) x -= data[v2 + i] * w2;
+        data[base + i] = x;
+        squares += x * x;
+        e0 += data[v0 + i] * x;
+        e1 += data[v1 + i] * x;
+        e2 += data[v2 + i] * x;
+      }
+      c0 += e0;
+      c1 += e1;
+      c2 += e2;
+    }
+    columnDots.fill(0);
+    columnDots[0] = c0;
+    if (s > 1) columnDots[1] = c1;
+    if (s > 2) columnDots[2] = c2;
     return squares;
   }
 
@@ -215,4 +274,10 @@ export class ReflectorBlock {
       }
     }
   }
+}
+
+function sumOfSquares(data: Float64Array, from: number, to: number): number {
+  let sum = 0;
+  for (let i = from; i < to; i++) sum += data[i] * data[i];
+  return sum;
 }

@@ -102,7 +102,7 @@ export class ShimRange extends ShimClientObject<RangeTarget> {
       case 'rowIndex':
         return ref.top;
       case 'values':
-        return grid(target, (row, column) => apiValue(model.valueAt(at(row, column))));
+        return model.valuesIn(ref).map((row) => row.map(apiValue));
       case 'formulas':
         return grid(target, (row, column) => apiFormula(model.inputAt(at(row, column))));
       case 'numberFormat':

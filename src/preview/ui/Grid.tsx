@@ -1,16 +1,17 @@
 import { useEffect, useRef, useState } from 'preact/hooks';
 import { cellAddress, columnLetters } from '../../addressing/a1';
-import { plotChart } from '../workbook/chartData';
+import { plotChart, type PlottedChart } from '../workbook/chartData';
 import { anchorAt, PIXELS_PER_POINT } from '../workbook/layout';
-import type { RangeRef } from '../workbook/types';
+import type { ChartSpec, RangeRef } from '../workbook/types';
 import type { PreviewWorkbook } from '../workbook/workbook';
 import { formatValue } from '../workbook/numberFormat';
 import { ScatterChart } from './ScatterChart';
 
 const ROW_HEIGHT = 24;
 const HEADER_WIDTH = 52;
-/** Rows drawn beyond the visible window, so scrolling does not show blank gaps. */
+/** Rows and columns drawn beyond the visible window, so scrolling does not show blank gaps. */
 const OVERSCAN = 10;
+const COLUMN_OVERSCAN = 3;
 /** Preact passes style numbers through unchanged, so lengths carry their unit. */
 const px = (n: number): string => `${n}px`;
 const MIN_ROWS = 60;
@@ -28,16 +29,41 @@ function inRange(range: RangeRef, row: number, column: number): boolean {
   return row >= range.top && row <= range.bottom && column >= range.left && column <= range.right;
 }
 
+/** The first and last of the columns whose span meets [from, to], in canvas pixels. */
+function columnsMeeting(edges: readonly number[], from: number, to: number): { first: number; last: number } {
+  let first = 0;
+  while (first < edges.length - 2 && edges[first + 1] <= from) first++;
+  let last = first;
+  while (last < edges.length - 2 && edges[last + 1] < to) last++;
+  return { first, last };
+}
+
 /**
- * The sheet's cells, drawn as a window over the rows in view so that sheets of hundreds of
- * thousands of rows stay responsive.
+ * The sheet's cells, drawn as a window over the rows and columns in view so that sheets of
+ * hundreds of thousands of rows, and reports a hundred columns wide, stay responsive: every
+ * recalculation redraws the grid in the same task.
  */
 export function Grid({ workbook, sheet, selection, onSelect, onStartEdit }: GridProps) {
   const scroller = useRef<HTMLDivElement>(null);
   const [scrollTop, setScrollTop] = useState(0);
+  const [scrollLeft, setScrollLeft] = useState(0);
   const [height, setHeight] = useState(600);
+  // Until the first measurement, as wide as a large screen, so no column in view is left out.
+  const [width, setWidth] = useState(2560);
   const extent = workbook.usedExtent(sheet);
+  // Each chart's values, read again only once a value or the chart itself has changed: a report's
+  // charts read thousands of cells, and the grid redraws on every selection change too.
+  const plots = useRef(new Map<string, { key: string; plotted: PlottedChart }>());
+  const plotted = (chart: ChartSpec): PlottedChart => {
+    const key = `${workbook.valuesRevision()}|${JSON.stringify(chart)}`;
+    const cached = plots.current.get(chart.id);
+    if (cached?.key === key) return cached.plotted;
+    const fresh = plotChart(workbook, chart);
+    plots.current.set(chart.id, { key, plotted: fresh });
+    return fresh;
+  };
   const charts = workbook.charts(sheet);
+  for (const id of plots.current.keys()) if (!charts.some((c) => c.id === id)) plots.current.delete(id);
   const widthOf = (column: number) => workbook.columnWidth(sheet, column);
   // The grid reaches past the last chart too, so every chart can be scrolled into view.
   const chartEnds = charts.map((c) => anchorAt(widthOf, c.bounds.left + c.bounds.width, c.bounds.top + c.bounds.height));
@@ -50,13 +76,19 @@ export function Grid({ workbook, sheet, selection, onSelect, onStartEdit }: Grid
   useEffect(() => {
     const el = scroller.current;
     if (!el) return;
-    const observer = new ResizeObserver(() => setHeight(el.clientHeight));
+    const observer = new ResizeObserver(() => {
+      setHeight(el.clientHeight);
+      setWidth(el.clientWidth);
+    });
     observer.observe(el);
     return () => observer.disconnect();
   }, []);
 
   const first = Math.max(0, Math.floor(scrollTop / ROW_HEIGHT) - OVERSCAN);
   const last = Math.min(rows - 1, Math.ceil((scrollTop + height) / ROW_HEIGHT) + OVERSCAN);
+  const inView = columnsMeeting(edges, scrollLeft, scrollLeft + width);
+  const firstColumn = Math.max(0, inView.first - COLUMN_OVERSCAN);
+  const lastColumn = Math.min(columns - 1, inView.last + COLUMN_OVERSCAN);
   const anchor = { row: selection.top, column: selection.left };
 
   const move = (dRow: number, dColumn: number, extend: boolean) => {
@@ -113,7 +145,7 @@ export function Grid({ workbook, sheet, selection, onSelect, onStartEdit }: Grid
   const visible = [];
   for (let row = first; row <= last; row++) {
     const cells = [];
-    for (let column = 0; column < columns; column++) {
+    for (let column = firstColumn; column <= lastColumn; column++) {
       const position = { sheet, row, column };
       const value = workbook.valueAt(position);
       const style = workbook.styleAt(position);
@@ -168,13 +200,17 @@ export function Grid({ workbook, sheet, selection, onSelect, onStartEdit }: Grid
       aria-label={`Sheet ${sheet}`}
       aria-rowcount={rows}
       aria-colcount={columns}
-      onScroll={(e) => setScrollTop((e.currentTarget as HTMLDivElement).scrollTop)}
+      onScroll={(e) => {
+        const el = e.currentTarget as HTMLDivElement;
+        setScrollTop(el.scrollTop);
+        setScrollLeft(el.scrollLeft);
+      }}
       onKeyDown={onKeyDown}
     >
       <div class="grid-canvas" style={{ height: px(ROW_HEIGHT * (rows + 1)), width: px(edges[columns]) }}>
         <div class="column-headers" role="row" style={{ top: px(scrollTop) }}>
           <div class="corner" style={{ width: px(HEADER_WIDTH) }} />
-          {Array.from({ length: columns }, (_, column) => (
+          {Array.from({ length: lastColumn - firstColumn + 1 }, (_, k) => firstColumn + k).map((column) => (
             <div key={column} class="column-header" role="columnheader" style={{ left: px(edges[column]), width: px(edges[column + 1] - edges[column]) }}>
               {columnLetters(column)}
             </div>
@@ -185,7 +221,7 @@ export function Grid({ workbook, sheet, selection, onSelect, onStartEdit }: Grid
           <ScatterChart
             key={chart.id}
             name={chart.name}
-            plotted={plotChart(workbook, chart)}
+            plotted={plotted(chart)}
             left={HEADER_WIDTH + chart.bounds.left * PIXELS_PER_POINT}
             top={ROW_HEIGHT + chart.bounds.top * PIXELS_PER_POINT}
             width={chart.bounds.width * PIXELS_PER_POINT}

@@ -1,5 +1,7 @@
+import { memo } from 'preact/compat';
 import type { PlottedChart } from '../workbook/chartData';
 import { axisTicks, extent, hasZeroLine, linearScale, tickLabel } from './chartScale';
+import { markerPath } from './markerPath';
 
 interface ScatterChartProps {
   name: string;
@@ -16,14 +18,16 @@ const SERIES_COLOURS = ['#0f766e', '#52525b', '#b45309', '#1d4ed8'];
 const TICK_TARGET = 5;
 
 const colourOf = (index: number) => SERIES_COLOURS[index % SERIES_COLOURS.length];
+const MARKER_RADIUS = 3.5;
 
 /**
- * One scatter chart over the grid, drawn as inline SVG from the values its cells hold now: marker
+ * One scatter chart over the grid (redrawn only when its props change: the grid passes the same
+ * plotted values until a value changes), drawn as inline SVG from the values its cells hold now: marker
  * series as dots, line series as straight lines without markers. Axes follow Excel's automatic
  * scale unless their bounds are fixed; what lies outside fixed bounds is clipped, as in Excel.
  * Axis titles and the series names (when there are several) take space only when present.
  */
-export function ScatterChart({ name, plotted, left, top, width, height }: ScatterChartProps) {
+export const ScatterChart = memo(function ScatterChart({ name, plotted, left, top, width, height }: ScatterChartProps) {
   const points = plotted.series.flatMap((s) => s.points);
   const xTicks = axisTicks(plotted.xScale, ...extent(points.map((p) => p.x)), TICK_TARGET);
   const yTicks = axisTicks(plotted.yScale, ...extent(points.map((p) => p.y)), TICK_TARGET);
@@ -95,10 +99,15 @@ export function ScatterChart({ name, plotted, left, top, width, height }: Scatte
                 ))}
             </g>
           ) : (
-            <g key={i} class="chart-series" data-series={s.name} clip-path={`url(#${clipId})`} fill={colourOf(i)}>
-              {s.points.map((p, j) => (
-                <circle key={j} cx={x(p.x)} cy={y(p.y)} r={3.5} />
-              ))}
+            <g key={i} class="chart-series" data-series={s.name} clip-path={`url(#${clipId})`}>
+              <path
+                class="chart-markers"
+                d={markerPath(s.points, x, y)}
+                stroke={colourOf(i)}
+                stroke-width={2 * MARKER_RADIUS}
+                stroke-linecap="round"
+                fill="none"
+              />
             </g>
           ),
         )}
@@ -115,4 +124,4 @@ export function ScatterChart({ name, plotted, left, top, width, height }: Scatte
       </svg>
     </div>
   );
-}
+});

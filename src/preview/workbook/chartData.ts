@@ -5,7 +5,7 @@
  */
 import type { AxisScale, CellValue, ChartSeriesSource, ChartSpec, RangeRef, WorkbookModel } from './types';
 
-export type CellReader = Pick<WorkbookModel, 'valueAt' | 'hasSheet'>;
+export type CellReader = Pick<WorkbookModel, 'valuesIn' | 'hasSheet'>;
 
 export interface PlottedPoint {
   x: number;
@@ -37,11 +37,7 @@ export interface PlottedChart {
 /** Reads across then down, the order Excel takes a one-row or one-column range in. */
 export function rangeValues(model: CellReader, ref: RangeRef): CellValue[] {
   if (!model.hasSheet(ref.sheet)) return [];
-  const values: CellValue[] = [];
-  for (let row = ref.top; row <= ref.bottom; row++) {
-    for (let column = ref.left; column <= ref.right; column++) values.push(model.valueAt({ sheet: ref.sheet, row, column }));
-  }
-  return values;
+  return model.valuesIn(ref).flat();
 }
 
 function labelOf(value: CellValue): string {

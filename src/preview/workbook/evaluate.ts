@@ -6,7 +6,7 @@
  */
 import { callBuiltin, divide, isBuiltin, type BuiltinResult, type OperandOf } from './builtins';
 import { CustomFunctionsError } from './customFunctionError';
-import { buildArguments, type CalculationBehaviour } from './functionArguments';
+import { buildArguments, type CalculationBehaviour, type SheetCells } from './functionArguments';
 import type { FunctionShape } from './functionMetadata';
 import type { Expression } from './formula';
 import type { CellError, CellValue, CustomFunction } from './types';
@@ -20,6 +20,7 @@ export interface FunctionEntry {
 export interface EvaluationContext {
   valueAt(sheet: string, row: number, column: number): CellValue;
   hasSheet(name: string): boolean;
+  sheetCells(name: string): SheetCells | undefined;
   lookup(name: string): FunctionEntry | undefined;
   behaviour: CalculationBehaviour;
 }

@@ -36,7 +36,14 @@ export const CURRENT_EXCEL: CalculationBehaviour = { blankCellsAs: null, errorAr
 export interface ArgumentSource {
   valueAt(sheet: string, row: number, column: number): CellValue;
   hasSheet(name: string): boolean;
+  /**
+   * The cells of one sheet, looked up once for a whole range: a range argument reads every cell
+   * of it, and finding the sheet by name per cell cost more than the function it feeds.
+   */
+  sheetCells(name: string): SheetCells | undefined;
 }
+
+export type SheetCells = (row: number, column: number) => CellValue;
 
 export type Arguments = { values: unknown[] } | { error: CellError };
 
@@ -110,11 +117,14 @@ class Builder {
   }
 
   private grid(range: RangeRef, parameter: ParameterShape | undefined): unknown[][] {
-    const rows: unknown[][] = [];
+    const cells = this.source.sheetCells(range.sheet);
+    if (cells === undefined) throw new NotCalled({ error: '#REF!', message: `There is no sheet named ${range.sheet}.` });
+    const width = range.right - range.left + 1;
+    const rows: unknown[][] = new Array<unknown[]>(range.bottom - range.top + 1);
     for (let r = range.top; r <= range.bottom; r++) {
-      const row: unknown[] = [];
-      for (let c = range.left; c <= range.right; c++) row.push(this.cell(this.source.valueAt(range.sheet, r, c), parameter));
-      rows.push(row);
+      const row: unknown[] = new Array<unknown>(width);
+      for (let c = 0; c < width; c++) row[c] = this.cell(cells(r, range.left + c), parameter);
+      rows[r - range.top] = row;
     }
     return rows;
   }

@@ -95,6 +95,8 @@ export interface WorkbookModel {
 
   inputAt(position: CellPosition): CellInput;
   valueAt(position: CellPosition): CellValue;
+  /** Every value of a range, row by row, as valueAt gives them, with the sheet looked up once. */
+  valuesIn(range: RangeRef): CellValue[][];
   /** Sets inputs starting at the range's top-left cell and recalculates once afterwards. */
   setInputs(sheet: string, top: number, left: number, inputs: readonly (readonly CellInput[])[]): void;
   /** Number formats are kept per cell; "General" when never set. */

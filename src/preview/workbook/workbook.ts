@@ -5,9 +5,10 @@
  */
 import { MAX_COLUMNS, rangesOverlap } from '../../addressing/a1';
 import { evaluate, type FormulaResult, type FunctionEntry, isCellError, NAMESPACE } from './evaluate';
+import { CellLayer, type LayerBounds } from './cellLayer';
 import { ChartList } from './charts';
 import { FormulaSyntaxError, parseFormula, referencedRanges, type Expression } from './formula';
-import { CURRENT_EXCEL, type CalculationBehaviour } from './functionArguments';
+import { CURRENT_EXCEL, type CalculationBehaviour, type SheetCells } from './functionArguments';
 import { shapesFromMetadata, type FunctionShape } from './functionMetadata';
 import { ROW_HEIGHT, STANDARD_COLUMN_WIDTH } from './layout';
 import type {
@@ -25,6 +26,8 @@ import type {
 } from './types';
 
 interface FormulaCell {
+  /** Where it was entered; it is current while that cell of that sheet still holds it. */
+  anchor: { sheet: Sheet; row: number; column: number };
   text: string;
   expression: Expression | undefined;
   syntaxError: string | undefined;
@@ -39,11 +42,11 @@ interface FormulaCell {
 
 interface Sheet {
   name: string;
-  inputs: Map<number, CellInput>;
+  inputs: CellLayer<CellInput>;
   formats: Map<number, string>;
-  formulas: Map<number, FormulaCell>;
-  /** Values spilled from formulas into other cells, keyed by cell. */
-  spilled: Map<number, CellValue>;
+  formulas: CellLayer<FormulaCell>;
+  /** Values spilled from formulas into other cells. */
+  spilled: CellLayer<CellValue>;
   /** Only cells with some style set. */
   styles: Map<number, CellStyle>;
   widths: Map<number, number>;
@@ -72,6 +75,7 @@ export class PreviewWorkbook implements WorkbookModel {
   private readonly listeners = new Set<() => void>();
   private readonly editListeners = new Set<(edited: RangeRef) => void>();
   private chartsAdded = 0;
+  private valueChanges = 0;
 
   constructor(firstSheet = 'Sheet1') {
     this.addSheet(firstSheet);
@@ -88,9 +92,19 @@ export class PreviewWorkbook implements WorkbookModel {
 
   addSheet(name: string): void {
     this.validateNewName(name);
+    this.valueChanges++;
     const widths = new Map<number, number>();
     const charts = new ChartList((column) => widths.get(column) ?? STANDARD_COLUMN_WIDTH);
-    this.sheets.push({ name, inputs: new Map(), formats: new Map(), formulas: new Map(), spilled: new Map(), styles: new Map(), widths, charts });
+    this.sheets.push({
+      name,
+      inputs: new CellLayer(),
+      formats: new Map(),
+      formulas: new CellLayer(),
+      spilled: new CellLayer(),
+      styles: new Map(),
+      widths,
+      charts,
+    });
     this.recalculate(this.allFormulasReading(name));
     this.notify();
   }
@@ -98,6 +112,7 @@ export class PreviewWorkbook implements WorkbookModel {
   renameSheet(from: string, to: string): void {
     const sheet = this.sheet(from);
     if (from.toLowerCase() !== to.toLowerCase()) this.validateNewName(to);
+    this.valueChanges++;
     sheet.name = to;
     if (this.active === from) this.active = to;
     this.selected = this.selected.map((area) => (area.sheet === from ? { ...area, sheet: to } : area));
@@ -108,6 +123,7 @@ export class PreviewWorkbook implements WorkbookModel {
   deleteSheet(name: string): void {
     const sheet = this.sheet(name);
     if (this.sheets.length === 1) throw new Error('A workbook must keep at least one sheet.');
+    this.valueChanges++;
     this.sheets.splice(this.sheets.indexOf(sheet), 1);
     if (this.active === sheet.name) this.activateSheet(this.sheets[0].name);
     this.recalculate(this.allFormulasReading(sheet.name));
@@ -126,12 +142,31 @@ export class PreviewWorkbook implements WorkbookModel {
 
   inputAt(p: CellPosition): CellInput {
     const sheet = this.sheet(p.sheet);
-    const formula = sheet.formulas.get(key(p.row, p.column));
-    return formula !== undefined ? formula.text : (sheet.inputs.get(key(p.row, p.column)) ?? null);
+    const formula = sheet.formulas.get(p.row, p.column);
+    return formula !== undefined ? formula.text : (sheet.inputs.get(p.row, p.column) ?? null);
   }
 
   valueAt(p: CellPosition): CellValue {
     return this.value(this.sheet(p.sheet), p.row, p.column);
+  }
+
+  valuesIn(range: RangeRef): CellValue[][] {
+    const cells = this.cellsOf(this.sheet(range.sheet));
+    const rows: CellValue[][] = [];
+    for (let r = range.top; r <= range.bottom; r++) {
+      const row: CellValue[] = [];
+      for (let c = range.left; c <= range.right; c++) row.push(cells(r, c));
+      rows.push(row);
+    }
+    return rows;
+  }
+
+  /**
+   * A count that grows whenever any cell's value may have changed (an entry, a recalculated
+   * result, a sheet added, renamed or deleted), so a view drawn from values can be reused while it stays.
+   */
+  valuesRevision(): number {
+    return this.valueChanges;
   }
 
   /** The formula's error message at a cell, for the grid's tooltip and status line. */
@@ -142,26 +177,27 @@ export class PreviewWorkbook implements WorkbookModel {
 
   setInputs(sheetName: string, top: number, left: number, inputs: readonly (readonly CellInput[])[]): void {
     const sheet = this.sheet(sheetName);
+    this.valueChanges++;
     const changed: RangeRef = { sheet: sheet.name, top, left, bottom: top + inputs.length - 1, right: left + (inputs[0]?.length ?? 1) - 1 };
     const dirty = new Set<FormulaCell>();
     inputs.forEach((row, i) =>
       row.forEach((input, j) => {
-        const k = key(top + i, left + j);
-        sheet.inputs.delete(k);
-        const old = sheet.formulas.get(k);
+        const [row, column] = [top + i, left + j];
+        sheet.inputs.delete(row, column);
+        const old = sheet.formulas.get(row, column);
         if (old !== undefined) {
-          this.clearSpill(sheet, k, old);
-          sheet.formulas.delete(k);
+          this.clearSpill(old);
+          sheet.formulas.delete(row, column);
           this.formulasReading(old.area).forEach((f) => dirty.add(f));
         }
         // As in Excel, a cell formatted as text ("@") keeps what is entered as text, even "=…".
-        const asText = sheet.formats.get(k)?.trim() === '@';
+        const asText = sheet.formats.get(key(row, column))?.trim() === '@';
         if (typeof input === 'string' && input.startsWith('=') && input.length > 1 && !asText) {
-          const formula = this.newFormula(sheet, input, top + i, left + j);
-          sheet.formulas.set(k, formula);
+          const formula = this.newFormula(sheet, input, row, column);
+          sheet.formulas.set(row, column, formula);
           dirty.add(formula);
         } else if (input !== null && input !== '') {
-          sheet.inputs.set(k, input);
+          sheet.inputs.set(row, column, input);
         }
       }),
     );
@@ -242,37 +278,29 @@ export class PreviewWorkbook implements WorkbookModel {
     const sheet = this.sheet(sheetName);
     let rows = 0;
     let columns = 0;
-    for (const map of [sheet.inputs, sheet.formulas, sheet.spilled]) {
-      for (const k of map.keys()) {
-        rows = Math.max(rows, rowOf(k) + 1);
-        columns = Math.max(columns, columnOf(k) + 1);
-      }
+    for (const bounds of this.valueBounds(sheet)) {
+      rows = Math.max(rows, bounds.bottom + 1);
+      columns = Math.max(columns, bounds.right + 1);
     }
     return { rows, columns };
   }
 
   usedArea(sheetName: string, valuesOnly: boolean): RangeRef | undefined {
     const sheet = this.sheet(sheetName);
-    const maps: Map<number, unknown>[] = [sheet.inputs, sheet.formulas, sheet.spilled];
-    if (!valuesOnly) maps.push(sheet.formats, sheet.styles);
-    let area: RangeRef | undefined;
-    for (const map of maps) {
-      for (const k of map.keys()) {
-        const row = rowOf(k);
-        const column = columnOf(k);
-        area =
-          area === undefined
-            ? { sheet: sheet.name, top: row, left: column, bottom: row, right: column }
-            : {
-                sheet: sheet.name,
-                top: Math.min(area.top, row),
-                left: Math.min(area.left, column),
-                bottom: Math.max(area.bottom, row),
-                right: Math.max(area.right, column),
-              };
+    const parts = this.valueBounds(sheet);
+    if (!valuesOnly) {
+      for (const map of [sheet.formats, sheet.styles]) {
+        for (const k of map.keys()) parts.push({ top: rowOf(k), left: columnOf(k), bottom: rowOf(k), right: columnOf(k) });
       }
     }
-    return area;
+    if (parts.length === 0) return undefined;
+    return {
+      sheet: sheet.name,
+      top: Math.min(...parts.map((b) => b.top)),
+      left: Math.min(...parts.map((b) => b.left)),
+      bottom: Math.max(...parts.map((b) => b.bottom)),
+      right: Math.max(...parts.map((b) => b.right)),
+    };
   }
 
   selection(): RangeRef {
@@ -355,6 +383,11 @@ export class PreviewWorkbook implements WorkbookModel {
     for (const listener of this.listeners) listener();
   }
 
+  /** The bounds of each non-empty layer of values: inputs, formulas and spilled values. */
+  private valueBounds(sheet: Sheet): LayerBounds[] {
+    return [sheet.inputs.bounds(), sheet.formulas.bounds(), sheet.spilled.bounds()].filter((b) => b !== undefined);
+  }
+
   private eachCell(range: RangeRef, visit: (k: number) => void): void {
     for (let r = range.top; r <= range.bottom; r++) for (let c = range.left; c <= range.right; c++) visit(key(r, c));
   }
@@ -377,16 +410,33 @@ export class PreviewWorkbook implements WorkbookModel {
     if (this.find(name) !== undefined) throw new Error(`A sheet named ${name} already exists.`);
   }
 
+  /** A formula's anchor shows its result, then a spilled value, then the input. */
   private value(sheet: Sheet, row: number, column: number): CellValue {
-    const k = key(row, column);
-    const formula = sheet.formulas.get(k);
-    if (formula !== undefined) {
-      if ('error' in formula.result) return formula.result.error;
-      if (formula.blocked) return { error: '#SPILL!', message: 'The result needs empty cells to spill into; clear the cells in its way.' };
-      return formula.result.grid[0][0];
-    }
-    if (sheet.spilled.has(k)) return sheet.spilled.get(k) ?? null;
-    return sheet.inputs.get(k) ?? null;
+    const formula = sheet.formulas.get(row, column);
+    if (formula !== undefined) return anchorValue(formula);
+    return sheet.spilled.get(row, column) ?? sheet.inputs.get(row, column) ?? null;
+  }
+
+  /**
+   * The sheet's values as value() reads them, for one range argument read row by row: each row's
+   * layers are looked up once for all its columns. Only for reading the sheet as it stands now.
+   */
+  private cellsOf(sheet: Sheet): SheetCells {
+    let current = -1;
+    let formulas: readonly (FormulaCell | undefined)[] | undefined;
+    let spilled: readonly (CellValue | undefined)[] | undefined;
+    let inputs: readonly (CellInput | undefined)[] | undefined;
+    return (row, column) => {
+      if (row !== current) {
+        current = row;
+        formulas = sheet.formulas.row(row);
+        spilled = sheet.spilled.row(row);
+        inputs = sheet.inputs.row(row);
+      }
+      const formula = formulas?.[column];
+      if (formula !== undefined) return anchorValue(formula);
+      return spilled?.[column] ?? inputs?.[column] ?? null;
+    };
   }
 
   private newFormula(sheet: Sheet, text: string, row: number, column: number): FormulaCell {
@@ -394,6 +444,7 @@ export class PreviewWorkbook implements WorkbookModel {
     try {
       const expression = parseFormula(text, sheet.name);
       return {
+        anchor: { sheet, row, column },
         text,
         expression,
         syntaxError: undefined,
@@ -406,6 +457,7 @@ export class PreviewWorkbook implements WorkbookModel {
     } catch (error) {
       const message = error instanceof FormulaSyntaxError ? error.message : String(error);
       return {
+        anchor: { sheet, row, column },
         text,
         expression: undefined,
         syntaxError: message,
@@ -445,11 +497,10 @@ export class PreviewWorkbook implements WorkbookModel {
     return new Set([...this.everyFormula()].filter((f) => calls(f.expression)));
   }
 
-  private anchorOf(formula: FormulaCell): { sheet: Sheet; row: number; column: number } | undefined {
-    for (const sheet of this.sheets) {
-      for (const [k, f] of sheet.formulas) if (f === formula) return { sheet, row: rowOf(k), column: columnOf(k) };
-    }
-    return undefined;
+  /** Where the formula stands, unless it has since been overwritten or its sheet deleted. */
+  private anchorOf(formula: FormulaCell): FormulaCell['anchor'] | undefined {
+    const { sheet, row, column } = formula.anchor;
+    return this.sheets.includes(sheet) && sheet.formulas.get(row, column) === formula ? formula.anchor : undefined;
   }
 
   private recalculate(dirty: Set<FormulaCell>): void {
@@ -457,8 +508,7 @@ export class PreviewWorkbook implements WorkbookModel {
     for (let pass = 0; pass < MAX_PASSES && pending.size > 0; pass++) {
       const next = new Set<FormulaCell>();
       for (const formula of pending) {
-        const place = this.anchorOf(formula);
-        if (place === undefined || formula.expression === undefined) continue;
+        if (this.anchorOf(formula) === undefined || formula.expression === undefined) continue;
         const before = formula.area;
         const outcome = evaluate(formula.expression, {
           valueAt: (s, r, c) => {
@@ -466,22 +516,26 @@ export class PreviewWorkbook implements WorkbookModel {
             return target === undefined ? { error: '#REF!' } : this.value(target, r, c);
           },
           hasSheet: (s) => this.hasSheet(s),
+          sheetCells: (s) => {
+            const target = this.find(s);
+            return target === undefined ? undefined : this.cellsOf(target);
+          },
           lookup: (name) => this.functions.get(name.toUpperCase()),
           behaviour: this.behaviour,
         });
         if (outcome instanceof Promise) {
           const generation = ++formula.generation;
-          this.place(place.sheet, place.row, place.column, formula, { error: { error: '#BUSY!', message: 'Calculating…' } });
+          this.place(formula, { error: { error: '#BUSY!', message: 'Calculating…' } });
           void outcome.then((result) => {
             if (formula.generation !== generation || this.anchorOf(formula) === undefined) return;
             const settled = formula.area;
-            this.place(place.sheet, place.row, place.column, formula, result);
+            this.place(formula, result);
             this.recalculate(new Set([...this.formulasReading(settled), ...this.formulasReading(formula.area)]));
             this.notify();
           });
         } else {
           formula.generation++;
-          this.place(place.sheet, place.row, place.column, formula, outcome);
+          this.place(formula, outcome);
         }
         for (const f of this.formulasReading(before)) if (f !== formula) next.add(f);
         for (const f of this.formulasReading(formula.area)) if (f !== formula) next.add(f);
@@ -490,33 +544,36 @@ export class PreviewWorkbook implements WorkbookModel {
     }
   }
 
-  private clearSpill(sheet: Sheet, anchor: number, formula: FormulaCell): void {
+  private clearSpill(formula: FormulaCell): void {
     if (formula.blocked) return;
-    const { area } = formula;
+    const { area, anchor } = formula;
     for (let r = area.top; r <= area.bottom; r++) {
-      for (let c = area.left; c <= area.right; c++) {
-        const k = key(r, c);
-        if (k !== anchor) sheet.spilled.delete(k);
-      }
+      for (let c = area.left; c <= area.right; c++) if (r !== anchor.row || c !== anchor.column) anchor.sheet.spilled.delete(r, c);
     }
   }
 
-  /** Writes a result at its anchor and spills it, unless any target cell is taken. */
-  private place(sheet: Sheet, row: number, column: number, formula: FormulaCell, result: FormulaResult): void {
-    const anchor = key(row, column);
-    this.clearSpill(sheet, anchor, formula);
-    formula.result = result;
+  /**
+   * Writes a result at its anchor and spills it, unless any target cell is taken. A result that
+   * spills over the very area its last one spilled over owns those cells already: its values
+   * overwrite them in place, and only an input or a formula entered since can block it.
+   */
+  private place(formula: FormulaCell, result: FormulaResult): void {
+    const { sheet, row, column } = formula.anchor;
+    this.valueChanges++;
     const grid = 'grid' in result ? result.grid : [[null]];
-    formula.area = { sheet: sheet.name, top: row, left: column, bottom: row + grid.length - 1, right: column + grid[0].length - 1 };
+    const area: RangeRef = { sheet: sheet.name, top: row, left: column, bottom: row + grid.length - 1, right: column + grid[0].length - 1 };
+    const sameSpill = 'grid' in result && 'grid' in formula.result && !formula.blocked && sameArea(formula.area, area);
+    if (!sameSpill) this.clearSpill(formula);
+    formula.result = result;
+    formula.area = area;
     formula.blocked = false;
     if (!('grid' in result)) return;
-    const occupied = (r: number, c: number): boolean => {
-      const k = key(r, c);
-      return k !== anchor && (sheet.inputs.has(k) || sheet.formulas.has(k) || sheet.spilled.has(k));
-    };
-    for (let r = formula.area.top; r <= formula.area.bottom; r++) {
-      for (let c = formula.area.left; c <= formula.area.right; c++) {
+    const occupied = (r: number, c: number): boolean =>
+      (r !== row || c !== column) && (sheet.inputs.has(r, c) || sheet.formulas.has(r, c) || (!sameSpill && sheet.spilled.has(r, c)));
+    for (let r = area.top; r <= area.bottom; r++) {
+      for (let c = area.left; c <= area.right; c++) {
         if (occupied(r, c)) {
+          if (sameSpill) this.clearSpill(formula);
           formula.blocked = true;
           return;
         }
@@ -524,10 +581,21 @@ export class PreviewWorkbook implements WorkbookModel {
     }
     grid.forEach((cells, i) =>
       cells.forEach((value, j) => {
-        if (i !== 0 || j !== 0) sheet.spilled.set(key(row + i, column + j), value);
+        if (i !== 0 || j !== 0) sheet.spilled.set(row + i, column + j, value);
       }),
     );
   }
+}
+
+function sameArea(a: RangeRef, b: RangeRef): boolean {
+  return a.sheet === b.sheet && a.top === b.top && a.left === b.left && a.bottom === b.bottom && a.right === b.right;
+}
+
+/** What a formula's own cell shows: its error, #SPILL! when blocked, else its result's first cell. */
+function anchorValue(formula: FormulaCell): CellValue {
+  if ('error' in formula.result) return formula.result.error;
+  if (formula.blocked) return { error: '#SPILL!', message: 'The result needs empty cells to spill into; clear the cells in its way.' };
+  return formula.result.grid[0][0];
 }
 
 export function createWorkbook(firstSheet = 'Sheet1'): PreviewWorkbook {

@@ -60,4 +60,14 @@ describe('modelKey', () => {
     expect(sameKey(stored, modelKey(edited, {}, ''))).toBe(false);
     expect(sameKey(stored, modelKey({ y: [...long.y], x: long.x }, {}, ''))).toBe(true);
   });
+
+  it('keys a weighted frame (weights packed) and the same numbers as rows alike', () => {
+    const weights = y.map((_, i) => 1 + (i % 3));
+    const weighted = buildModelFrame({ y: y.map((v) => [v]), x: [x], weights: weights.map((w) => [w]), intercept: true });
+    const rows: ModelData = { ...plain, weights };
+    const packed = modelKey(weighted.data, {}, '');
+    expect(packed.hash).toBe(modelKey(rows, {}, '').hash);
+    expect(sameKey(storedKey(modelKey(rows, {}, '')), packed)).toBe(true);
+    expect(sameKey(storedKey(modelKey(plain, {}, '')), packed)).toBe(false);
+  });
 });

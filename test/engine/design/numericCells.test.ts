@@ -5,7 +5,8 @@
  * and are checked in modelFrame.test.ts and messages.test.ts.
  */
 import { describe, expect, it } from 'vitest';
-import { buildModelFrame } from '../../../src/engine';
+import { buildModelFrame, type CellGrid, type CellValue } from '../../../src/engine';
+import { type NumericCells, readNumericCells } from '../../../src/engine/design/numericCells';
 
 describe('all-numeric ranges', () => {
   it('skip a row at its first blank or #N/A in column order, across blocks and weights', () => {
@@ -66,5 +67,43 @@ describe('all-numeric ranges', () => {
     expect(() => buildModelFrame({ y, x: [[['a'], [1], [2], [3]]], weights: [['w'], [1], [0], [1]], intercept: true })).toThrow(
       'weights row 3 is 0; every weight must be a positive number.',
     );
+  });
+});
+
+describe('a read against the cells an earlier read gave', () => {
+  // Rows 2–6 of a header-led range: row 4 blank in a, so rows 2, 3, 5 and 6 are used.
+  const y = [['y'], [1], [2], [3], [4], [5]];
+  const a = [['a'], [0], [1], [null], [3], [4]];
+  const w = [['w'], [1], [1], [2], [2], [3]];
+  const names = ['y', 'a', 'weight'];
+  const cellErrorCode = (value: object): string | undefined => (value as { errorCode?: string }).errorCode;
+  const read = (yGrid: CellGrid, aGrid: CellGrid, expected?: NumericCells, firstRow = 1) =>
+    readNumericCells(yGrid, [aGrid], w, 1, names, firstRow, cellErrorCode, expected);
+  const expected = read(y, a);
+  if (expected === undefined) throw new Error('the all-numeric cells must read');
+
+  it('gives back the expected cells themselves when every cell agrees', () => {
+    const copies = [y.map((row) => [...row]), a.map((row) => [...row])];
+    expect(read(copies[0], copies[1], expected)).toBe(expected);
+  });
+
+  it('reads anew, as without expected cells, at any one difference', () => {
+    // A used value changed, 0 written as −0, a blank filled in, a blank that becomes #N/A (another
+    // reason), the last row's value changed, and the rows numbered from another first row.
+    const edit = (grid: CellGrid, row: number, value: CellValue): CellGrid => grid.map((cells, i) => (i === row ? [value] : cells));
+    const variants: [CellGrid, CellGrid, number][] = [
+      [edit(y, 2, 2.5), a, 1],
+      [y, edit(a, 1, -0), 1],
+      [y, edit(a, 3, 2), 1],
+      [y, edit(a, 3, '#N/A'), 1],
+      [edit(y, 5, 6), a, 1],
+      [y, a, 11],
+    ];
+    for (const [yGrid, aGrid, firstRow] of variants) {
+      const again = read(yGrid, aGrid, expected, firstRow);
+      expect(again).not.toBe(expected);
+      expect(again).toEqual(read(yGrid, aGrid, undefined, firstRow));
+      expect(again).not.toEqual(expected);
+    }
   });
 });

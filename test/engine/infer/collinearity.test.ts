@@ -5,10 +5,16 @@
  * of the unit-scaled design. Textbook closed forms: with two predictors of correlation r both
  * VIFs are 1/(1 − r²); orthogonal columns of equal norm have every singular value equal; the
  * singular values of a 2×2 matrix have product |det| and squares summing to its Frobenius norm².
+ * The entries over a model's data and over its fit are checked against collinearity of the same
+ * rows: the fit factors the same unit-scaled weighted design; equal numbers share one result
+ * (common practice, no source).
  */
 import { Matrix, QrDecomposition, SingularValueDecomposition } from 'ml-matrix';
 import { describe, expect, it } from 'vitest';
-import { collinearity } from '../../../src/engine';
+import { collinearity, type ModelData } from '../../../src/engine';
+import { registerPackedData } from '../../../src/engine/cache/packedPredictors';
+import { solveModel } from '../../../src/engine/fitModel';
+import { collinearityOfFit, modelCollinearity } from '../../../src/engine/infer/collinearity';
 import { singularValues } from '../../../src/engine/linalg/jacobiSvd';
 import { gaussian, mulberry32 } from '../../support/random';
 
@@ -195,6 +201,94 @@ describe('collinearity: VIF and tolerance', () => {
     const b = collinearity(scaled);
     a.terms.forEach((t, j) => expectRelative(b.terms[j].vif, t.vif, 1e-12));
     expectRelative(b.conditionNumber, a.conditionNumber, 1e-12);
+  });
+});
+
+describe('collinearity of a model: from its packed predictors, and from its fit', () => {
+  const x = correlatedPredictors(17, 60);
+  const y = x.map((row, i) => row[0] - row[2] + Math.sin(i));
+  const w = positiveWeights(18, 60);
+
+  function packedOnly(rows: number[][], weights?: number[], names?: string[]): ModelData {
+    const p = rows[0].length;
+    const values = Float64Array.from(rows.flat());
+    const data = {
+      y,
+      get x(): number[][] {
+        throw new Error('the rows were built');
+      },
+      names,
+      weights,
+    } as ModelData;
+    registerPackedData(data, { y: Float64Array.from(y), predictors: { values, rows: rows.length, p }, weights: weights && Float64Array.from(weights) });
+    return data;
+  }
+
+  it('modelCollinearity reads the packed numbers, never the rows, and equals collinearity of the rows', () => {
+    for (const weights of [undefined, w]) {
+      for (const intercept of [true, false]) {
+        const settings = { intercept };
+        expect(modelCollinearity(packedOnly(x, weights, ['a', 'b', 'c', 'd']), settings)).toEqual(collinearity(x, ['a', 'b', 'c', 'd'], weights, settings));
+      }
+    }
+  });
+
+  it('collinearityOfFit agrees with collinearity of the rows, weighted or not, without an intercept too', () => {
+    // Numbers no other request here examines, so that the fit's own factorization is what is checked.
+    const fitted = correlatedPredictors(19, 60);
+    for (const weights of [undefined, w]) {
+      for (const intercept of [true, false]) {
+        const data = { y, x: fitted, weights };
+        const ofFit = collinearityOfFit(data, solveModel(data, { intercept }));
+        const direct = collinearity(fitted, undefined, weights, { intercept });
+        expect(ofFit.hasIntercept).toBe(intercept);
+        ofFit.terms.forEach((t, j) => {
+          expect(t.name).toBe(direct.terms[j].name);
+          expectRelative(t.vif, direct.terms[j].vif, 1e-12);
+          expect(t.uncenteredVif === undefined).toBe(direct.terms[j].uncenteredVif === undefined);
+        });
+        expectRelative(ofFit.conditionNumber, direct.conditionNumber, 1e-12);
+      }
+    }
+  });
+
+  it('collinearityOfFit: an exact combination and a constant column read as collinearity reads them', () => {
+    const rows = correlatedPredictors(20, 60).map((r) => [r[0], r[2], r[0] - 2 * r[2], 5, r[3]]);
+    const data = { y, x: rows };
+    const ofFit = collinearityOfFit(data, solveModel(data));
+    const direct = collinearity(rows);
+    expect(ofFit.terms.map((t) => t.undefinedBecause)).toEqual(['collinear', 'collinear', 'collinear', 'constant', undefined]);
+    expect(direct.terms.map((t) => t.undefinedBecause)).toEqual(ofFit.terms.map((t) => t.undefinedBecause));
+    expectRelative(ofFit.terms[4].vif, direct.terms[4].vif, 1e-12);
+    expect(ofFit.conditionNumber).toBe(Infinity);
+  });
+
+  it('collinearityOfFit names the terms as this data names them, though the cached fit was first asked for under other names', () => {
+    const named = correlatedPredictors(22, 30);
+    solveModel({ y: y.slice(0, 30), x: named, names: ['p', 'q', 'r', 's'] });
+    const data = { y: y.slice(0, 30), x: named, names: ['a', 'b', 'c', 'd'] };
+    expect(collinearityOfFit(data, solveModel(data)).terms.map((t) => t.name)).toEqual(['a', 'b', 'c', 'd']);
+  });
+
+  it("is examined once for equal numbers: other objects, another response, from a fit or not; names are each caller's own", () => {
+    const shared = correlatedPredictors(23, 50);
+    const first = modelCollinearity({ y: shared.map(() => 0), x: shared });
+    expect(modelCollinearity({ y: shared.map((r) => r[0]), x: shared.map((r) => [...r]) })).toBe(first);
+    const data = { y: shared.map((r, i) => r[1] + Math.cos(i)), x: shared };
+    expect(collinearityOfFit(data, solveModel(data))).toBe(first);
+    const renamed = modelCollinearity({ y: data.y, x: shared, names: ['a', 'b', 'c', 'd'] });
+    expect(renamed.terms.map((t) => t.name)).toEqual(['a', 'b', 'c', 'd']);
+    expect(renamed.terms.map((t) => t.vif)).toEqual(first.terms.map((t) => t.vif));
+    // Other weights or another intercept setting are other questions.
+    expect(modelCollinearity({ y: data.y, x: shared, weights: positiveWeights(24, 50) })).not.toBe(first);
+    expect(modelCollinearity({ y: data.y, x: shared }, { intercept: false }).hasIntercept).toBe(false);
+  });
+
+  it('refuses what collinearity refuses, on every request: names not one per column, a non-finite value', () => {
+    const rows = correlatedPredictors(25, 20);
+    expect(() => modelCollinearity({ y: [], x: rows, names: ['a'] })).toThrow(/names/);
+    const bad = rows.map((r, i) => (i === 3 ? [r[0], Number.NaN, r[2], r[3]] : r));
+    for (let k = 0; k < 2; k++) expect(() => modelCollinearity({ y: [], x: bad })).toThrow(/finite/);
   });
 });
 

@@ -5,12 +5,16 @@
  * - the leverage of a new row equal to a fitting row is that row's hat value hᵢ from the engine's
  *   own residual diagnostics (x₀ = xᵢ in x₀ᵀ(XᵀX)⁻¹x₀; common practice, no source), hᵢ/wᵢ with weights;
  * - hidden extrapolation in a design worked by hand (below): two strongly correlated predictors,
- *   where a point inside both ranges lies far off the data's diagonal (common practice, no source).
+ *   where a point inside both ranges lies far off the data's diagonal (common practice, no source);
+ * - the fitting rows' largest leverage, read from the shared hat diagonal, is exactly the largest
+ *   leverageAt over every fitting row, the definition (common practice, no source).
  */
 import { describe, expect, it } from 'vitest';
 import { predict, residualDiagnostics } from '../../../src/engine';
 import { solveModel } from '../../../src/engine/fitModel';
-import { extrapolationFlags, fittingSpan } from '../../../src/engine/infer/extrapolation';
+import { extrapolationFlags, fittingSpan, leverageAt } from '../../../src/engine/infer/extrapolation';
+import type { ModelData } from '../../../src/engine';
+import { registerPackedData } from '../../../src/engine/cache/packedPredictors';
 import { randomProblem } from '../../support/random';
 
 /**
@@ -93,7 +97,7 @@ describe('extrapolation flags', () => {
     expect(dataRow.hiddenExtrapolation).toBe(false);
 
     const { solution } = solveModel(data);
-    const span = fittingSpan(DIAGONAL_X, solution);
+    const span = fittingSpan(data, solution);
     expect(span.low).toEqual([-2, -2]);
     expect(span.high).toEqual([2, 2]);
     expect(span.largestLeverage).toBeCloseTo(1 / 6 + 0.5, 12);
@@ -113,7 +117,7 @@ describe('extrapolation flags', () => {
 
     // The largest hᵢ/wᵢ, not the largest hᵢ, is what the fitting rows span.
     const { solution } = solveModel(data);
-    const span = fittingSpan(x, solution);
+    const span = fittingSpan(data, solution);
     const largestOnPredictorScale = Math.max(...diagnostics.rows.map((r, i) => r.leverage / weights[i]));
     expect(span.largestLeverage).toBeCloseTo(largestOnPredictorScale, 12);
     const atLargest = diagnostics.rows.findIndex((r, i) => r.leverage / weights[i] === largestOnPredictorScale);
@@ -143,5 +147,62 @@ describe('extrapolation flags', () => {
     expect(extrapolationFlags([0, 20], 0.5, span)).toEqual({ outsideRange: [], hiddenExtrapolation: false });
     expect(extrapolationFlags([0.5, 15], 0.6, span)).toEqual({ outsideRange: [], hiddenExtrapolation: true });
     expect(extrapolationFlags([-0.1, 21], 3, span)).toEqual({ outsideRange: [0, 1], hiddenExtrapolation: false });
+  });
+
+  describe('the largest fitting leverage', () => {
+    function largestByDefinition(data: ModelData): number {
+      const { solution } = solveModel(data);
+      return Math.max(...data.x.map((row) => leverageAt([1, ...row], solution)));
+    }
+
+    it('is the largest leverageAt over every fitting row, to the last bit, with and without weights', () => {
+      const { y, x } = randomProblem(75, 200, 6);
+      for (const weights of [undefined, x.map((_, i) => 0.25 + (i % 7))]) {
+        const data = { y, x, weights };
+        expect(fittingSpan(data, solveModel(data).solution).largestLeverage).toBe(largestByDefinition(data));
+      }
+    });
+
+    const powersOf = (degree: number) => {
+      const t = Array.from({ length: 40 }, (_, i) => i + 1);
+      return { y: t.map((v) => Math.cos(v)), x: t.map((v) => Array.from({ length: degree }, (_, k) => v ** (k + 1))) };
+    };
+
+    it('when two rows nearly tie and the hat diagonal ranks them the other way round from leverageAt', () => {
+      // Powers of 1..40 up to the sixth: rows 1 and 40 lead, 1.3e-13 apart, in opposite orders.
+      const data = powersOf(6);
+      expect(fittingSpan(data, solveModel(data).solution).largestLeverage).toBe(largestByDefinition(data));
+    });
+
+    it('on an ill-conditioned design too, where the two routes part by 1e-5 and rank the leading rows differently', () => {
+      // Powers up to the sixteenth: κ of the unit-scaled design near 1e12, the routes 1.2e-5 apart.
+      const data = powersOf(16);
+      expect(fittingSpan(data, solveModel(data).solution).largestLeverage).toBe(largestByDefinition(data));
+    });
+
+    it('is read from the packed predictors, never the rows', () => {
+      const { y, x } = randomProblem(76, 50, 3);
+      const packedOnly = {
+        y,
+        get x(): number[][] {
+          throw new Error('the rows were built');
+        },
+      } as ModelData;
+      registerPackedData(packedOnly, { y: Float64Array.from(y), predictors: { values: Float64Array.from(x.flat()), rows: 50, p: 3 }, weights: undefined });
+      const [fromPacked] = predict(packedOnly, [x[4]]);
+      expect(fromPacked).toEqual(predict({ y, x }, [x[4]])[0]);
+    });
+
+    it('ties: every one of several fitting rows of equal largest leverage is inside the span', () => {
+      // x = −3 … 3 with x²: rows −3 and 3 share the largest leverage (a symmetric design).
+      const t = [-3, -2, -1, 0, 1, 2, 3];
+      const data = { y: [5.1, 2.2, 0.8, 0.1, 1.1, 3.9, 9.2], x: t.map((v) => [v, v * v]) };
+      const predictions = predict(data, [
+        [-3, 9],
+        [3, 9],
+      ]);
+      expect(predictions[0].leverage).toBeCloseTo(predictions[1].leverage, 14);
+      for (const p of predictions) expect(p.hiddenExtrapolation).toBe(false);
+    });
   });
 });

@@ -3,9 +3,11 @@
  * Beta-Variables, 1958): for m = 5 they are 0.119, 0.310, 0.5, 0.690, 0.881, whose normal
  * quantiles are ±1.18, ±0.497 and 0 (computed here from the positions with the engine's normal
  * quantile, itself checked against the NIST/SEMATECH normal table in test/engine/distributions).
+ * The pairing of points with rows and the order of ties follow the definition: common practice (no source).
  */
 import { describe, expect, it } from 'vitest';
 import { residualDiagnostics } from '../../../src/engine';
+import { normalQuantile } from '../../../src/engine/distributions';
 import { normalScores } from '../../../src/engine/infer/normalScores';
 import { randomProblem } from '../../support/random';
 
@@ -13,8 +15,8 @@ describe('normalScores', () => {
   it('pairs the sorted studentized residuals with Blom quantiles, symmetric about 0', () => {
     const { y, x } = randomProblem(5, 5, 0);
     const points = normalScores(residualDiagnostics({ y, x }));
-    expect(points.map((p) => p.normalQuantile.toFixed(3))).toEqual(['-1.180', '-0.497', '0.000', '0.497', '1.180']);
-    const values = points.map((p) => p.studentized);
+    expect(Array.from(points.normalQuantile, (q) => q.toFixed(3))).toEqual(['-1.180', '-0.497', '0.000', '0.497', '1.180']);
+    const values = Array.from(points.studentized);
     expect([...values].sort((a, b) => a - b)).toEqual(values);
   });
 
@@ -30,7 +32,27 @@ describe('normalScores', () => {
       [6, 0],
     ];
     const points = normalScores(residualDiagnostics({ y, x }));
-    expect(points).toHaveLength(5);
-    expect(points.map((p) => p.rowIndex)).not.toContain(3);
+    expect(points.rowIndex).toHaveLength(5);
+    expect(Array.from(points.rowIndex)).not.toContain(3);
+  });
+
+  it("pairs each point with its own row's residual and Blom's quantile of its rank", () => {
+    const { y, x } = randomProblem(8, 30, 2);
+    const diagnostics = residualDiagnostics({ y, x });
+    const points = normalScores(diagnostics);
+    const m = points.rowIndex.length;
+    expect(m).toBe(30);
+    expect([...points.rowIndex].sort((a, b) => a - b)).toEqual(Array.from({ length: 30 }, (_, i) => i));
+    points.rowIndex.forEach((row, k) => {
+      expect(points.studentized[k]).toBe(diagnostics.rows[row].studentized);
+      expect(points.normalQuantile[k]).toBeCloseTo(normalQuantile((k + 1 - 0.375) / (m + 0.25)), 14);
+    });
+  });
+
+  it('keeps the rows of equal residuals in row order', () => {
+    // Intercept only: equal y give equal studentized residuals.
+    const y = [1, 2, 2, 1, 3, 3, 0];
+    const points = normalScores(residualDiagnostics({ y, x: y.map(() => []) }));
+    expect(Array.from(points.rowIndex)).toEqual([6, 0, 3, 1, 2, 4, 5]);
   });
 });

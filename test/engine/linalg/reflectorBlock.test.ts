@@ -8,6 +8,7 @@
 import { describe, expect, it } from 'vitest';
 import { type ColumnMajorMatrix, columnView } from '../../../src/engine/linalg/columnMajor';
 import { applyQTranspose, factorInPlace } from '../../../src/engine/linalg/householderQr';
+import { ReflectorBlock } from '../../../src/engine/linalg/reflectorBlock';
 import { gaussian, mulberry32 } from '../../support/random';
 
 const n = 60;
@@ -59,5 +60,47 @@ describe('factorInPlace with blocks of reflectors', () => {
       for (let i = 0; i < k; i++) expect(v[i]).toBe(0);
       expect(v[k]).toBe(1);
     });
+  });
+});
+
+describe('the reflector block shared by every factorization', () => {
+  it('gives each of two factorizations in turn what it gives alone, whatever the other’s size', () => {
+    const small = design();
+    const alone = factorInPlace({ ...small, data: Float64Array.from(small.data) }, 1e-12, 1);
+    // A taller matrix factored in between must leave nothing behind for the next one.
+    const normal = gaussian(mulberry32(5));
+    const tall = 3 * n;
+    const other = Float64Array.from({ length: tall * 6 }, () => normal() / Math.sqrt(tall));
+    factorInPlace({ rows: tall, cols: 6, data: other }, 1e-12, 1);
+    const again = factorInPlace({ ...small, data: Float64Array.from(small.data) }, 1e-12, 1);
+    expect(again.accepted).toEqual(alone.accepted);
+    expect(Array.from(again.r)).toEqual(Array.from(alone.r));
+    expect(Array.from(again.taus)).toEqual(Array.from(alone.taus));
+  });
+});
+
+describe('ReflectorBlock', () => {
+  it('holds no reflector after it is attached to new storage or detached', () => {
+    const block = new ReflectorBlock();
+    const data = Float64Array.from({ length: 8 }, (_, i) => (i === 0 ? 1 : 0.25));
+    block.attach(data, 4).add(0, 0, 1, 1);
+    expect(block.size).toBe(1);
+    block.attach(data, 4);
+    expect(block.size).toBe(0);
+    block.add(0, 0, 1, 1);
+    block.detach();
+    expect(block.size).toBe(0);
+    // With nothing held, applying the block leaves the columns as they are.
+    const before = Array.from(data);
+    block.attach(data, 4).applyTo(1, 1);
+    expect(Array.from(data)).toEqual(before);
+  });
+
+  it('refuses to prepare a column while a full block is pending, which it could not take together', () => {
+    const rows = 8;
+    const data = Float64Array.from({ length: rows * 5 }, (_, i) => ((i * 7) % 5) / 5);
+    const block = new ReflectorBlock().attach(data, rows);
+    for (let a = 0; a < 4; a++) block.add(a * rows, a, 1, 1);
+    expect(() => block.prepareColumn(4, 4)).toThrow('a full block is applied');
   });
 });

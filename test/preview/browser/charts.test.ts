@@ -10,6 +10,7 @@
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { type BrowserSession, chromiumAvailable, openPage, screenshot } from '../../support/browser';
 import { goTo } from '../../support/previewPage';
+import { chartMarkers } from '../../support/chartMarkers';
 
 const available = chromiumAvailable();
 if (!available) console.warn('Browser tests skipped: /usr/bin/chromium is absent (apt-get install -y chromium).');
@@ -19,11 +20,9 @@ const TITLE = 'Extraction yield against steep time';
 describe.skipIf(!available)('charts and formatting in the preview workbook', () => {
   let session: BrowserSession;
   const origin = inject('previewOrigin');
-  const circles = () => session.page.locator('[data-chart="Chart 1"] .chart-series circle');
-  const centre = async (index: number) => {
-    const circle = circles().nth(index);
-    return { cx: Number(await circle.getAttribute('cx')), cy: Number(await circle.getAttribute('cy')) };
-  };
+  const markersOf = (chartName: string) => chartMarkers(session.page, chartName);
+  const markers = () => markersOf('Chart 1');
+  const centre = async (index: number) => (await markers())[index];
 
   beforeAll(async () => {
     session = await openPage(`${origin}/preview.html`);
@@ -64,7 +63,7 @@ describe.skipIf(!available)('charts and formatting in the preview workbook', () 
     expect(name).toBe('Chart 1: 1 series');
     const figure = session.page.getByRole('img', { name: TITLE });
     await figure.waitFor();
-    expect(await circles().count()).toBe(60);
+    expect(await markers()).toHaveLength(60);
     expect(await session.page.locator('[data-chart="Chart 1"] .chart-title').textContent()).toBe(TITLE);
     // The value axis runs over its fixed bounds, away from zero, so no zero line is drawn.
     expect(await session.page.locator('[data-chart="Chart 1"] [data-axis="y"] text').allTextContents()).toEqual(['10', '20', '30', '40']);
@@ -86,7 +85,7 @@ describe.skipIf(!available)('charts and formatting in the preview workbook', () 
     const after = await centre(0);
     // Steep time is unchanged, and 30 % is now the highest yield, so the point is the topmost.
     expect(after.cx).toBe(before.cx);
-    const heights = await circles().evaluateAll((nodes) => nodes.map((n) => Number(n.getAttribute('cy'))));
+    const heights = (await markers()).map((point) => point.cy);
     expect(Math.min(...heights)).toBe(after.cy);
   });
 
@@ -122,10 +121,10 @@ describe.skipIf(!available)('charts and formatting in the preview workbook', () 
     // The guide cells are formulas over PLUMB results, so the lines appear once those have calculated.
     for (const name of ['ObservedVsFitted', 'NormalQQ', 'CooksDistance']) {
       await expect.poll(() => chart(name).locator('.chart-line polyline').count()).toBe(1);
-      expect(await chart(name).locator('.chart-line circle').count()).toBe(0);
+      expect(await chart(name).locator('.chart-line .chart-markers').count()).toBe(0);
     }
     expect(await chart('ResidualsVsFitted').locator('.chart-line').count()).toBe(0);
-    expect(await chart('ObservedVsFitted').locator('.chart-series circle').count()).toBe(60);
+    expect(await markersOf('ObservedVsFitted')).toHaveLength(60);
     // y = x rises from its lower left end to its upper right one (SVG's y runs downwards).
     const ends = (await chart('ObservedVsFitted').locator('.chart-line polyline').getAttribute('points'))?.split(' ').map((p) => p.split(',').map(Number));
     expect(ends).toHaveLength(2);

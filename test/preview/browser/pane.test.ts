@@ -10,6 +10,7 @@ import { BATCH_HEADERS, generateBatchLog } from '../../../src/preview/demo/batch
 import { termSentence } from '../../../src/taskpane/model/sentences';
 import { goTo as goToAddress, sheetNames as listSheets } from '../../support/previewPage';
 import { type BrowserSession, chromiumAvailable, openPage, screenshot } from '../../support/browser';
+import { chartMarkerCount } from '../../support/chartMarkers';
 
 const available = chromiumAvailable();
 
@@ -97,9 +98,9 @@ describe.skipIf(!available)('guided pane in the preview workbook', () => {
     const fit = engineFit(generateBatchLog());
     const termsRow = firstReport.values.findIndex((r) => r[0] === 'Term');
     fit.terms.forEach((t, i) => expect(firstReport.values[termsRow + 1 + i][1]).toBe(t.estimate));
-    expect(await page().locator('[data-chart="ObservedVsFitted"] .chart-series circle').count()).toBe(60);
+    expect(await chartMarkerCount(page(), 'ObservedVsFitted')).toBe(60);
     for (const chart of ['ResidualsVsFitted', 'NormalQQ', 'CooksDistance']) {
-      expect(await page().locator(`[data-chart="${chart}"] .chart-series circle`).count(), chart).toBe(60);
+      expect(await chartMarkerCount(page(), chart), chart).toBe(60);
     }
     expect(firstReport.values.flat()).toContain('Durbin–Watson');
     await screenshot(page(), 'report');
@@ -171,7 +172,7 @@ describe.skipIf(!available)('guided pane in the preview workbook', () => {
         await context.sync();
       }),
     );
-    await expect.poll(() => page().locator('[data-chart="ObservedVsFitted"] .chart-series circle').count()).toBe(59);
-    expect(await page().locator('[data-chart="CooksDistance"] .chart-series circle').count()).toBe(59);
+    await expect.poll(() => chartMarkerCount(page(), 'ObservedVsFitted')).toBe(59);
+    expect(await chartMarkerCount(page(), 'CooksDistance')).toBe(59);
   });
 });

@@ -76,6 +76,48 @@ describe('preview workbook', () => {
     expect(wb.valueAt(at('Data', 1, 3))).toBe(12);
   });
 
+  it('reads a range row by row as valueAt reads each cell: inputs, formula results, spilled values and blanks', () => {
+    const wb = setup();
+    wb.setInputs('Data', 0, 3, [['=PLUMB.SUMCOL(A1:B3)']]);
+    const range = { sheet: 'data', top: 0, left: 1, bottom: 3, right: 4 };
+    const cellByCell = [0, 1, 2, 3].map((row) => [1, 2, 3, 4].map((column) => wb.valueAt(at('Data', row, column))));
+    expect(wb.valuesIn(range)).toEqual(cellByCell);
+    expect(cellByCell).toEqual([
+      [2, null, 9, null],
+      [4, null, 12, null],
+      [6, null, null, null],
+      [null, null, null, null],
+    ]);
+  });
+
+  it('counts a values revision on entries and recalculated results, not on selection or formats', () => {
+    const wb = setup();
+    const start = wb.valuesRevision();
+    wb.select({ sheet: 'Data', top: 2, left: 2, bottom: 2, right: 2 });
+    wb.setNumberFormats('Data', 0, 0, [['0.00']]);
+    expect(wb.valuesRevision()).toBe(start);
+    wb.setInputs('Data', 0, 3, [['=PLUMB.SUMCOL(A1:B3)']]);
+    const afterEntry = wb.valuesRevision();
+    expect(afterEntry).toBeGreaterThan(start);
+    wb.setInputs('Data', 0, 0, [[10]]);
+    expect(wb.valuesRevision()).toBeGreaterThan(afterEntry);
+  });
+
+  it('updates a spill that keeps its area in place, and blocks it once a value is typed into it', () => {
+    const wb = setup();
+    wb.setInputs('Data', 0, 3, [['=PLUMB.SCALE(A1:B3, 10)']]);
+    wb.setInputs('Data', 2, 1, [[7]]);
+    expect(wb.valueAt(at('Data', 2, 4))).toBe(70);
+    expect(wb.valueAt(at('Data', 1, 3))).toBe(30);
+    // Excel: a spill whose range is no longer empty shows #SPILL! and none of its values (common practice (no source)).
+    wb.setInputs('Data', 2, 4, [['typed']]);
+    expect(wb.valueAt(at('Data', 0, 3))).toMatchObject({ error: '#SPILL!' });
+    expect(wb.valueAt(at('Data', 1, 3))).toBeNull();
+    expect(wb.valueAt(at('Data', 2, 4))).toBe('typed');
+    wb.setInputs('Data', 2, 4, [[null]]);
+    expect(wb.valueAt(at('Data', 2, 4))).toBe(70);
+  });
+
   it('shows a thrown error with its message, an unknown function as #NAME?, a bad sheet as #REF!', () => {
     const wb = setup();
     wb.setInputs('Data', 0, 3, [['=PLUMB.FAIL()'], ['=PLUMB.NOPE(A1)'], ['=PLUMB.SUMCOL(Nowhere!A1:A2)'], ['=PLUMB.SUMCOL(A1:']]);
