@@ -1,6 +1,5 @@
 import type { ModelFrame, ResidualDiagnostics, UndefinedReason } from '../engine';
-import { FLAG_TEXT } from '../presentation';
-import { flagsAt, type ResidualFlag, screenCutoffs } from '../presentation/thresholds';
+import { FLAG_TEXTS, flagBitsAt, screenCutoffs } from '../presentation/thresholds';
 import { finiteOrBlank, type Grid } from './gridCell';
 
 export const RESIDUALS_HEADER = ['Row', 'Observed', 'Fitted', 'Residual', 'Standardized', 'Studentized', 'Leverage', "Cook's distance", 'DFFITS', 'Flag'];
@@ -21,15 +20,20 @@ const REASON_TEXT: Record<UndefinedReason, string> = {
  * the data (which would turn a blank into 0).
  */
 export function residualsGrid(diagnostics: ResidualDiagnostics, frame: ModelFrame): Grid {
-  const { fitted, residual, standardized, studentized, leverage, cooksDistance, dffits, undefinedBecause } = diagnostics;
+  const { n, fitted, residual, standardized, studentized, leverage, cooksDistance, dffits, undefinedBecause } = diagnostics;
+  const { usedRows } = frame;
+  const observed = frame.data.y;
   const cutoffs = screenCutoffs(diagnostics);
-  const grid: Grid = new Array<Grid[number]>(diagnostics.n + 1);
+  const grid: Grid = new Array<Grid[number]>(n + 1);
   grid[0] = [...RESIDUALS_HEADER];
-  for (let i = 0; i < diagnostics.n; i++) {
-    const flags = flagsAt(cutoffs, leverage[i], studentized[i], cooksDistance[i], undefinedBecause[i]);
+  // Each row is one literal and its flag text one of the shared strings of FLAG_TEXTS, so a row
+  // costs no object beyond itself and its numbers: a table can have 50,000 of them.
+  for (let i = 0; i < n; i++) {
+    const reason = undefinedBecause[i];
+    const flags = FLAG_TEXTS[flagBitsAt(cutoffs, leverage[i], studentized[i], cooksDistance[i], reason)];
     grid[i + 1] = [
-      frame.usedRows[i],
-      frame.data.y[i],
+      usedRows[i],
+      observed[i],
       finiteOrBlank(fitted[i]),
       finiteOrBlank(residual[i]),
       finiteOrBlank(standardized[i]),
@@ -37,16 +41,13 @@ export function residualsGrid(diagnostics: ResidualDiagnostics, frame: ModelFram
       finiteOrBlank(leverage[i]),
       finiteOrBlank(cooksDistance[i]),
       finiteOrBlank(dffits[i]),
-      flagText(flags, undefinedBecause[i]),
+      reason === undefined ? flags : withReason(flags, reason),
     ];
   }
   return grid;
 }
 
-/** The screens' flags (src/presentation/thresholds.ts) and why a value is blank. */
-function flagText(flags: readonly ResidualFlag[], reason: UndefinedReason | undefined): string {
-  if (flags.length === 0) return reason === undefined ? '' : REASON_TEXT[reason];
-  const parts = flags.map((f) => FLAG_TEXT[f]);
-  if (reason !== undefined) parts.push(REASON_TEXT[reason]);
-  return parts.join(', ');
+/** The screens' flags (src/presentation/thresholds.ts) and then why a value is blank. */
+function withReason(flags: string, reason: UndefinedReason): string {
+  return flags === '' ? REASON_TEXT[reason] : `${flags}, ${REASON_TEXT[reason]}`;
 }

@@ -2,7 +2,6 @@ import { predictorValues } from './cache/packedPredictors';
 import { EngineError } from './errors';
 import { frobeniusCondition, type LeastSquaresSolution, needsExtendedPrecision } from './fit/leastSquares';
 import { type SolvedModel, solveModel } from './fitModel';
-import { applyQTranspose } from './linalg/householderQr';
 import { fCriticalValue, fUpperTail } from './infer/referenceDistribution';
 import { resolveSettings } from './settings';
 import type { FitSettings, ModelData, NestedComparison, NestedData, ResolvedSettings } from './types';
@@ -99,14 +98,11 @@ interface BaseModel {
  * no fit and is refused by that fit too.
  */
 function baseFromFullFactor(solution: LeastSquaresSolution, baseColumns: number): BaseModel | undefined {
-  const { qr, design, yScale } = solution;
+  const { qr, design, acceptedQty: qty } = solution;
   const leading = baseColumns + (design.hasIntercept ? 1 : 0);
   const rank = qr.accepted.length;
   if (leading === 0) return undefined;
   if (needsExtendedPrecision(frobeniusCondition(qr.r, solution.rInverse, rank), Math.sqrt(solution.scaledRss))) return undefined;
-  const qty = new Float64Array(design.y.length);
-  for (let i = 0; i < qty.length; i++) qty[i] = design.y[i] / yScale;
-  applyQTranspose(qr, qty);
   let baseRank = 0;
   let extraScaled = 0;
   qr.accepted.forEach((col, a) => {

@@ -10,6 +10,7 @@ export { EngineError, type EngineErrorCode } from './errors';
 export { judgeNoiseSd, type NoiseSdVerdict } from './noiseSd';
 export type { CovarianceKind, FitSettings, ModelData, ModelFit, NestedComparison, NestedData, Prediction, ResolvedSettings, TermEstimate } from './types';
 export { modelCache } from './fitModel';
+export { resetCaches } from './resetCaches';
 export { COVARIANCE_KINDS } from './settings';
 export type { CacheStats } from './cache/modelCache';
 export { buildModelFrame, type FrameInput, type FrameOrigins, type ModelFrame, type SkippedRow } from './design/modelFrame';

@@ -81,22 +81,40 @@ export function screenCutoffs({ n, p }: ModelSize): ScreenCutoffs {
 
 /** A row's flags, in the Flag column's order; a row the other rows fit exactly (t unbounded) is an outlier. */
 export function residualFlags(row: RowDiagnostics, size: ModelSize): ResidualFlag[] {
-  return flagsAt(screenCutoffs(size), row.leverage, row.studentized, row.cooksDistance, row.undefinedBecause);
+  return flagsOf(flagBitsAt(screenCutoffs(size), row.leverage, row.studentized, row.cooksDistance, row.undefinedBecause));
 }
 
-/** residualFlags from a row's values, with the cut-offs worked out once for a table of many rows. */
-export function flagsAt(
+/** The flags in the Flag column's order; flag k is bit k of flagBitsAt. */
+const FLAG_ORDER: readonly ResidualFlag[] = ['high-leverage', 'outlier', 'influential'];
+
+/**
+ * residualFlags as bits (bit k for FLAG_ORDER[k]), from a row's values and the cut-offs worked out
+ * once: a table of many rows then builds no array per row.
+ */
+export function flagBitsAt(
   cutoffs: ScreenCutoffs,
   leverage: number,
   studentized: number,
   cooksDistance: number,
   undefinedBecause: RowDiagnostics['undefinedBecause'],
-): ResidualFlag[] {
-  const flags: ResidualFlag[] = [];
-  if (leverage > cutoffs.leverage) flags.push('high-leverage');
-  if (Math.abs(studentized) > cutoffs.studentized || undefinedBecause === 'rest-fit-exactly') flags.push('outlier');
-  if (cooksDistance > cutoffs.cooksDistance) flags.push('influential');
-  return flags;
+): number {
+  let bits = 0;
+  if (leverage > cutoffs.leverage) bits |= 1;
+  if (Math.abs(studentized) > cutoffs.studentized || undefinedBecause === 'rest-fit-exactly') bits |= 2;
+  if (cooksDistance > cutoffs.cooksDistance) bits |= 4;
+  return bits;
+}
+
+/** Every combination of flags worded as the Flag column writes it, indexed by flagBitsAt's bits: "" for none. */
+export const FLAG_TEXTS: readonly string[] = Array.from({ length: 1 << FLAG_ORDER.length }, (_, bits) =>
+  flagsOf(bits)
+    .map((flag) => FLAG_TEXT[flag])
+    .join(', '),
+);
+
+/** The flags whose bits are set, in the Flag column's order. */
+function flagsOf(bits: number): ResidualFlag[] {
+  return FLAG_ORDER.filter((_, k) => (bits & (1 << k)) !== 0);
 }
 
 /** How many rows have leverage above 2p/n. */

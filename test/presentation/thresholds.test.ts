@@ -8,6 +8,7 @@
 import { describe, expect, it } from 'vitest';
 import { assumptionChecks, residualDiagnostics } from '../../src/engine';
 import { FLAG_TEXT, highLeverageCount, residualFlags, SCREENS_TEXT, screenCutoffs, unusualRows } from '../../src/presentation';
+import { FLAG_TEXTS, flagBitsAt, type ResidualFlag } from '../../src/presentation/thresholds';
 import { randomProblem } from '../support/random';
 
 const { y, x } = randomProblem(12, 40, 2);
@@ -46,5 +47,26 @@ describe('residual screens', () => {
   it('words each rule once, from the same numbers', () => {
     expect(FLAG_TEXT).toEqual({ 'high-leverage': 'high leverage (over 2p/n)', outlier: 'large residual (|t| over 3)', influential: "Cook's over 4/n" });
     expect(SCREENS_TEXT).toBe("high leverage: h > 2p/n; large residual: |studentized| > 3; Cook's over 4/n");
+  });
+
+  it('gives each row its flags as bits, and the Flag text of every combination', () => {
+    const d = residualDiagnostics(data);
+    const cutoffs = screenCutoffs(d);
+    const order: ResidualFlag[] = ['high-leverage', 'outlier', 'influential'];
+    for (const row of d.rows) {
+      const bits = flagBitsAt(cutoffs, row.leverage, row.studentized, row.cooksDistance, row.undefinedBecause);
+      expect(order.filter((_, k) => (bits & (1 << k)) !== 0)).toEqual(residualFlags(row, d));
+    }
+    expect(flagBitsAt(cutoffs, 0, Number.NaN, Number.NaN, 'rest-fit-exactly')).toBe(2);
+    expect(FLAG_TEXTS).toEqual([
+      '',
+      'high leverage (over 2p/n)',
+      'large residual (|t| over 3)',
+      'high leverage (over 2p/n), large residual (|t| over 3)',
+      "Cook's over 4/n",
+      "high leverage (over 2p/n), Cook's over 4/n",
+      "large residual (|t| over 3), Cook's over 4/n",
+      "high leverage (over 2p/n), large residual (|t| over 3), Cook's over 4/n",
+    ]);
   });
 });

@@ -1,6 +1,6 @@
 /**
  * Vitest global setup: builds the add-in once into a temporary folder, exactly as `npm run build`
- * does, and serves it on a free localhost port for the browser tests.
+ * does, and serves it on a free localhost port for the browser tests of every project.
  */
 import { mkdtempSync, rmSync } from 'node:fs';
 import { createRequire } from 'node:module';
@@ -33,14 +33,41 @@ function build(outputPath: string): Promise<void> {
   });
 }
 
-export default async function setup(project: TestProject): Promise<() => Promise<void>> {
+interface Served {
+  buildDir: string;
+  origin: string;
+  close: () => Promise<void>;
+}
+
+/** One build and server for every project of the run (vitest calls a project's global setup once per project). */
+let served: Promise<Served> | undefined;
+let users = 0;
+
+async function buildAndServe(): Promise<Served> {
   const buildDir = mkdtempSync(join(tmpdir(), 'plumbline-build-'));
   await build(buildDir);
   const running = await startServer(buildDir, 0, false);
-  project.provide('previewOrigin', running.origin);
+  return {
+    buildDir,
+    origin: running.origin,
+    close: async () => {
+      await running.close();
+      rmSync(buildDir, { recursive: true, force: true });
+    },
+  };
+}
+
+export default async function setup(project: TestProject): Promise<() => Promise<void>> {
+  served ??= buildAndServe();
+  users++;
+  const { buildDir, origin } = await served;
+  project.provide('previewOrigin', origin);
   project.provide('buildDir', buildDir);
   return async () => {
-    await running.close();
-    rmSync(buildDir, { recursive: true, force: true });
+    users--;
+    if (users > 0 || served === undefined) return;
+    const last = served;
+    served = undefined;
+    await (await last).close();
   };
 }

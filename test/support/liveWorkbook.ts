@@ -2,8 +2,8 @@
  * The live-size report of issue #15 as a preview workbook holds it: the bench's 12,500 × 20 data
  * (scripts/bench/liveSheet.ts, the same generated numbers) on a Data sheet, the rows PREDICT asks
  * about on a New sheet, and the eight PLUMB formulas of a live report on a Report sheet, each
- * anchored in its own band of columns so that no spill blocks another. Used in Node (the preview
- * overhead script) and sent to the page by the browser long-task test.
+ * anchored in its own band of columns so that no spill blocks another. Sent to the page by the
+ * browser long-task test.
  */
 import { columnLetters } from '../../src/addressing/a1';
 import { generateColumns } from '../../scripts/benchData';

@@ -38,6 +38,11 @@ export interface LeastSquaresSolution {
   coefficients: Float64Array;
   /** R⁻¹ of the scaled, accepted columns (row-major rank × rank). */
   rInverse: Float64Array;
+  /**
+   * (Qᵀy)/yScale over the accepted columns, from the double factorization: the base model of a
+   * nested test over leading columns reads its extra sum of squares off it (compareNested.ts).
+   */
+  acceptedQty: Float64Array;
   /** RSS / yScale². */
   scaledRss: number;
   perfectFit: boolean;
@@ -116,7 +121,8 @@ export function solveLeastSquares(design: WeightedDesign, precision: Precision =
   const qr = factorInPlace(scaled, aliasTolerance(n), 1);
   const rank = qr.accepted.length;
 
-  const solution = qty.slice(0, rank);
+  const acceptedQty = qty.slice(0, rank);
+  const solution = acceptedQty.slice();
   solveUpper(qr.r, rank, solution);
   let accepted: Float64Array = Float64Array.from(qr.accepted, (col, a) => (solution[a] * yScale) / columnScales[col]);
 
@@ -179,6 +185,7 @@ export function solveLeastSquares(design: WeightedDesign, precision: Precision =
     yScale,
     coefficients,
     rInverse,
+    acceptedQty,
     scaledRss,
     perfectFit,
     residuals,

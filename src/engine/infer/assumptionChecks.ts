@@ -104,8 +104,7 @@ export function assumptionChecks(data: ModelData, settings?: FitSettings, rowNum
   const solved = solveModel(data, settings);
   const { fit, solution } = solved;
   const alpha = 1 - fit.settings.level;
-  const numbers = new Int32Array(fit.n);
-  for (let i = 0; i < fit.n; i++) numbers[i] = rowNumbers?.[i] ?? i + 1;
+  const numbers = userRowNumbers(fit.n, rowNumbers);
   const rowNumber = (index: number) => (index < 0 ? -1 : numbers[index]);
   const exactFit = fit.perfectFit;
 
@@ -119,21 +118,8 @@ export function assumptionChecks(data: ModelData, settings?: FitSettings, rowNum
   const { leverage, cooksDistance } = diagnostics;
   const studentized = testedStudentized(diagnostics);
   const outliers = outlierTest(studentized, fit.n, fit.rank);
-  // P(|T| > t) ≥ P(|Z| > t): a row inside the normal's Bonferroni bound cannot be an outlier, so
-  // only the rows past it pay for a t tail.
-  const candidateBound = -normalQuantile(alpha / (2 * Math.max(1, outliers.rowsTested)));
-  const bonferroni = new Float64Array(fit.n).fill(Number.NaN);
-  let largestCooksRow = -1;
-  let largestCooksDistance = Number.NaN;
-  for (let i = 0; i < fit.n; i++) {
-    const t = studentized[i];
-    if (Math.abs(t) > candidateBound) bonferroni[i] = bonferroniP(studentTTwoSidedP(t, fit.n - fit.rank - 1), outliers.rowsTested);
-    const d = cooksDistance[i];
-    if (Number.isFinite(d) && (largestCooksRow < 0 || d > largestCooksDistance)) {
-      largestCooksRow = i;
-      largestCooksDistance = d;
-    }
-  }
+  const bonferroni = bonferroniOfRows(studentized, alpha, fit.n - fit.rank - 1, outliers.rowsTested);
+  const { row: largestCooksRow, value: largestCooksDistance } = largestFinite(cooksDistance);
 
   const terms = predictorValues(data).p > 0 ? collinearityOfFit(data, solved).terms : [];
   // Centered VIFs only: a term standing in for the intercept has none, and its standard error is not inflated.
@@ -192,6 +178,43 @@ export function checkedRow(checks: Omit<AssumptionChecks, 'rows'>, index: number
     cooksDistance: checks.cooksDistance[index],
     outlier: bonferroni < checks.alpha,
   };
+}
+
+/** How the user knows each of `n` rows: `rowNumbers[i]` when given, else its place (1-based). */
+function userRowNumbers(n: number, rowNumbers: readonly number[] | undefined): Int32Array {
+  const numbers = new Int32Array(n);
+  for (let i = 0; i < n; i++) numbers[i] = rowNumbers?.[i] ?? i + 1;
+  return numbers;
+}
+
+/**
+ * Each row's Bonferroni p (NaN where not computed) over `rowsTested` rows, t on `df` degrees of
+ * freedom. P(|T| > t) ≥ P(|Z| > t): a row inside the normal's Bonferroni bound at α cannot be an
+ * outlier, so only the rows past it pay for a t tail. A loop of its own, so that V8 optimizes it
+ * apart from the long function around it.
+ */
+function bonferroniOfRows(studentized: Float64Array, alpha: number, df: number, rowsTested: number): Float64Array {
+  const candidateBound = -normalQuantile(alpha / (2 * Math.max(1, rowsTested)));
+  const bonferroni = new Float64Array(studentized.length).fill(Number.NaN);
+  for (let i = 0; i < studentized.length; i++) {
+    const t = studentized[i];
+    if (Math.abs(t) > candidateBound) bonferroni[i] = bonferroniP(studentTTwoSidedP(t, df), rowsTested);
+  }
+  return bonferroni;
+}
+
+/** The largest finite value and its row (the first of equals), or NaN and −1 when none is finite. */
+function largestFinite(values: Float64Array): { row: number; value: number } {
+  let row = -1;
+  let value = Number.NaN;
+  for (let i = 0; i < values.length; i++) {
+    const d = values[i];
+    if (Number.isFinite(d) && (row < 0 || d > value)) {
+      row = i;
+      value = d;
+    }
+  }
+  return { row, value };
 }
 
 /** The studentized residuals the outlier test reads: ±Infinity for a row the other rows fit exactly. */

@@ -3,8 +3,8 @@ import { chiSquareUpperTail } from '../distributions/chiSquare';
 import { buildDesign } from '../fit/design';
 import { frobeniusCondition, type LeastSquaresSolution, needsExtendedPrecision, solveLeastSquares } from '../fit/leastSquares';
 import { stableNorm } from '../linalg/columnMajor';
-import { applyQTranspose } from '../linalg/householderQr';
 import type { ModelData } from '../types';
+import { designBasis } from './designBasis';
 import { equalVarianceResiduals } from './equalVarianceResiduals';
 
 /**
@@ -20,8 +20,9 @@ import { equalVarianceResiduals } from './equalVarianceResiduals';
  * whether what the weights left over still changes with the predictors. `data` is the model's
  * data, whose predictors the auxiliary regression reads.
  *
- * For an unweighted model with an intercept the auxiliary design is the model's own, so its QR is
- * reused: the auxiliary RSS is the part of Qᵀu² below the rank, O(n·p) instead of a second fit. The
+ * For an unweighted model with an intercept the auxiliary design is the model's own, so its
+ * orthonormal basis is reused: the auxiliary RSS is that of u² projected off it, O(n·p) instead
+ * of a second fit. The
  * same precision check as the fit's (needsExtendedPrecision) decides whether double suffices; where
  * it does not, the auxiliary regression is fitted on its own, refinement included.
  */
@@ -61,12 +62,15 @@ export function breuschPagan(solution: LeastSquaresSolution, data: ModelData): B
   if (df === 0) return result('no-predictors', 0);
   if (n <= rank) return result('too-few-rows', df);
 
-  const mean = squares.reduce((s, v) => s + v, 0) / n;
+  let sum = 0;
+  for (let i = 0; i < n; i++) sum += squares[i];
+  const mean = sum / n;
   let total = 0;
   let correction = 0;
-  for (const v of squares) {
-    total += (v - mean) ** 2;
-    correction += v - mean;
+  for (let i = 0; i < n; i++) {
+    const d = squares[i] - mean;
+    total += d * d;
+    correction += d;
   }
   total -= (correction * correction) / n;
   if (!(Math.sqrt(total / n) > EQUAL_SQUARES_TOLERANCE * mean)) return result('equal-squares', df);
@@ -77,24 +81,56 @@ export function breuschPagan(solution: LeastSquaresSolution, data: ModelData): B
 /** RSS and rank of u² regressed on an intercept and the predictors. */
 function auxiliaryFit(solution: LeastSquaresSolution, squares: Float64Array, data: ModelData): { rss: number; rank: number } {
   if (solution.design.rootWeights === undefined && solution.design.hasIntercept) {
-    const reused = rssOnModelQr(solution, squares);
+    const reused = rssOnModelBasis(solution, squares);
     if (reused !== undefined) return reused;
   }
   const auxiliary = solveLeastSquares(buildDesign(Array.from(squares), predictorValues(data), true, undefined, undefined));
   return { rss: auxiliary.scaledRss * auxiliary.yScale ** 2, rank: auxiliary.qr.accepted.length };
 }
 
-/** The auxiliary RSS from the model's QR, in units of ‖u²‖ as the fit would take it; undefined when double may fall short. */
-function rssOnModelQr(solution: LeastSquaresSolution, squares: Float64Array): { rss: number; rank: number } | undefined {
+/**
+ * The auxiliary RSS from the model's basis Q₁ (designBasis.ts, which the leverages of the same
+ * checks form anyway), in units of ‖u²‖ as the fit would take it: ‖b − Q₁Q₁ᵀb‖² for b = u²/‖u²‖,
+ * two sweeps of n·rank instead of one per reflector and side. The residual is formed, not
+ * ‖b‖² − ‖Q₁ᵀb‖², so nothing cancels; undefined when double may fall short.
+ */
+function rssOnModelBasis(solution: LeastSquaresSolution, squares: Float64Array): { rss: number; rank: number } | undefined {
   const { qr, rInverse } = solution;
   const rank = qr.accepted.length;
   const scale = stableNorm(squares);
   if (!(scale > 0)) return undefined;
-  const qtu = new Float64Array(squares.length);
-  for (let i = 0; i < qtu.length; i++) qtu[i] = squares[i] / scale;
-  applyQTranspose(qr, qtu);
-  let scaledRss = 0;
-  for (let i = rank; i < qtu.length; i++) scaledRss += qtu[i] * qtu[i];
+  const b = new Float64Array(squares.length);
+  for (let i = 0; i < b.length; i++) b[i] = squares[i] / scale;
+  const scaledRss = projectionResidualSquares(designBasis(solution), qr.rows, rank, b);
   if (needsExtendedPrecision(frobeniusCondition(qr.r, rInverse, rank), Math.sqrt(scaledRss))) return undefined;
   return { rss: scaledRss * scale * scale, rank };
+}
+
+/** ‖b − Q₁Q₁ᵀb‖² for the n × rank column-major q, b overwritten by the residual; columns two per sweep. */
+function projectionResidualSquares(q: Float64Array, n: number, rank: number, b: Float64Array): number {
+  const c = new Float64Array(rank);
+  for (let k = 0; k < rank; k += 2) {
+    const first = k * n;
+    const second = Math.min(k + 1, rank - 1) * n;
+    let s = 0;
+    let t = 0;
+    for (let i = 0; i < n; i++) {
+      const v = b[i];
+      s += q[first + i] * v;
+      t += q[second + i] * v;
+    }
+    c[k] = s;
+    if (k + 1 < rank) c[k + 1] = t;
+  }
+  for (let k = 0; k < rank; k += 2) {
+    const first = k * n;
+    const second = Math.min(k + 1, rank - 1) * n;
+    const s = c[k];
+    // Past the last column the second is the first again, with nothing more to take off.
+    const t = k + 1 < rank ? c[k + 1] : 0;
+    for (let i = 0; i < n; i++) b[i] -= q[first + i] * s + q[second + i] * t;
+  }
+  let squares = 0;
+  for (let i = 0; i < n; i++) squares += b[i] * b[i];
+  return squares;
 }

@@ -96,11 +96,11 @@ function collinearityOf(x: Predictors, names: string[] | undefined, weights: num
   const scaled = scaleToUnitNorm(design.matrix);
   const predictorNames = design.names.slice(1);
   const constants = constantColumns(x, predictorNames.length);
-  const centered = termVifs(scaled, design.rootWeights, predictorNames, constants, true);
+  const centered = termVifs({ matrix: scaled }, design.rootWeights, predictorNames, constants, true);
   if (intercept) return { ...centered, hasIntercept: true };
   if (predictorNames.length === 0) throw new EngineError('shape', 'The model has no terms: give at least one predictor or keep the intercept.');
   const withoutIntercept: ColumnMajorMatrix = { rows, cols: scaled.cols - 1, data: scaled.data.subarray(rows) };
-  const own = termVifs(withoutIntercept, design.rootWeights, predictorNames, constants, false);
+  const own = termVifs({ matrix: withoutIntercept }, design.rootWeights, predictorNames, constants, false);
   const terms = own.terms.map((u, j): TermCollinearity => {
     const c = centered.terms[j];
     if (u.undefinedBecause !== undefined) return { ...u, uncenteredVif: u.vif };
@@ -127,18 +127,13 @@ export function collinearityOfFit(data: ModelData, model: SolvedModel): Collinea
 }
 
 function fromFitFactor(data: ModelData, solution: LeastSquaresSolution, names: readonly string[]): Collinearity {
-  const { design } = solution;
-  const { rows, cols } = design.matrix;
-  const scaled: ColumnMajorMatrix = { rows, cols, data: new Float64Array(rows * cols) };
-  for (let c = 0; c < cols; c++) {
-    const from = columnView(design.matrix, c);
-    const to = columnView(scaled, c);
-    const scale = solution.columnScales[c];
-    for (let i = 0; i < rows; i++) to[i] = from[i] / scale;
-  }
+  const { design, columnScales } = solution;
+  const { cols } = design.matrix;
   const rank = solution.qr.accepted.length;
   const factor = { qr: solution.qr, rInverse: rank === cols ? solution.rInverse : undefined };
-  return { ...termVifs(scaled, design.rootWeights, names, constantColumns(predictorValues(data), cols - 1), true, factor), hasIntercept: true };
+  // The fit's own columns and scales: the unit-scaled columns are read through them, not copied.
+  const constants = constantColumns(predictorValues(data), cols - 1);
+  return { ...termVifs({ matrix: design.matrix, scales: columnScales }, design.rootWeights, names, constants, true, factor), hasIntercept: true };
 }
 
 function isPacked(x: Predictors): x is PackedRows {
@@ -175,21 +170,32 @@ function factorOf(scaled: ColumnMajorMatrix): ScaledFactor {
 }
 
 /**
+ * Unit-scaled columns as column c of `matrix` divided by `scales[c]` (each entry scaled as it is
+ * read, not copied), or `matrix` itself when it is scaled already (no `scales`).
+ */
+interface ScaledColumns {
+  matrix: ColumnMajorMatrix;
+  scales?: Float64Array;
+}
+
+/**
  * The VIFs of the auxiliary regressions among the unit-scaled columns of `scaled` (the intercept's
- * first when `intercept`), and those columns' conditioning, from `factor` when it is at hand.
+ * first when `intercept`), and those columns' conditioning, from `factor` when it is at hand; a
+ * caller reading the columns through `scaled.scales` gives their factor.
  */
 function termVifs(
-  scaled: ColumnMajorMatrix,
+  scaled: ScaledColumns,
   rootWeights: Float64Array | undefined,
   names: readonly string[],
   constants: ConstantColumns,
   intercept: boolean,
   factor?: ScaledFactor,
 ): Omit<Collinearity, 'hasIntercept'> {
-  const n = scaled.rows;
-  const q = scaled.cols;
+  const { matrix, scales } = scaled;
+  const n = matrix.rows;
+  const q = matrix.cols;
   if (q === 0) throw new EngineError('shape', 'The model has no terms: give at least one predictor or keep the intercept.');
-  const { qr, rInverse } = factor ?? factorOf(scaled);
+  const { qr, rInverse } = factor ?? factorOf(matrix);
   const rank = qr.accepted.length;
   const values = singularValues(qr.r, rank, rank);
   const conditionNumber = rank < q ? Number.POSITIVE_INFINITY : values[0] / values[rank - 1];
@@ -199,7 +205,7 @@ function termVifs(
     const c = j + offset;
     if (constants.constant[j] && (intercept || constants.zero[j])) return undefinedTerm(name, 'constant');
     if (q - offset === 1) return { name, vif: 1, tolerance: 1, undefinedBecause: undefined };
-    const total = intercept ? centeredSquares(columnView(scaled, c), rootWeights) : 1;
+    const total = intercept ? centeredSquares(columnView(matrix, c), rootWeights, scales?.[c] ?? 1) : 1;
     let rss: number;
     if (rInverse !== undefined) {
       let norm2 = 0;
@@ -244,31 +250,38 @@ function columnNorm(x: Float64Array): number {
   return sum > 1e-280 && sum < 1e280 ? Math.sqrt(sum) : stableNorm(x);
 }
 
-function withColumnLast(matrix: ColumnMajorMatrix, c: number): ColumnMajorMatrix {
-  const order = [...Array.from({ length: matrix.cols }, (_, j) => j).filter((j) => j !== c), c];
+/** A unit-scaled copy of the columns with column c moved last. */
+function withColumnLast({ matrix, scales }: ScaledColumns, c: number): ColumnMajorMatrix {
+  const { rows, cols } = matrix;
+  const order = [...Array.from({ length: cols }, (_, j) => j).filter((j) => j !== c), c];
   const data = new Float64Array(matrix.data.length);
-  order.forEach((from, to) => data.set(columnView(matrix, from), to * matrix.rows));
-  return { rows: matrix.rows, cols: matrix.cols, data };
+  order.forEach((from, to) => {
+    const column = columnView(matrix, from);
+    const scale = scales?.[from] ?? 1;
+    for (let i = 0; i < rows; i++) data[to * rows + i] = column[i] / scale;
+  });
+  return { rows, cols, data };
 }
 
 /**
- * Σwᵢ(xᵢ − x̄_w)² for a column already multiplied by √w (entries √wᵢxᵢ), by the corrected two-pass
- * algorithm (Chan, Golub & LeVeque 1983) so that a large mean does not swamp a small spread.
+ * Σwᵢ(xᵢ − x̄_w)² for a column already multiplied by √w (entries √wᵢxᵢ), each entry divided by
+ * `scale` as it is read, by the corrected two-pass algorithm (Chan, Golub & LeVeque 1983) so that
+ * a large mean does not swamp a small spread.
  */
-function centeredSquares(column: Float64Array, rootWeights: Float64Array | undefined): number {
-  if (rootWeights === undefined) return centeredSquaresUnweighted(column);
+function centeredSquares(column: Float64Array, rootWeights: Float64Array | undefined, scale: number): number {
+  if (rootWeights === undefined) return centeredSquaresUnweighted(column, scale);
   const n = column.length;
   let weightSum = 0;
   let mean = 0;
   for (let i = 0; i < n; i++) {
     weightSum += rootWeights[i] ** 2;
-    mean += rootWeights[i] * column[i];
+    mean += rootWeights[i] * (column[i] / scale);
   }
   mean /= weightSum;
   let sum = 0;
   let correction = 0;
   for (let i = 0; i < n; i++) {
-    const d = column[i] / rootWeights[i] - mean;
+    const d = column[i] / scale / rootWeights[i] - mean;
     sum += rootWeights[i] ** 2 * d * d;
     correction += rootWeights[i] ** 2 * d;
   }
@@ -276,15 +289,17 @@ function centeredSquares(column: Float64Array, rootWeights: Float64Array | undef
 }
 
 /** centeredSquares with every weight 1: the same sums, without reading weights. */
-function centeredSquaresUnweighted(column: Float64Array): number {
+function centeredSquaresUnweighted(column: Float64Array, scale: number): number {
   const n = column.length;
+  // Divided, not multiplied by 1/scale: the same quotients as scaled copies hold, so a fit's VIFs
+  // equal those of the predictors examined alone (scaleToUnitNorm) to the last bit.
   let mean = 0;
-  for (let i = 0; i < n; i++) mean += column[i];
+  for (let i = 0; i < n; i++) mean += column[i] / scale;
   mean /= n;
   let sum = 0;
   let correction = 0;
   for (let i = 0; i < n; i++) {
-    const d = column[i] - mean;
+    const d = column[i] / scale - mean;
     sum += d * d;
     correction += d;
   }

@@ -46,21 +46,8 @@ function computeMoments(solution: LeastSquaresSolution): DurbinWatsonMoments {
   let aqSquares = 0;
   for (let from = 0; from < n - 1; from += ROW_TILE) {
     const to = Math.min(n - 1, from + ROW_TILE);
-    const size = to - from;
-    for (let k = 0; k < p; k++) {
-      const base = k * n;
-      const at = k * ROW_TILE;
-      for (let i = 0; i < size; i++) g[at + i] = q[base + from + i + 1] - q[base + from + i];
-      // (Aq)ᵢ = (Dᵀg)ᵢ = gᵢ₋₁ − gᵢ, with g₋₁ = gₙ₋₁ = 0: rows from … to − 1 here, row n − 1 after the last tile.
-      let previous = from > 0 ? q[base + from] - q[base + from - 1] : 0;
-      for (let i = 0; i < size; i++) {
-        const current = g[at + i];
-        aqSquares += (previous - current) ** 2;
-        previous = current;
-      }
-      if (to === n - 1) aqSquares += previous * previous;
-    }
-    addGram(g, size, p, gram);
+    for (let k = 0; k < p; k++) aqSquares += differenceTile(q, k * n, from, to, n, g, k * ROW_TILE);
+    addGram(g, to - from, p, gram);
   }
   let gSquares = 0;
   let bSquares = 0;
@@ -77,40 +64,78 @@ function computeMoments(solution: LeastSquaresSolution): DurbinWatsonMoments {
 }
 
 /**
- * gram[k·p + l] += Σᵢ g_k[i]·g_l[i] for l ≥ k (and, in the blocks on the diagonal, one entry below
- * it, which is never read), the columns of g at k·ROW_TILE. Two columns by two per sweep: each
- * entry loaded serves two products.
+ * Differences from … to − 1 of the basis column at base into g from `at` (gᵢ = qᵢ₊₁ − qᵢ), and
+ * their part of ‖Aq‖²: (Aq)ᵢ = (Dᵀg)ᵢ = gᵢ₋₁ − gᵢ with g₋₁ = gₙ₋₁ = 0, rows from … to − 1 here
+ * and row n − 1 with the last tile.
+ */
+function differenceTile(q: Float64Array, base: number, from: number, to: number, n: number, g: Float64Array, at: number): number {
+  let previous = from > 0 ? q[base + from] - q[base + from - 1] : 0;
+  let squares = 0;
+  for (let i = from; i < to; i++) {
+    const current = q[base + i + 1] - q[base + i];
+    g[at + i - from] = current;
+    const a = previous - current;
+    squares += a * a;
+    previous = current;
+  }
+  if (to === n - 1) squares += previous * previous;
+  return squares;
+}
+
+/**
+ * gram[k·p + l] += Σᵢ g_k[i]·g_l[i] for l ≥ k (and, in the blocks on the diagonal, entries below
+ * it, which are never read), the columns of g at k·ROW_TILE. Two columns by four per sweep: the
+ * six entries loaded serve eight products, and the eight sums stay in registers.
  */
 function addGram(g: Float64Array, size: number, p: number, gram: Float64Array): void {
+  const last = p - 1;
   for (let k = 0; k < p; k += 2) {
-    const k1 = Math.min(k + 1, p - 1);
+    // Past the last column an index is held at the last one, and its duplicate sums are not added.
+    const k1 = Math.min(k + 1, last);
     const a = k * ROW_TILE;
     const b = k1 * ROW_TILE;
-    for (let l = k; l < p; l += 2) {
-      const l1 = Math.min(l + 1, p - 1);
-      const c = l * ROW_TILE;
-      const d = l1 * ROW_TILE;
-      let ac = 0;
-      let ad = 0;
-      let bc = 0;
-      let bd = 0;
+    for (let l = k; l < p; l += 4) {
+      const l1 = Math.min(l + 1, last);
+      const l2 = Math.min(l + 2, last);
+      const l3 = Math.min(l + 3, last);
+      const c0 = l * ROW_TILE;
+      const c1 = l1 * ROW_TILE;
+      const c2 = l2 * ROW_TILE;
+      const c3 = l3 * ROW_TILE;
+      let s0 = 0;
+      let s1 = 0;
+      let s2 = 0;
+      let s3 = 0;
+      let t0 = 0;
+      let t1 = 0;
+      let t2 = 0;
+      let t3 = 0;
       for (let i = 0; i < size; i++) {
         const x = g[a + i];
         const y = g[b + i];
-        const u = g[c + i];
-        const v = g[d + i];
-        ac += x * u;
-        ad += x * v;
-        bc += y * u;
-        bd += y * v;
+        const u0 = g[c0 + i];
+        const u1 = g[c1 + i];
+        const u2 = g[c2 + i];
+        const u3 = g[c3 + i];
+        s0 += x * u0;
+        s1 += x * u1;
+        s2 += x * u2;
+        s3 += x * u3;
+        t0 += y * u0;
+        t1 += y * u1;
+        t2 += y * u2;
+        t3 += y * u3;
       }
-      // At an odd p's last column k1 = k or l1 = l: the duplicate products are not added twice.
-      gram[k * p + l] += ac;
-      if (l1 > l) gram[k * p + l1] += ad;
-      if (k1 > k) {
-        gram[k1 * p + l] += bc;
-        if (l1 > l) gram[k1 * p + l1] += bd;
-      }
+      addRow(gram, k * p, l, l1, l2, l3, s0, s1, s2, s3);
+      if (k1 > k) addRow(gram, k1 * p, l, l1, l2, l3, t0, t1, t2, t3);
     }
   }
+}
+
+/** gram[row + l…l3] += the four sums, each column once (l1 … l3 repeat l's last column past p). */
+function addRow(gram: Float64Array, row: number, l: number, l1: number, l2: number, l3: number, s0: number, s1: number, s2: number, s3: number): void {
+  gram[row + l] += s0;
+  if (l1 > l) gram[row + l1] += s1;
+  if (l2 > l1) gram[row + l2] += s2;
+  if (l3 > l2) gram[row + l3] += s3;
 }

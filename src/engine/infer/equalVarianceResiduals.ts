@@ -18,3 +18,8 @@ export function equalVarianceResiduals(solution: LeastSquaresSolution): Float64A
   }
   return last.u;
 }
+
+/** Lets go of the kept residuals (see resetCaches.ts). */
+export function resetEqualVarianceResiduals(): void {
+  last = undefined;
+}

@@ -99,6 +99,11 @@ export function residualDiagnostics(data: ModelData, settings?: FitSettings): Re
  */
 let last: { solution: LeastSquaresSolution; knownSigma: number | undefined; diagnostics: ResidualDiagnostics } | undefined;
 
+/** Forgets the last diagnostics, to free their memory (a new fit computes its own anyway). */
+export function resetResidualDiagnostics(): void {
+  last = undefined;
+}
+
 function diagnosticsOf(solution: LeastSquaresSolution, p: number, knownSigma: number | undefined): ResidualDiagnostics {
   const { yScale, scaledRss, perfectFit } = solution;
   const u = equalVarianceResiduals(solution);

@@ -1,5 +1,5 @@
 import { normalQuantile } from '../distributions';
-import { ascendingOrder } from './ascendingOrder';
+import { ascendingOrder, ascendingOrderFrom } from './ascendingOrder';
 import type { ResidualDiagnostics } from './influence';
 
 /** The points of a normal Q–Q plot, sorted by studentized residual, one entry per point in each array. */
@@ -20,26 +20,36 @@ export function normalScores(diagnostics: ResidualDiagnostics): NormalScores {
   const all = diagnostics.studentized;
   let defined = 0;
   for (let i = 0; i < all.length; i++) if (Number.isFinite(all[i])) defined++;
-  const order = new Int32Array(defined);
-  const values = new Float64Array(defined);
-  for (let i = 0, k = 0; i < all.length; i++) {
-    if (!Number.isFinite(all[i])) continue;
-    order[k] = i;
-    values[k++] = all[i];
-  }
-  const rank = ascendingOrder(values);
-  const m = rank.length;
-  const studentized = new Float64Array(m);
-  const rowIndex = new Int32Array(m);
-  for (let k = 0; k < m; k++) {
+  const rows = new Int32Array(defined);
+  for (let i = 0, k = 0; i < all.length; i++) if (Number.isFinite(all[i])) rows[k++] = i;
+  // Usually every row is a point, and the residuals are sorted where they are.
+  const values = defined === all.length ? all : new Float64Array(defined);
+  if (values !== all) for (let k = 0; k < defined; k++) values[k] = all[rows[k]];
+  const rank = lastRank === undefined ? ascendingOrder(values) : ascendingOrderFrom(values, lastRank);
+  lastRank = rank;
+  const studentized = new Float64Array(defined);
+  const rowIndex = new Int32Array(defined);
+  for (let k = 0; k < defined; k++) {
     studentized[k] = values[rank[k]];
-    rowIndex[k] = order[rank[k]];
+    rowIndex[k] = rows[rank[k]];
   }
-  return { normalQuantile: blomQuantiles(m), studentized, rowIndex };
+  return { normalQuantile: blomQuantiles(defined), studentized, rowIndex };
 }
+
+/**
+ * The last sort's order: after an edit of the data the residuals of the next fit are mostly in the
+ * same order, so it is a near-sorted start (ascendingOrderFrom). Not to be written into.
+ */
+let lastRank: Int32Array | undefined;
 
 /** The last m asked for and its quantiles: every QQPOINTS of a range of the same size reads the same ones. */
 let lastQuantiles: { m: number; quantiles: Float64Array } | undefined;
+
+/** Forgets the last order and quantiles: for timing QQPOINTS cold, and to free their memory. */
+export function resetNormalScores(): void {
+  lastRank = undefined;
+  lastQuantiles = undefined;
+}
 
 /**
  * Φ⁻¹((i − 3/8)/(m + 1/4)) for i = 1 … m. The positions are symmetric about ½, so the upper half is

@@ -5,7 +5,7 @@
  * order whatever the grouping's internals.
  *
  * Found by hashing each row's bit patterns into an open-addressed table and comparing the values
- * of rows whose hashes collide: O(n·p), no string or array per row.
+ * of rows whose hashes collide: O(n·p), no string or array per row, no copy of the values.
  */
 export interface SettingGroups {
   /** Distinct settings. */
@@ -23,23 +23,25 @@ export function settingGroups(values: Float64Array, rows: number, p: number): Se
   let tableSize = 1;
   while (tableSize < 2 * rows) tableSize *= 2;
   const mask = tableSize - 1;
-  // Each slot holds a group's number, or −1.
-  const table = new Int32Array(tableSize).fill(-1);
+  // Each slot holds a group's number + 1, or 0 (empty), so that the fresh table needs no fill.
+  const table = new Int32Array(tableSize);
   const first = new Int32Array(rows);
   const last = new Int32Array(rows);
   const sizes = new Int32Array(rows);
   const next = new Int32Array(rows).fill(-1);
-  const bits = new Float64Array(1);
-  const words = new Uint32Array(bits.buffer);
+  // The values' bit patterns read in place, two words per value (which half comes first does not matter here).
+  const words = new Uint32Array(values.buffer, values.byteOffset, 2 * rows * p);
   let count = 0;
   for (let i = 0; i < rows; i++) {
     const at = i * p;
     let hash = 0x811c9dc5;
     for (let j = 0; j < p; j++) {
-      // + 0 turns −0 into 0, which === already counts as equal.
-      bits[0] = values[at + j] + 0;
-      hash = Math.imul(hash ^ words[0], 0x01000193);
-      hash = Math.imul(hash ^ words[1], 0x01000193);
+      const a = words[2 * (at + j)];
+      const b = words[2 * (at + j) + 1];
+      // −0 (the sign bit alone, in either half) hashes as 0, which === already counts as equal.
+      const negativeZero = (a === 0 && b === 0x80000000) || (a === 0x80000000 && b === 0);
+      hash = Math.imul(hash ^ (negativeZero ? 0 : a), 0x01000193);
+      hash = Math.imul(hash ^ (negativeZero ? 0 : b), 0x01000193);
     }
     hash ^= hash >>> 16;
     hash = Math.imul(hash, 0x85ebca6b);
@@ -47,7 +49,7 @@ export function settingGroups(values: Float64Array, rows: number, p: number): Se
     let slot = hash & mask;
     let group = -1;
     for (;;) {
-      const candidate = table[slot];
+      const candidate = table[slot] - 1;
       if (candidate < 0) break;
       if (sameRow(values, first[candidate] * p, at, p)) {
         group = candidate;
@@ -57,7 +59,7 @@ export function settingGroups(values: Float64Array, rows: number, p: number): Se
     }
     if (group < 0) {
       group = count++;
-      table[slot] = group;
+      table[slot] = group + 1;
       first[group] = i;
     } else {
       next[last[group]] = i;

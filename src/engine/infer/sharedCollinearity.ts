@@ -33,3 +33,8 @@ export function sharedCollinearity(data: ModelData, intercept: boolean, names: r
 function approximateBytes(result: Collinearity): number {
   return 64 * result.terms.length + 8 * result.singularValues.length + 256;
 }
+
+/** Forgets every stored result (see resetCaches.ts). */
+export function resetSharedCollinearity(): void {
+  results.reset();
+}

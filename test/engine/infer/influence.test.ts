@@ -9,6 +9,7 @@
 import { Matrix, inverse } from 'ml-matrix';
 import { describe, expect, it } from 'vitest';
 import { maxCooksDistance, residualDiagnostics, type ResidualDiagnostics } from '../../../src/engine';
+import { resetResidualDiagnostics } from '../../../src/engine/infer/influence';
 import { highLeverageCount, residualFlags } from '../../../src/presentation';
 import { mulberry32, randomProblem } from '../../support/random';
 
@@ -230,5 +231,17 @@ describe('identities and edge cases (common practice)', () => {
     expect(Number.isNaN(d.rows[3].studentized)).toBe(true);
     expect(Number.isFinite(d.rows[3].standardized)).toBe(true);
     expect(d.rows.filter((r) => residualFlags(r, d).includes('outlier'))).toHaveLength(1);
+  });
+});
+
+describe('the last diagnostics kept', () => {
+  it('gives the same diagnostics again for the same fit until reset, then equal ones computed afresh', () => {
+    const { y, x } = randomProblem(21, 20, 2);
+    const first = residualDiagnostics({ y, x });
+    expect(residualDiagnostics({ y, x })).toBe(first);
+    resetResidualDiagnostics();
+    const afresh = residualDiagnostics({ y, x });
+    expect(afresh).not.toBe(first);
+    expect(Array.from(afresh.studentized)).toEqual(Array.from(first.studentized));
   });
 });

@@ -6,7 +6,7 @@
 import { describe, expect, it } from 'vitest';
 import { buildDesign } from '../../../src/engine/fit/design';
 import { solveLeastSquares } from '../../../src/engine/fit/leastSquares';
-import { designBasis } from '../../../src/engine/infer/designBasis';
+import { basisByTriangle, designBasis, formBasis } from '../../../src/engine/infer/designBasis';
 import { leverages } from '../../../src/engine/infer/leverages';
 
 function solve(y: number[], x: number[][], weights?: number[]) {
@@ -87,5 +87,68 @@ describe('designBasis', () => {
       projected += dot * dot;
     }
     expect(projected).toBeCloseTo(1, 13);
+  });
+
+  /** max |QᵀQ − I| over the n × p column-major q. */
+  function orthonormalityError(q: Float64Array, n: number, p: number): number {
+    let worst = 0;
+    for (let a = 0; a < p; a++) {
+      for (let b = 0; b < p; b++) {
+        let dot = 0;
+        for (let i = 0; i < n; i++) dot += q[a * n + i] * q[b * n + i];
+        worst = Math.max(worst, Math.abs(dot - (a === b ? 1 : 0)));
+      }
+    }
+    return worst;
+  }
+
+  // A well-conditioned weighted design with an aliased column (x3 = x1 − 2·x2), so the accepted
+  // columns are a subset and the rows are √w-scaled.
+  const n = 60;
+  const wide = Array.from({ length: n }, (_, i) => {
+    const a = Math.sin(i * 1.7) * 3 + 10;
+    const b = Math.cos(i * 0.9);
+    return [a, b, a - 2 * b, ((i * 37) % 11) / 11];
+  });
+  const wideY = wide.map((r, i) => r[0] - 2 * r[3] + Math.sin(i * 5.3));
+  const wideWeights = Array.from({ length: n }, (_, i) => 0.5 + ((i * 13) % 7) / 3);
+
+  it.each([
+    ['four accepted columns', 4, 4],
+    ['three accepted columns (an odd count)', 3, 3],
+  ])('is X·R⁻¹ for a well-conditioned design, the same basis the reflectors give: %s', (_, columns, rank) => {
+    const solution = solve(
+      wideY,
+      wide.map((r) => r.slice(0, columns)),
+      wideWeights,
+    );
+    const p = solution.qr.accepted.length;
+    expect(p).toBe(rank);
+    expect(basisByTriangle(solution)).toBe(true);
+    const byTriangle = formBasis(solution, true);
+    const byReflectors = formBasis(solution, false);
+    // The same Q₁ (R fixes each column's sign), not just the same span.
+    byTriangle.forEach((v, i) => expect(Math.abs(v - byReflectors[i])).toBeLessThan(1e-13));
+    expect(orthonormalityError(byTriangle, n, p)).toBeLessThan(1e-13);
+    expect(designBasis(solution)).toEqual(byTriangle);
+  });
+
+  it('takes the reflectors for an ill-conditioned design, where X·R⁻¹ would lose orthonormality', () => {
+    // Two columns 1e-7 apart: κ near 3e7, so X·R⁻¹ is orthonormal only to about κ·u.
+    const rows = 40;
+    const x = Array.from({ length: rows }, (_, i) => {
+      const a = Math.sin(i * 1.3);
+      return [a, a + 1e-7 * Math.cos(i * 2.1), Math.cos(i * 0.7)];
+    });
+    const solution = solve(
+      x.map((r, i) => r[0] + r[2] + Math.sin(i * 4.1)),
+      x,
+    );
+    const p = solution.qr.accepted.length;
+    expect(p).toBe(4);
+    expect(basisByTriangle(solution)).toBe(false);
+    expect(designBasis(solution)).toEqual(formBasis(solution, false));
+    expect(orthonormalityError(formBasis(solution, false), rows, p)).toBeLessThan(1e-14);
+    expect(orthonormalityError(formBasis(solution, true), rows, p)).toBeGreaterThan(1e-10);
   });
 });

@@ -8,7 +8,7 @@
 import { describe, expect, it } from 'vitest';
 import { residualDiagnostics } from '../../../src/engine';
 import { normalQuantile } from '../../../src/engine/distributions';
-import { normalScores } from '../../../src/engine/infer/normalScores';
+import { normalScores, resetNormalScores } from '../../../src/engine/infer/normalScores';
 import { randomProblem } from '../../support/random';
 
 describe('normalScores', () => {
@@ -54,5 +54,31 @@ describe('normalScores', () => {
     const y = [1, 2, 2, 1, 3, 3, 0];
     const points = normalScores(residualDiagnostics({ y, x: y.map(() => []) }));
     expect(Array.from(points.rowIndex)).toEqual([6, 0, 3, 1, 2, 4, 5]);
+  });
+
+  it("orders each fit's residuals afresh, whatever the fit before it was", () => {
+    // Each call starts from the previous call's order: fits of the same size and of another size in turn.
+    const stableOrder = (values: Float64Array) => Array.from(values, (_, i) => i).sort((a, b) => values[a] - values[b]);
+    for (const [seed, n] of [
+      [3, 60],
+      [4, 60],
+      [5, 45],
+      [6, 60],
+    ]) {
+      const { y, x } = randomProblem(seed, n, 2);
+      const diagnostics = residualDiagnostics({ y, x });
+      expect(Array.from(normalScores(diagnostics).rowIndex)).toEqual(stableOrder(diagnostics.studentized));
+    }
+  });
+
+  it('keeps the quantiles of the last size until reset, and gives the same points after it', () => {
+    const { y, x } = randomProblem(7, 25, 1);
+    const diagnostics = residualDiagnostics({ y, x });
+    const first = normalScores(diagnostics);
+    expect(normalScores(diagnostics).normalQuantile).toBe(first.normalQuantile);
+    resetNormalScores();
+    const afresh = normalScores(diagnostics);
+    expect(afresh.normalQuantile).not.toBe(first.normalQuantile);
+    expect(afresh).toEqual(first);
   });
 });
