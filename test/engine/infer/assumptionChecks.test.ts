@@ -24,6 +24,7 @@ import { chiSquareUpperTail } from '../../../src/engine/distributions/chiSquare'
 import { studentTTwoSidedP } from '../../../src/engine/distributions/studentT';
 import { shapiroWilk } from '../../../src/engine/infer/shapiroWilk';
 import { gaussian, mulberry32, randomProblem } from '../../support/random';
+import { koenkerOf } from '../../support/koenker';
 
 /** √w-scaled residuals of weighted least squares, by ml-matrix. */
 function scaledResiduals(x: number[][], y: number[], w = y.map(() => 1)): number[] {
@@ -64,17 +65,6 @@ function bruteForceMoments(x: number[][], w: number[]): { mean: number; variance
   const t2 = ma.mmul(ma).trace();
   const mean = t1 / (n - p);
   return { mean, variance: (2 * (t2 - t1 * mean)) / ((n - p) * (n - p + 2)) };
-}
-
-/** Koenker's LM = n·R² of e² on [1, X], by ml-matrix. */
-function koenkerOf(x: number[][], e: number[]): number {
-  const u = e.map((v) => v * v);
-  const design = new Matrix(x.map((row) => [1, ...row]));
-  const fitted = design.mmul(new QrDecomposition(design).solve(Matrix.columnVector(u))).getColumn(0);
-  const mean = u.reduce((s, v) => s + v, 0) / u.length;
-  const rss = u.reduce((s, v, i) => s + (v - fitted[i]) ** 2, 0);
-  const tss = u.reduce((s, v) => s + (v - mean) ** 2, 0);
-  return u.length * (1 - rss / tss);
 }
 
 function jarqueBeraOf(e: number[]): { jb: number; skewness: number; kurtosis: number } {

@@ -4,21 +4,11 @@
  * statistic formed with the model's QR where it is reused. Oracle: Koenker's LM = n·R² of u² on
  * [1, X], by ml-matrix's QR (npm, general-purpose linear algebra), from its defining formula.
  */
-import { Matrix, QrDecomposition } from 'ml-matrix';
 import { describe, expect, it } from 'vitest';
 import { solveModel } from '../../../src/engine/fitModel';
 import { breuschPagan } from '../../../src/engine/infer/breuschPagan';
 import { gaussian, mulberry32 } from '../../support/random';
-
-function koenkerOf(x: number[][], residuals: ArrayLike<number>): number {
-  const u = Array.from(residuals, (v) => v * v);
-  const design = new Matrix(x.map((row) => [1, ...row]));
-  const fitted = design.mmul(new QrDecomposition(design).solve(Matrix.columnVector(u))).getColumn(0);
-  const mean = u.reduce((s, v) => s + v, 0) / u.length;
-  const rss = u.reduce((s, v, i) => s + (v - fitted[i]) ** 2, 0);
-  const tss = u.reduce((s, v) => s + (v - mean) ** 2, 0);
-  return u.length * (1 - rss / tss);
-}
+import { koenkerOf } from '../../support/koenker';
 
 function relative(a: number, b: number): number {
   return Math.abs(a - b) / Math.abs(b);
