@@ -118,12 +118,20 @@ export function parseAreas(text: string, defaultSheet: string): RangeRef[] | und
   return areas as RangeRef[];
 }
 
+/**
+ * Whether two sheet names name one sheet: Excel compares them regardless of case, so a formula's
+ * `data!A1` reads the sheet "Data" (common practice, no source; the preview's getItem does the same).
+ */
+export function sameSheet(a: string, b: string): boolean {
+  return a === b || a.toLowerCase() === b.toLowerCase();
+}
+
 export function rangeContains(range: RangeRef, sheet: string, row: number, column: number): boolean {
-  return range.sheet === sheet && row >= range.top && row <= range.bottom && column >= range.left && column <= range.right;
+  return sameSheet(range.sheet, sheet) && row >= range.top && row <= range.bottom && column >= range.left && column <= range.right;
 }
 
 export function rangesOverlap(a: RangeRef, b: RangeRef): boolean {
-  return a.sheet === b.sheet && a.top <= b.bottom && b.top <= a.bottom && a.left <= b.right && b.left <= a.right;
+  return sameSheet(a.sheet, b.sheet) && a.top <= b.bottom && b.top <= a.bottom && a.left <= b.right && b.left <= a.right;
 }
 
 /** "$B$1:$B$61" style, with the sheet: how report formulas refer to data so they survive copying. */

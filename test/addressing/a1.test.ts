@@ -127,6 +127,8 @@ describe('range arithmetic', () => {
     expect(rangeContains(block, 'Data', 5, 3)).toBe(false);
     expect(rangeContains(block, 'Data', 2, 0)).toBe(false);
     expect(rangeContains(block, 'Other', 2, 2)).toBe(false);
+    // Sheet names are compared regardless of case, as Excel compares them (common practice, no source).
+    expect(rangeContains(block, 'DATA', 1, 1)).toBe(true);
   });
 
   it('overlaps a range sharing a cell, not one that only touches it or sits on another sheet', () => {
@@ -134,5 +136,6 @@ describe('range arithmetic', () => {
     expect(rangesOverlap(block, { sheet: 'Data', top: 5, left: 1, bottom: 8, right: 3 })).toBe(false);
     expect(rangesOverlap(block, { sheet: 'Data', top: 0, left: 4, bottom: 9, right: 4 })).toBe(false);
     expect(rangesOverlap(block, { ...block, sheet: 'Other' })).toBe(false);
+    expect(rangesOverlap(block, { ...block, sheet: 'data' })).toBe(true);
   });
 });

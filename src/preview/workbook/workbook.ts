@@ -3,7 +3,7 @@
  * formats, cell styles, column widths, charts and a selection. Editing a cell re-evaluates the formulas that read it, then the
  * formulas that read their results, until nothing changes.
  */
-import { MAX_COLUMNS, rangesOverlap } from '../../addressing/a1';
+import { MAX_COLUMNS, rangesOverlap, sameSheet } from '../../addressing/a1';
 import { evaluate, type FormulaResult, type FunctionEntry, isCellError, NAMESPACE } from './evaluate';
 import { CellLayer, type LayerBounds } from './cellLayer';
 import { ChartList } from './charts';
@@ -481,8 +481,7 @@ export class PreviewWorkbook implements WorkbookModel {
   }
 
   private allFormulasReading(sheetName: string): Set<FormulaCell> {
-    const lower = sheetName.toLowerCase();
-    return new Set([...this.everyFormula()].filter((f) => f.reads.some((r) => r.sheet.toLowerCase() === lower)));
+    return new Set([...this.everyFormula()].filter((f) => f.reads.some((r) => sameSheet(r.sheet, sheetName))));
   }
 
   private formulasSpillingInto(range: RangeRef): Set<FormulaCell> {

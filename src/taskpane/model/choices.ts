@@ -1,4 +1,4 @@
-import { columnsOf, parseRange, type RangeRef, splitAreas } from '../../addressing/a1';
+import { columnsOf, parseRange, type RangeRef, sameSheet, splitAreas } from '../../addressing/a1';
 import type { CovarianceKind } from '../../engine';
 import { noiseSdProblem } from './noiseSdField';
 
@@ -77,7 +77,7 @@ export function resolveRanges(choices: PaneChoices): { ranges?: ResolvedRanges; 
   const rows = response.bottom - response.top;
   if (response.left !== response.right) problems.push({ field: 'response', message: 'The response must be a single column.' });
   for (const area of predictorAreas) {
-    if (area.sheet !== response.sheet || area.top !== response.top || area.bottom !== response.bottom) {
+    if (!sameSheet(area.sheet, response.sheet) || area.top !== response.top || area.bottom !== response.bottom) {
       problems.push({
         field: 'predictors',
         message: `Every predictor area must cover the response's rows (${response.sheet} rows ${response.top + 1}–${response.bottom + 1}).`,

@@ -1,4 +1,4 @@
-import { columnCount, formatAbsolute, type RangeRef } from '../../addressing/a1';
+import { columnCount, formatAbsolute, type RangeRef, sameSheet } from '../../addressing/a1';
 import type { ResolvedRanges } from './choices';
 
 /** Column Y: where PLUMB.GATHER blocks start on the report sheet, clear of the tables and the Q–Q points. */
@@ -26,7 +26,7 @@ export function joinRuns(columns: readonly RangeRef[]): RangeRef[] {
   for (const column of columns) {
     const last = runs[runs.length - 1];
     const continues =
-      last !== undefined && last.sheet === column.sheet && last.top === column.top && last.bottom === column.bottom && column.left === last.right + 1;
+      last !== undefined && sameSheet(last.sheet, column.sheet) && last.top === column.top && last.bottom === column.bottom && column.left === last.right + 1;
     if (continues) runs[runs.length - 1] = { ...last, right: column.right };
     else runs.push(column);
   }

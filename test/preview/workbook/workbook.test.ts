@@ -66,6 +66,15 @@ describe('preview workbook', () => {
     expect(wb.valueAt(at('Data', 1, 5))).toBe(44);
   });
 
+  it('recalculates a formula that names its sheet in another case when that sheet is edited', () => {
+    // Excel reads sheet names regardless of case (common practice, no source): `data!` is the sheet "Data".
+    const wb = setup();
+    wb.setInputs('Planned batches', 0, 0, [['=PLUMB.SUMCOL(data!A1:B3)']]);
+    expect(wb.valueAt(at('Planned batches', 1, 0))).toBe(12);
+    wb.setInputs('Data', 2, 1, [[16]]);
+    expect(wb.valueAt(at('Planned batches', 1, 0))).toBe(22);
+  });
+
   it('shows #SPILL! when the result would overwrite a cell, and spills once the cell is cleared', () => {
     const wb = setup();
     wb.setInputs('Data', 1, 3, [['in the way']]);

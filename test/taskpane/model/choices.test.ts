@@ -12,6 +12,14 @@ describe('resolveRanges', () => {
     expect(ranges?.response).toEqual({ sheet: 'Batches', top: 0, left: 1, bottom: 60, right: 1 });
   });
 
+  it("takes predictors whose sheet is named in another case as on the response's sheet", () => {
+    // Excel reads sheet names regardless of case (common practice, no source).
+    const { ranges, problems } = resolveRanges({ ...base, predictors: 'batches!$C$1:$E$61' });
+    expect(problems).toEqual([]);
+    expect(ranges?.predictorColumns.map((c) => c.left)).toEqual([2, 3, 4]);
+    expect(resolveRanges({ ...base, predictors: 'Other!$C$1:$E$61' }).problems[0]).toMatchObject({ field: 'predictors' });
+  });
+
   it('asks for missing ranges and names the field', () => {
     const { problems } = resolveRanges(EMPTY_CHOICES);
     expect(problems.map((p) => p.field)).toEqual(['response', 'predictors']);
