@@ -1,5 +1,5 @@
 import { ModelCache } from './cache/modelCache';
-import { packedPredictorsOf } from './cache/packedPredictors';
+import { type PackedPredictors, packedPredictorsOf } from './cache/packedPredictors';
 import { EngineError } from './errors';
 import { buildDesign } from './fit/design';
 import { type LeastSquaresSolution, solveLeastSquares } from './fit/leastSquares';
@@ -31,7 +31,7 @@ export const modelCache = new ModelCache<SolvedModel>(64, 256 * 1024 * 1024);
 /** The fit of `data`, computed once per distinct content and settings (see ModelCache). */
 export function solveModel(data: ModelData, settings?: FitSettings): SolvedModel {
   const resolved = resolveSettings(settings);
-  const solved = modelCache.getOrCompute(data, resolved, () => solveUncached(data, resolved), approximateBytes);
+  const solved = modelCache.getOrCompute(data, resolved, (rowsPacking) => solveUncached(data, resolved, rowsPacking), approximateBytes);
   return withNames(solved, data.names);
 }
 
@@ -70,9 +70,10 @@ function approximateBytes(model: SolvedModel): number {
   return 8 * (model.fit.rank * n + 4 * n + 2 * q * q) + 1024;
 }
 
-function solveUncached(data: ModelData, resolved: ResolvedSettings): SolvedModel {
-  // The model frame's packed predictors, when it registered them, spare building its rows.
-  const packed = packedPredictorsOf(data);
+function solveUncached(data: ModelData, resolved: ResolvedSettings, rowsPacking: PackedPredictors | undefined): SolvedModel {
+  // The model frame's packed predictors, when it registered them, spare building its rows; the
+  // cache key's packing of plain rows spares reading them a second time.
+  const packed = packedPredictorsOf(data) ?? rowsPacking;
   const predictors = packed !== undefined && packed.rows === data.y.length ? packed : data.x;
   const design = buildDesign(data.y, predictors, resolved.intercept, data.names, data.weights);
   if (design.matrix.cols === 0) throw new EngineError('shape', 'The model has no terms: give at least one predictor or keep the intercept.');

@@ -1,7 +1,7 @@
 import type { FitSettings, ModelData } from '../types';
 import { LruCache } from './lruCache';
 import { modelKey, sameKey, settingsHeader, type StoredKey, storedKey } from './modelKey';
-import { packedDataOf } from './packedPredictors';
+import { packedDataOf, type PackedPredictors } from './packedPredictors';
 
 export interface CacheStats {
   /** Fits computed (cache misses) since the last reset. */
@@ -47,7 +47,11 @@ export class ModelCache<T> {
     this.store = new LruCache(maxEntries, maxBytes);
   }
 
-  getOrCompute(data: ModelData, settings: FitSettings, compute: () => T, sizeOf: (value: T) => number): T {
+  /**
+   * The entry for data under settings, computed on a miss. compute receives the key's packing of
+   * data's rows when the key made one (see ModelKey.rowsPacking), so the rows are read once.
+   */
+  getOrCompute(data: ModelData, settings: FitSettings, compute: (rowsPacking: PackedPredictors | undefined) => T, sizeOf: (value: T) => number): T {
     const packed = packedDataOf(data);
     const header = packed === undefined ? undefined : settingsHeader(packed.y.length, packed.predictors.p, settings, packed.weights !== undefined);
     const remembered = header === undefined ? undefined : this.rememberedEntry(data, header);
@@ -62,7 +66,7 @@ export class ModelCache<T> {
       this.hits++;
       entry = found;
     } else {
-      entry = { key: storedKey(key), value: compute() };
+      entry = { key: storedKey(key), value: compute(key.rowsPacking) };
       this.fits++;
       this.store.set(key.hash, entry, 8 * key.length + sizeOf(entry.value));
     }

