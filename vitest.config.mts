@@ -6,7 +6,11 @@ import ClosingLineReporter from './test/support/closingLineReporter';
  * everything else: on 2 cores, other test files running beside them would lengthen every task
  * they measure. Every other file runs in parallel, as before.
  */
-const ALONE = ['test/preview/browser/longTasks.test.ts', 'test/preview/browser/longTasksStreamed.test.ts'];
+const ALONE = [
+  'test/preview/browser/longTasks.test.ts',
+  'test/preview/browser/longTasksAboveLiveSize.test.ts',
+  'test/preview/browser/longTasksFormulaWorker.test.ts',
+];
 
 export default defineConfig({
   test: {

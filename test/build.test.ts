@@ -181,6 +181,13 @@ describe('production build', () => {
     }
   });
 
+  it('emits the formula worker as its own script, loading the one engine chunk rather than a copy of it', () => {
+    const worker = readFileSync(join(outDir, 'formula-worker.js'), 'utf8');
+    expect(worker).not.toContain('more rows than parameters');
+    expect(worker).toContain('engine.js');
+    expect(worker).toContain('importScripts');
+  });
+
   it('loads no external script other than Office.js', () => {
     const sources = scriptSources(readFileSync(join(outDir, 'taskpane.html'), 'utf8'));
     const external = sources.filter((s) => /^(https?:)?\/\//i.test(s));
@@ -238,6 +245,8 @@ describe('Content-Security-Policy of the built pages', () => {
     expect(directives.get('default-src')).toEqual(["'self'"]);
     expect(directives.get('script-src')).toEqual(scripts);
     expect(directives.get('connect-src')).toEqual(["'self'"]);
+    // The formula worker (src/functions/offThread) is a script of the page's own origin.
+    expect(directives.get('worker-src')).toEqual(["'self'"]);
     expect(directives.get('object-src')).toEqual(["'none'"]);
     expect(directives.get('base-uri')).toEqual(["'none'"]);
     expect(directives.get('form-action')).toEqual(["'none'"]);

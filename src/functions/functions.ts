@@ -20,6 +20,7 @@ import {
   normalScores,
 } from '../engine';
 import { guarded } from './cellError';
+import { offThreadWhenLarge } from './offThread/offThread';
 import type { RangeArgument } from './cellInput';
 import { toCellGrid } from './cellInput';
 import { readCandidates } from './candidates';
@@ -127,7 +128,9 @@ export function terms(
   robust?: any,
   invocation?: CustomFunctions.Invocation,
 ): any[][] {
-  return guarded(() => termsGrid(fitOf(request(response, predictors, level, intercept, noise_sd, weights, robust, invocation))));
+  return offThreadWhenLarge('terms', [response, predictors, level, intercept, noise_sd, weights, robust], invocation, () =>
+    guarded(() => termsGrid(fitOf(request(response, predictors, level, intercept, noise_sd, weights, robust, invocation)))),
+  );
 }
 
 /**
@@ -154,7 +157,9 @@ export function estimates(
   robust?: any,
   invocation?: CustomFunctions.Invocation,
 ): any[][] {
-  return guarded(() => estimatesGrid(fitOf(request(response, predictors, level, intercept, noise_sd, weights, robust, invocation))));
+  return offThreadWhenLarge('estimates', [response, predictors, level, intercept, noise_sd, weights, robust], invocation, () =>
+    guarded(() => estimatesGrid(fitOf(request(response, predictors, level, intercept, noise_sd, weights, robust, invocation)))),
+  );
 }
 
 /**
@@ -181,7 +186,9 @@ export function stdErrors(
   robust?: any,
   invocation?: CustomFunctions.Invocation,
 ): any[][] {
-  return guarded(() => standardErrorsGrid(fitOf(request(response, predictors, level, intercept, noise_sd, weights, robust, invocation))));
+  return offThreadWhenLarge('stdErrors', [response, predictors, level, intercept, noise_sd, weights, robust], invocation, () =>
+    guarded(() => standardErrorsGrid(fitOf(request(response, predictors, level, intercept, noise_sd, weights, robust, invocation)))),
+  );
 }
 
 /**
@@ -208,7 +215,9 @@ export function intervals(
   robust?: any,
   invocation?: CustomFunctions.Invocation,
 ): any[][] {
-  return guarded(() => intervalsGrid(fitOf(request(response, predictors, level, intercept, noise_sd, weights, robust, invocation))));
+  return offThreadWhenLarge('intervals', [response, predictors, level, intercept, noise_sd, weights, robust], invocation, () =>
+    guarded(() => intervalsGrid(fitOf(request(response, predictors, level, intercept, noise_sd, weights, robust, invocation)))),
+  );
 }
 
 /**
@@ -235,7 +244,9 @@ export function covariance(
   robust?: any,
   invocation?: CustomFunctions.Invocation,
 ): any[][] {
-  return guarded(() => covarianceGrid(fitOf(request(response, predictors, level, intercept, noise_sd, weights, robust, invocation))));
+  return offThreadWhenLarge('covariance', [response, predictors, level, intercept, noise_sd, weights, robust], invocation, () =>
+    guarded(() => covarianceGrid(fitOf(request(response, predictors, level, intercept, noise_sd, weights, robust, invocation)))),
+  );
 }
 
 /**
@@ -262,10 +273,12 @@ export function fitStats(
   robust?: any,
   invocation?: CustomFunctions.Invocation,
 ): any[][] {
-  return guarded(() => {
-    const r = request(response, predictors, level, intercept, noise_sd, weights, robust, invocation);
-    return fitStatsGrid(fitOf(r), r.frame);
-  });
+  return offThreadWhenLarge('fitStats', [response, predictors, level, intercept, noise_sd, weights, robust], invocation, () =>
+    guarded(() => {
+      const r = request(response, predictors, level, intercept, noise_sd, weights, robust, invocation);
+      return fitStatsGrid(fitOf(r), r.frame);
+    }),
+  );
 }
 
 /**
@@ -292,10 +305,12 @@ export function equation(
   robust?: any,
   invocation?: CustomFunctions.Invocation,
 ): any[][] {
-  return guarded(() => {
-    const r = request(response, predictors, level, intercept, noise_sd, weights, robust, invocation);
-    return equationGrid(r.frame.responseName, fitOf(r));
-  });
+  return offThreadWhenLarge('equation', [response, predictors, level, intercept, noise_sd, weights, robust], invocation, () =>
+    guarded(() => {
+      const r = request(response, predictors, level, intercept, noise_sd, weights, robust, invocation);
+      return equationGrid(r.frame.responseName, fitOf(r));
+    }),
+  );
 }
 
 /**
@@ -324,20 +339,22 @@ export function nestedF(
   robust?: any,
   invocation?: CustomFunctions.Invocation,
 ): any[][] {
-  return guarded(() => {
-    const r = requestOf(
-      response,
-      [
-        { range: base, argument: 'base', index: 1 },
-        { range: added, argument: 'added', index: 2 },
-      ],
-      { level, intercept, noise_sd, weights, robust, weightsIndex: WEIGHTS_AFTER_THREE },
-      invocation,
-    );
-    // Terms come in block order, so base's terms are the frame's leading columns.
-    const baseColumns = r.frame.termBlocks.filter((b) => b === 0).length;
-    return nestedGrid(compareLeadingColumns(r.frame.data, baseColumns, r.settings));
-  });
+  return offThreadWhenLarge('nestedF', [response, base, added, level, intercept, noise_sd, weights, robust], invocation, () =>
+    guarded(() => {
+      const r = requestOf(
+        response,
+        [
+          { range: base, argument: 'base', index: 1 },
+          { range: added, argument: 'added', index: 2 },
+        ],
+        { level, intercept, noise_sd, weights, robust, weightsIndex: WEIGHTS_AFTER_THREE },
+        invocation,
+      );
+      // Terms come in block order, so base's terms are the frame's leading columns.
+      const baseColumns = r.frame.termBlocks.filter((b) => b === 0).length;
+      return nestedGrid(compareLeadingColumns(r.frame.data, baseColumns, r.settings));
+    }),
+  );
 }
 
 /**
@@ -366,23 +383,25 @@ export function predict(
   robust?: any,
   invocation?: CustomFunctions.Invocation,
 ): any[][] {
-  return guarded(() => {
-    const r = requestOf(
-      response,
-      [{ range: predictors, argument: 'predictors', index: 1 }],
-      { level, intercept, noise_sd, weights, robust, weightsIndex: WEIGHTS_AFTER_THREE },
-      invocation,
-    );
-    const { rows } = readNewRows(toCellGrid(new_rows as RangeArgument, 'new_rows'), r.frame, argumentOrigins(invocation)(2));
-    const complete = rows.filter((row): row is number[] => row !== undefined);
-    const predicted = complete.length > 0 ? predictRows(r.frame.data, complete, r.settings) : [];
-    let next = 0;
-    return predictGrid(
-      rows.map((row) => (row === undefined ? undefined : predicted[next++])),
-      r.frame.hasHeader,
-      frameColumnNames(r.frame),
-    );
-  });
+  return offThreadWhenLarge('predict', [response, predictors, new_rows, level, intercept, noise_sd, weights, robust], invocation, () =>
+    guarded(() => {
+      const r = requestOf(
+        response,
+        [{ range: predictors, argument: 'predictors', index: 1 }],
+        { level, intercept, noise_sd, weights, robust, weightsIndex: WEIGHTS_AFTER_THREE },
+        invocation,
+      );
+      const { rows } = readNewRows(toCellGrid(new_rows as RangeArgument, 'new_rows'), r.frame, argumentOrigins(invocation)(2));
+      const complete = rows.filter((row): row is number[] => row !== undefined);
+      const predicted = complete.length > 0 ? predictRows(r.frame.data, complete, r.settings) : [];
+      let next = 0;
+      return predictGrid(
+        rows.map((row) => (row === undefined ? undefined : predicted[next++])),
+        r.frame.hasHeader,
+        frameColumnNames(r.frame),
+      );
+    }),
+  );
 }
 
 /**
@@ -409,10 +428,12 @@ export function residuals(
   robust?: any,
   invocation?: CustomFunctions.Invocation,
 ): any[][] {
-  return guarded(() => {
-    const r = request(response, predictors, level, intercept, noise_sd, weights, robust, invocation);
-    return residualsGrid(residualDiagnostics(r.frame.data, r.settings), r.frame);
-  });
+  return offThreadWhenLarge('residuals', [response, predictors, level, intercept, noise_sd, weights, robust], invocation, () =>
+    guarded(() => {
+      const r = request(response, predictors, level, intercept, noise_sd, weights, robust, invocation);
+      return residualsGrid(residualDiagnostics(r.frame.data, r.settings), r.frame);
+    }),
+  );
 }
 
 /**
@@ -441,21 +462,23 @@ export function compare(
   robust?: any,
   invocation?: CustomFunctions.Invocation,
 ): any[][] {
-  return guarded(() => {
-    const r = requestOf(
-      response,
-      [{ range: predictors, argument: 'predictors', index: 1 }],
-      { level, intercept, noise_sd, weights, robust, weightsIndex: WEIGHTS_AFTER_THREE },
-      invocation,
-    );
-    const choices = readCandidates(toCellGrid(candidates as RangeArgument, 'candidates'), r.frame, argumentOrigins(invocation)(2));
-    const results = compareCandidates(
-      r.frame.data,
-      choices.map((c) => c.terms),
-      r.settings,
-    );
-    return compareGrid(results, choices, r.frame);
-  });
+  return offThreadWhenLarge('compare', [response, predictors, candidates, level, intercept, noise_sd, weights, robust], invocation, () =>
+    guarded(() => {
+      const r = requestOf(
+        response,
+        [{ range: predictors, argument: 'predictors', index: 1 }],
+        { level, intercept, noise_sd, weights, robust, weightsIndex: WEIGHTS_AFTER_THREE },
+        invocation,
+      );
+      const choices = readCandidates(toCellGrid(candidates as RangeArgument, 'candidates'), r.frame, argumentOrigins(invocation)(2));
+      const results = compareCandidates(
+        r.frame.data,
+        choices.map((c) => c.terms),
+        r.settings,
+      );
+      return compareGrid(results, choices, r.frame);
+    }),
+  );
 }
 
 /**
@@ -480,12 +503,14 @@ export function collinearity(
   robust?: any,
   invocation?: CustomFunctions.Invocation,
 ): any[][] {
-  return guarded(() => {
-    const at = argumentOrigins(invocation);
-    const settings = { level, intercept, knownSigma: noise_sd, weights: weights as RangeArgument | null, robust };
-    const r = readPredictors(predictors as RangeArgument, settings, { x: at(0), weights: at(4) });
-    return collinearityGrid(modelCollinearity(r.frame.data, r.settings));
-  });
+  return offThreadWhenLarge('collinearity', [predictors, level, intercept, noise_sd, weights, robust], invocation, () =>
+    guarded(() => {
+      const at = argumentOrigins(invocation);
+      const settings = { level, intercept, knownSigma: noise_sd, weights: weights as RangeArgument | null, robust };
+      const r = readPredictors(predictors as RangeArgument, settings, { x: at(0), weights: at(4) });
+      return collinearityGrid(modelCollinearity(r.frame.data, r.settings));
+    }),
+  );
 }
 
 /**
@@ -512,10 +537,12 @@ export function checks(
   robust?: any,
   invocation?: CustomFunctions.Invocation,
 ): any[][] {
-  return guarded(() => {
-    const r = request(response, predictors, level, intercept, noise_sd, weights, robust, invocation);
-    return checksGrid(assumptionChecks(r.frame.data, r.settings, r.frame.usedRows), r.frame);
-  });
+  return offThreadWhenLarge('checks', [response, predictors, level, intercept, noise_sd, weights, robust], invocation, () =>
+    guarded(() => {
+      const r = request(response, predictors, level, intercept, noise_sd, weights, robust, invocation);
+      return checksGrid(assumptionChecks(r.frame.data, r.settings, r.frame.usedRows), r.frame);
+    }),
+  );
 }
 
 /**
@@ -542,10 +569,12 @@ export function qqPoints(
   robust?: any,
   invocation?: CustomFunctions.Invocation,
 ): any[][] {
-  return guarded(() => {
-    const r = request(response, predictors, level, intercept, noise_sd, weights, robust, invocation);
-    return qqGrid(normalScores(residualDiagnostics(r.frame.data, r.settings)), r.frame);
-  });
+  return offThreadWhenLarge('qqPoints', [response, predictors, level, intercept, noise_sd, weights, robust], invocation, () =>
+    guarded(() => {
+      const r = request(response, predictors, level, intercept, noise_sd, weights, robust, invocation);
+      return qqGrid(normalScores(residualDiagnostics(r.frame.data, r.settings)), r.frame);
+    }),
+  );
 }
 
 /**

@@ -56,6 +56,68 @@ export class CellLayer<V> {
     else cells.length = end;
   }
 
+  /**
+   * Every cell of the block from column left to right in rows top … bottom emptied, but the one
+   * at `keep` (a spill's anchor, which the formula layer holds): each row looked up and trimmed
+   * once, where a cell at a time would look each up (a 50,000-row spill: 500,000 lookups).
+   */
+  deleteBlock(block: LayerBounds, keep?: { row: number; column: number }): void {
+    for (let r = block.top; r <= block.bottom; r++) {
+      const cells = this.rows.get(r);
+      if (cells === undefined) continue;
+      const last = Math.min(block.right, cells.length - 1);
+      for (let c = block.left; c <= last; c++) {
+        if (cells[c] === undefined || (keep !== undefined && r === keep.row && c === keep.column)) continue;
+        cells[c] = undefined;
+        this.count--;
+      }
+      let end = cells.length;
+      while (end > 0 && cells[end - 1] === undefined) end--;
+      if (end === 0) this.rows.delete(r);
+      else cells.length = end;
+    }
+  }
+
+  /** Whether any cell of the block but the one at `keep` holds a value: each row looked up once. */
+  holdsAny(block: LayerBounds, keep?: { row: number; column: number }): boolean {
+    for (let r = block.top; r <= block.bottom; r++) {
+      const cells = this.rows.get(r);
+      if (cells === undefined) continue;
+      const last = Math.min(block.right, cells.length - 1);
+      for (let c = block.left; c <= last; c++) {
+        if (cells[c] !== undefined && (keep === undefined || r !== keep.row || c !== keep.column)) return true;
+      }
+    }
+    return false;
+  }
+
+  /** The grid's values written from (top, left) on, but at `keep`: set() a row at a time. */
+  setBlock(top: number, left: number, grid: readonly (readonly V[])[], keep?: { row: number; column: number }): void {
+    grid.forEach((values, i) => {
+      const r = top + i;
+      let cells = this.rows.get(r);
+      if (cells === undefined) {
+        cells = [];
+        this.rows.set(r, cells);
+      }
+      while (cells.length < left) cells.push(undefined);
+      for (let j = 0; j < values.length; j++) {
+        const c = left + j;
+        if (keep !== undefined && r === keep.row && c === keep.column) {
+          if (cells.length === c) cells.push(undefined);
+          continue;
+        }
+        if (cells[c] === undefined) this.count++;
+        if (cells.length === c) cells.push(values[j]);
+        else cells[c] = values[j];
+      }
+      let end = cells.length;
+      while (end > 0 && cells[end - 1] === undefined) end--;
+      if (end === 0) this.rows.delete(r);
+      else cells.length = end;
+    });
+  }
+
   *values(): Generator<V> {
     for (const cells of this.rows.values()) for (const value of cells) if (value !== undefined) yield value;
   }

@@ -546,9 +546,7 @@ export class PreviewWorkbook implements WorkbookModel {
   private clearSpill(formula: FormulaCell): void {
     if (formula.blocked) return;
     const { area, anchor } = formula;
-    for (let r = area.top; r <= area.bottom; r++) {
-      for (let c = area.left; c <= area.right; c++) if (r !== anchor.row || c !== anchor.column) anchor.sheet.spilled.delete(r, c);
-    }
+    anchor.sheet.spilled.deleteBlock(area, anchor);
   }
 
   /**
@@ -567,22 +565,14 @@ export class PreviewWorkbook implements WorkbookModel {
     formula.area = area;
     formula.blocked = false;
     if (!('grid' in result)) return;
-    const occupied = (r: number, c: number): boolean =>
-      (r !== row || c !== column) && (sheet.inputs.has(r, c) || sheet.formulas.has(r, c) || (!sameSpill && sheet.spilled.has(r, c)));
-    for (let r = area.top; r <= area.bottom; r++) {
-      for (let c = area.left; c <= area.right; c++) {
-        if (occupied(r, c)) {
-          if (sameSpill) this.clearSpill(formula);
-          formula.blocked = true;
-          return;
-        }
-      }
+    const anchor = { row, column };
+    const taken = sheet.inputs.holdsAny(area, anchor) || sheet.formulas.holdsAny(area, anchor) || (!sameSpill && sheet.spilled.holdsAny(area, anchor));
+    if (taken) {
+      if (sameSpill) this.clearSpill(formula);
+      formula.blocked = true;
+      return;
     }
-    grid.forEach((cells, i) =>
-      cells.forEach((value, j) => {
-        if (i !== 0 || j !== 0) sheet.spilled.set(row + i, column + j, value);
-      }),
-    );
+    sheet.spilled.setBlock(row, column, grid, anchor);
   }
 }
 

@@ -5,7 +5,7 @@ import { fieldTools, type SectionProps } from './sectionProps';
 
 const ROBUST_OPTIONS: { value: PaneChoices['robust']; label: string }[] = [
   { value: 'classical', label: 'Classical (constant spread)' },
-  { value: 'HC3', label: 'Robust HC3 (recommended when spread varies)' },
+  { value: 'HC3', label: 'Robust HC3 (when spread varies)' },
   { value: 'HC1', label: 'Robust HC1' },
   { value: 'HC0', label: 'Robust HC0' },
 ];

@@ -43,4 +43,40 @@ describe('cell layer', () => {
     layer.delete(9, 1);
     expect(layer.bounds()).toEqual({ top: 2, left: 4, bottom: 5, right: 6 });
   });
+
+  it('empties a block but the cell it keeps, leaving cells beside it, and trims each row once', () => {
+    const layer = new CellLayer<number>();
+    for (let r = 0; r < 4; r++) for (let c = 0; c < 5; c++) layer.set(r, c, 10 * r + c);
+    layer.deleteBlock({ top: 1, left: 1, bottom: 3, right: 4 }, { row: 1, column: 1 });
+    expect(layer.size).toBe(5 + 1 + 1 + 1 + 1);
+    expect(layer.row(0)).toEqual([0, 1, 2, 3, 4]);
+    expect(layer.row(1)).toEqual([10, 11]);
+    expect(layer.row(2)).toEqual([20]);
+    expect(layer.row(3)).toEqual([30]);
+    layer.deleteBlock({ top: 2, left: 0, bottom: 9, right: 9 });
+    expect(layer.row(2)).toBeUndefined();
+    expect(layer.size).toBe(7);
+    expect(layer.bounds()).toEqual({ top: 0, left: 0, bottom: 1, right: 4 });
+  });
+
+  it('writes a block row by row but the cell it keeps, and says whether a block holds any cell', () => {
+    const layer = new CellLayer<number>();
+    layer.set(2, 0, 99);
+    layer.setBlock(
+      1,
+      1,
+      [
+        [11, 12, 13],
+        [21, 22, 23],
+      ],
+      { row: 1, column: 1 },
+    );
+    expect(layer.row(1)).toEqual([undefined, undefined, 12, 13]);
+    expect(layer.row(2)).toEqual([99, 21, 22, 23]);
+    expect(layer.size).toBe(6);
+    expect(layer.holdsAny({ top: 0, left: 0, bottom: 1, right: 1 })).toBe(false);
+    expect(layer.holdsAny({ top: 2, left: 0, bottom: 2, right: 0 })).toBe(true);
+    expect(layer.holdsAny({ top: 2, left: 0, bottom: 2, right: 0 }, { row: 2, column: 0 })).toBe(false);
+    expect(layer.holdsAny({ top: 0, left: 3, bottom: 9, right: 9 })).toBe(true);
+  });
 });

@@ -75,6 +75,26 @@ describe('preview workbook', () => {
     expect(wb.valueAt(at('Planned batches', 1, 0))).toBe(22);
   });
 
+  it('shows #BUSY! while a returned promise is pending, then its grid; a promise overtaken by a later edit is dropped', async () => {
+    // A custom function may return a Promise, which Excel awaits ("Batch custom function calls for
+    // a remote service": each call returns a promise resolved when the batch answers; "Custom
+    // function sample using web worker"): how PLUMB's formula worker answers (src/functions/offThread).
+    const wb = setup();
+    const answers: ((grid: number[][]) => void)[] = [];
+    wb.registerFunction('LATER', () => new Promise<number[][]>((resolve) => answers.push(resolve)));
+    wb.setInputs('Data', 0, 3, [['=PLUMB.LATER(A1:B3)']]);
+    expect(wb.valueAt(at('Data', 0, 3))).toMatchObject({ error: '#BUSY!' });
+    wb.setInputs('Data', 2, 1, [[16]]);
+    expect(answers.length).toBe(2);
+    answers[1]([[2], [3]]);
+    answers[0]([[7], [7], [7]]);
+    await Promise.resolve();
+    await Promise.resolve();
+    expect(wb.valueAt(at('Data', 0, 3))).toBe(2);
+    expect(wb.valueAt(at('Data', 1, 3))).toBe(3);
+    expect(wb.valueAt(at('Data', 2, 3))).toBeNull();
+  });
+
   it('shows #SPILL! when the result would overwrite a cell, and spills once the cell is cleared', () => {
     const wb = setup();
     wb.setInputs('Data', 1, 3, [['in the way']]);
