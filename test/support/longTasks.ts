@@ -35,3 +35,16 @@ export function stopLongTaskRecording(page: Page): Promise<number[]> {
     return recorder.durations;
   });
 }
+
+/** The issue's bound on one task of the page's main thread (#15, target 6). */
+export const LONGEST_TASK_MS = 200;
+
+/** The tasks over the bound. */
+export function tooLong(durations: readonly number[]): number[] {
+  return durations.filter((ms) => ms > LONGEST_TASK_MS);
+}
+
+/** Every long task recorded, for the failure message. */
+export function listed(durations: readonly number[]): string {
+  return `long tasks (ms): ${durations.map((ms) => ms.toFixed(0)).join(', ') || 'none'}`;
+}

@@ -5,6 +5,7 @@
  * read back through the Excel API as the add-in reads a cell.
  */
 import type { Page } from 'playwright-core';
+import { type BrowserSession, openPage } from './browser';
 import { cellAddress, columnLetters } from '../../src/addressing/a1';
 import { generateColumns } from '../../scripts/benchData';
 
@@ -17,6 +18,14 @@ const ROWS_PER_WRITE = 2_500;
 /** The generated numbers: x column-major (column j at j·WIDE_ROWS), y. */
 export function wideData(): { x: Float64Array; y: Float64Array } {
   return generateColumns(WIDE_ROWS, WIDE_PREDICTORS);
+}
+
+/** A fresh preview page, its demo loaded, with the data written on WIDE_SHEET. */
+export async function openWideSheet(origin: string): Promise<BrowserSession> {
+  const session = await openPage(`${origin}/preview.html`);
+  await session.page.waitForFunction(() => document.querySelector('[data-cell="A3"]')?.textContent === 'Intercept');
+  await writeWideSheet(session.page);
+  return session;
 }
 
 /** Header row then data rows on WIDE_SHEET: y in column A, x1…x20 from column B. */

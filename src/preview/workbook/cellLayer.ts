@@ -50,6 +50,11 @@ export class CellLayer<V> {
     if (cells?.[column] === undefined) return;
     cells[column] = undefined;
     this.count--;
+    this.trim(row, cells);
+  }
+
+  /** The row's trailing empty cells dropped, and the row itself when none is left. */
+  private trim(row: number, cells: (V | undefined)[]): void {
     let end = cells.length;
     while (end > 0 && cells[end - 1] === undefined) end--;
     if (end === 0) this.rows.delete(row);
@@ -71,10 +76,7 @@ export class CellLayer<V> {
         cells[c] = undefined;
         this.count--;
       }
-      let end = cells.length;
-      while (end > 0 && cells[end - 1] === undefined) end--;
-      if (end === 0) this.rows.delete(r);
-      else cells.length = end;
+      this.trim(r, cells);
     }
   }
 
@@ -111,10 +113,7 @@ export class CellLayer<V> {
         if (cells.length === c) cells.push(values[j]);
         else cells[c] = values[j];
       }
-      let end = cells.length;
-      while (end > 0 && cells[end - 1] === undefined) end--;
-      if (end === 0) this.rows.delete(r);
-      else cells.length = end;
+      this.trim(r, cells);
     });
   }
 

@@ -11,17 +11,13 @@
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { cellAddress, columnLetters } from '../../../src/addressing/a1';
 import { type BrowserSession, chromiumAvailable, openPage } from '../../support/browser';
-import { startLongTaskRecording, stopLongTaskRecording } from '../../support/longTasks';
+import { listed, startLongTaskRecording, stopLongTaskRecording, tooLong } from '../../support/longTasks';
 import { DATA_SHEET, EDITED_CELL, LIVE_SHAPE, liveDataRows, liveFormulas, liveNewRows, NEW_SHEET, REPORT_SHEET } from '../../support/liveWorkbook';
 import { goTo } from '../../support/previewPage';
 
 const available = chromiumAvailable();
-const LONGEST_TASK_MS = 200;
 /** Rows per write, each its own sync, as an add-in writing this much would split it. */
 const ROWS_PER_WRITE = 2_500;
-
-const tooLong = (durations: readonly number[]) => durations.filter((ms) => ms > LONGEST_TASK_MS);
-const listed = (durations: readonly number[]) => `long tasks (ms): ${durations.map((ms) => ms.toFixed(0)).join(', ') || 'none'}`;
 
 describe.skipIf(!available)('no long task at the live size', { timeout: 120_000 }, () => {
   let session: BrowserSession;

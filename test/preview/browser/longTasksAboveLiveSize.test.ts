@@ -11,16 +11,12 @@
  */
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { columnLetters } from '../../../src/addressing/a1';
-import { type BrowserSession, chromiumAvailable, openPage } from '../../support/browser';
-import { startLongTaskRecording, stopLongTaskRecording } from '../../support/longTasks';
-import { WIDE_PREDICTORS, WIDE_ROWS, WIDE_SHEET, writeWideSheet } from '../../support/wideSheet';
+import { type BrowserSession, chromiumAvailable } from '../../support/browser';
+import { listed, startLongTaskRecording, stopLongTaskRecording, tooLong } from '../../support/longTasks';
+import { WIDE_PREDICTORS, WIDE_ROWS, WIDE_SHEET, openWideSheet } from '../../support/wideSheet';
 
 const available = chromiumAvailable();
-const LONGEST_TASK_MS = 200;
 const ROWS = WIDE_ROWS;
-
-const tooLong = (durations: readonly number[]) => durations.filter((ms) => ms > LONGEST_TASK_MS);
-const listed = (durations: readonly number[]) => `long tasks (ms): ${durations.map((ms) => ms.toFixed(0)).join(', ') || 'none'}`;
 
 describe.skipIf(!available)('no long task above the live size, in the pane', { timeout: 240_000 }, () => {
   let session: BrowserSession;
@@ -28,9 +24,7 @@ describe.skipIf(!available)('no long task above the live size, in the pane', { t
   const page = () => session.page;
 
   beforeAll(async () => {
-    session = await openPage(`${origin}/preview.html`);
-    await page().waitForFunction(() => document.querySelector('[data-cell="A3"]')?.textContent === 'Intercept');
-    await writeWideSheet(page());
+    session = await openWideSheet(origin);
   }, 240_000);
   afterAll(async () => {
     await session?.close();

@@ -11,21 +11,17 @@
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { cellAddress, columnLetters } from '../../../src/addressing/a1';
 import { fitModel } from '../../../src/engine';
-import { type BrowserSession, chromiumAvailable, openPage } from '../../support/browser';
-import { startLongTaskRecording, stopLongTaskRecording } from '../../support/longTasks';
-import { cellValue, wideData, WIDE_PREDICTORS, WIDE_ROWS, WIDE_SHEET, writeWideSheet } from '../../support/wideSheet';
+import { type BrowserSession, chromiumAvailable } from '../../support/browser';
+import { listed, startLongTaskRecording, stopLongTaskRecording, tooLong } from '../../support/longTasks';
+import { cellValue, wideData, WIDE_PREDICTORS, WIDE_ROWS, WIDE_SHEET, openWideSheet } from '../../support/wideSheet';
 
 const available = chromiumAvailable();
-const LONGEST_TASK_MS = 200;
 const ROWS = WIDE_ROWS;
 const PREDICTORS = WIDE_PREDICTORS;
 const SHEET = WIDE_SHEET;
 const FORMULA_SHEET = 'Formulas';
 /** Columns between formula anchors: wider than any of their results. */
 const BAND = 16;
-
-const tooLong = (durations: readonly number[]) => durations.filter((ms) => ms > LONGEST_TASK_MS);
-const listed = (durations: readonly number[]) => `long tasks (ms): ${durations.map((ms) => ms.toFixed(0)).join(', ') || 'none'}`;
 
 describe.skipIf(!available)('no long task above the live size, in the cells', { timeout: 240_000 }, () => {
   let session: BrowserSession;
@@ -35,9 +31,7 @@ describe.skipIf(!available)('no long task above the live size, in the cells', { 
   const cellOf = (sheet: string, row: number, column: number) => cellValue(page(), sheet, row, column);
 
   beforeAll(async () => {
-    session = await openPage(`${origin}/preview.html`);
-    await page().waitForFunction(() => document.querySelector('[data-cell="A3"]')?.textContent === 'Intercept');
-    await writeWideSheet(page());
+    session = await openWideSheet(origin);
   }, 240_000);
   afterAll(async () => {
     await session?.close();

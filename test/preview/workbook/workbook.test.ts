@@ -76,9 +76,10 @@ describe('preview workbook', () => {
   });
 
   it('shows #BUSY! while a returned promise is pending, then its grid; a promise overtaken by a later edit is dropped', async () => {
-    // A custom function may return a Promise, which Excel awaits ("Batch custom function calls for
-    // a remote service": each call returns a promise resolved when the batch answers; "Custom
-    // function sample using web worker"): how PLUMB's formula worker answers (src/functions/offThread).
+    // A custom function may return a Promise, which Excel awaits, the cell showing #BUSY! meanwhile
+    // ("Receive and handle data with custom functions"; "Batch custom function calls for a remote
+    // service": each call returns a promise resolved when the batch answers; "Custom function sample
+    // using web worker"): how PLUMB's formula worker answers (src/functions/offThread).
     const wb = setup();
     const answers: ((grid: number[][]) => void)[] = [];
     wb.registerFunction('LATER', () => new Promise<number[][]>((resolve) => answers.push(resolve)));
