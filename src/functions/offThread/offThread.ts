@@ -76,6 +76,8 @@ function formulaWorker(): Worker {
     for (const waiting of pending.values())
       waiting.reject(errorValue('#VALUE!', `Plumbline's background calculation stopped (${event.message}). Recalculate to try again.`));
     pending.clear();
+    // The next large call starts a fresh worker.
+    started.terminate();
     worker = undefined;
   };
   worker = started;
