@@ -94,7 +94,6 @@ export function settingsHeader(n: number, p: number, settings: FitSettings | und
   return header;
 }
 
-/** x's first n rows, p numbers each, row-major; a missing number reads as NaN. */
 /**
  * The first n rows, p numbers each, row-major; a missing row or anything but a number reads as
  * NaN. wellShaped: every row was there with exactly p numbers, so the packing stands for the rows.

@@ -5,8 +5,8 @@
 import './noHostRegistration';
 import { type CellError, toCellError } from '../cellError';
 import * as cellFunctions from '../functions';
-import { gridOut } from './gridsInTransit';
-import { type FormulaAnswer, type FormulaRequest, requestArguments, runEveryCallHere } from './offThread';
+import { argumentIn, gridOut } from './gridsInTransit';
+import { type FormulaAnswer, type FormulaRequest, runEveryCallHere } from './offThread';
 
 runEveryCallHere();
 
@@ -18,7 +18,7 @@ export function answer(request: FormulaRequest): { answer: FormulaAnswer; transf
   try {
     if (typeof fn !== 'function') throw new Error(`there is no cell function ${request.name}`);
     const invocation = { parameterAddresses: request.parameterAddresses };
-    const { grid, transfer } = gridOut((fn as CellFunction)(...requestArguments(request), invocation));
+    const { grid, transfer } = gridOut((fn as CellFunction)(...request.args.map(argumentIn), invocation));
     return { answer: { id: request.id, grid }, transfer };
   } catch (error) {
     // The functions throw cell errors already; anything else is worded as they word a failure.

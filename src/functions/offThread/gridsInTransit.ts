@@ -25,6 +25,11 @@ function errorOut(value: object): ErrorInTransit | object {
   return message === undefined ? { errorInTransit: code } : { errorInTransit: code, message };
 }
 
+/** A cell as it is posted: an error value as its record, anything else as it is. */
+function errorRecord(value: unknown): unknown {
+  return typeof value === 'object' && value !== null ? errorOut(value) : value;
+}
+
 /**
  * A rectangular range on its way: its numbers in one transferred Float64Array, row-major, and
  * every other cell (text, booleans, blanks, errors as records) listed with its index. Packing is
@@ -55,10 +60,10 @@ function rectangularRows(argument: readonly unknown[]): number | undefined {
  * (RangeInTransit), any other array row by row with its error values as records, a scalar as itself.
  */
 export function argumentOut(argument: unknown): { value: unknown; transfer: ArrayBuffer[] } {
-  if (!Array.isArray(argument)) return { value: typeof argument === 'object' && argument !== null ? errorOut(argument) : argument, transfer: [] };
+  if (!Array.isArray(argument)) return { value: errorRecord(argument), transfer: [] };
   const columns = argument.length === 0 ? undefined : rectangularRows(argument);
   if (columns === undefined) {
-    const rows = argument.map((row: unknown) => (Array.isArray(row) ? row.map((cell: unknown) => errorRecord(cell)) : errorRecord(row)));
+    const rows = argument.map((row: unknown) => (Array.isArray(row) ? row.map(errorRecord) : errorRecord(row)));
     return { value: rows, transfer: [] };
   }
   const rows = argument.length;
@@ -123,10 +128,6 @@ export function gridOut(grid: readonly (readonly unknown[])[]): { grid: GridInTr
     }
   }
   return { grid: { widths, columns }, transfer };
-}
-
-function errorRecord(value: unknown): unknown {
-  return typeof value === 'object' && value !== null ? errorOut(value) : value;
 }
 
 /** The grid by rows again, each error record made into the host's error value by `errorValue`. */

@@ -11,14 +11,14 @@
  * its cache: equal inputs give bit-for-bit equal results on either thread.
  */
 import { errorValue, toCellError } from '../cellError';
-import { argumentIn, argumentOut, type GridInTransit, gridIn } from './gridsInTransit';
+import { argumentOut, type GridInTransit, gridIn } from './gridsInTransit';
 
 /**
  * Cells in a call's range arguments past which it runs off the main thread. A live report's eight
  * formulas over the live size (250,000 numbers of predictors: 275,000 to 300,000 cells a call)
  * held the preview's thread for 260–390 ms in one recalculation when run in place on this
- * machine class, and 100–150 ms from the worker (test/preview/browser/longTasks.test.ts); at this
- * bound a call costs a few milliseconds in place, less than the round trip.
+ * machine class, and 134–153 ms from the worker (test/preview/browser/longTasks.test.ts). At this
+ * bound (5,000 rows × 20) a call's own work in place is a few milliseconds.
  */
 export const OFF_THREAD_CELLS = 100_000;
 
@@ -114,9 +114,4 @@ export function offThreadWhenLarge(name: string, args: unknown[], invocation: Cu
   });
   // eslint-disable-next-line @typescript-eslint/no-explicit-any -- see above: Excel awaits the promise
   return promise as unknown as any[][];
-}
-
-/** The worker's side of a request: the arguments as the function reads them. */
-export function requestArguments(request: FormulaRequest): unknown[] {
-  return request.args.map(argumentIn);
 }

@@ -5,7 +5,7 @@
  * the very numbers of the engine run in Node, and their recalculation after one data edit holds
  * the page's main thread for no task over 200 ms (W3C Long Tasks API; Excel restarts an add-in
  * unresponsive for 5 s, Microsoft Learn, "Resource limits and performance optimization for Office
- * Add-ins"). Run in place, the same two formulas take one task of 230–320 ms here. On a fresh page
+ * Add-ins"). Run in place, the same two formulas took one task of 226–318 ms here. On a fresh page
  * of its own, so that the pane's work in longTasksAboveLiveSize.test.ts leaves nothing to collect.
  */
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
